@@ -1,0 +1,41 @@
+import { sveltekit } from '@sveltejs/kit/vite';
+import { SvelteKitPWA } from '@vite-pwa/sveltekit';
+import { defineConfig } from 'vite';
+import { appManifest } from './src/lib/pwa/manifest';
+
+export default defineConfig({
+	plugins: [
+		sveltekit(),
+		SvelteKitPWA({
+			// The user decides when to reload: a silent update could drop a half-filled check.
+			registerType: 'prompt',
+			// Registration happens in the root layout through virtual:pwa-register/svelte.
+			injectRegister: false,
+			manifest: appManifest,
+			kit: {
+				// Must match kit's own trailingSlash (default 'never') so precached URLs equal requested URLs.
+				trailingSlash: 'never',
+				adapterFallback: '200.html',
+				includeVersionFile: true
+			},
+			workbox: {
+				globPatterns: [
+					'client/**/*.{js,css,ico,png,svg,webp,webmanifest}',
+					'prerendered/**/*.{html,json}'
+				],
+				// The app shell answers any navigation offline, so unknown paths show our not-found page.
+				navigateFallback: '/200.html',
+				// A first visit must be controlled by the worker, or the page is never offline-capable.
+				clientsClaim: true,
+				cleanupOutdatedCaches: true
+			}
+		})
+	],
+	test: {
+		include: ['test/{unit,validation,properties,storage}/**/*.test.ts'],
+		environment: 'node',
+		// Every test must assert something: a test that cannot fail is a defect.
+		expect: { requireAssertions: true },
+		testTimeout: 60_000
+	}
+});
