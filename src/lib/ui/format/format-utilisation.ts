@@ -12,6 +12,7 @@ export function formatUtilisation(u: number): string {
 	if (!Number.isFinite(u)) return NO_VALUE;
 	const percent = u * 100;
 	const whole = Math.round(percent);
+	// Rounded up, never down: binary noise may add 0.1, which errs on the safe side.
 	if (u > 1 && whole <= 100) return `${(Math.ceil(percent * 10) / 10).toFixed(1)}%`;
 	return `${whole === 0 ? 0 : whole}%`;
 }
