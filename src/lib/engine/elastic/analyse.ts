@@ -1,0 +1,159 @@
+/**
+ * Elastic analysis of a beam line by the stiffness method, with exact fields inside each span.
+ */
+import { assertFinite, type Checked } from '../model/issue';
+import type { BeamLine } from '../model/types';
+import { computeNodePositions, splitLoadsBySpan } from './element-loads';
+import { listBreakpoints, readElement, type ElementData } from './element-field';
+import { findAbsoluteExtreme, listMomentCandidates } from './extremes';
+import { findMechanismIssues } from './mechanism';
+import { solveStiffness } from './stiffness';
+import type { ElasticDiagramPoint, ElasticInput, ElasticResult, ElasticState, LocatedValue, NodeReaction, Side } from './types';
+
+/** Sample intervals per span in the diagram, besides the load breakpoints. */
+const DIAGRAM_SAMPLES = 24;
+
+/**
+ * Analyses a beam line elastically (small deflections, Euler–Bernoulli, no shear deformation).
+ * Returns issues instead of a result when the beam is a mechanism.
+ * @param input beam (mm), EI per span (N·mm²), loads (N, N/mm, downward +)
+ * @example
+ * const r = analyseElastic({ beam: { spans: [6000], supports: ['pin', 'pin'], joints: [] },
+ *   EI: [210000 * 8.5e7], loads: [{ kind: 'uniform', from: 0, to: 6000, value: 4, action: 'permanent' }] });
+ * r.ok && r.value.maxDeflection.overall.value // 5wL⁴/384EI ≈ 3.78 mm
+ */
+export function analyseElastic(input: ElasticInput): Checked<ElasticResult> {
+	const { beam, EI, loads } = input;
+	assertBeamShape(beam, EI);
+	const issues = findMechanismIssues(beam);
+	if (issues.length > 0) return { ok: false, issues };
+	const pieces = splitLoadsBySpan(beam, loads);
+	const solution = solveStiffness(beam, EI, pieces);
+	if (!solution) throw new Error('invariant: stiffness matrix singular for a stable beam line');
+	const nodes = computeNodePositions(beam);
+	const elements: ElementData[] = beam.spans.map((L, e) => ({
+		L,
+		EI: EI[e],
+		loads: pieces[e],
+		displacements: solution.endDisplacements[e],
+		forces: solution.endForces[e]
+	}));
+	const at = (x: number, side: Side = 'right'): ElasticState => {
+		const { e, s, sideUsed } = locate(nodes, x, side);
+		const st = readElement(elements[e], s, sideUsed);
+		return { x: nodes[e] + s, V: st.V, M: st.M, w: st.w, slope: st.slope };
+	};
+	const reactions = collectReactions(beam, nodes, solution, elements);
+	return {
+		ok: true,
+		warnings: [],
+		value: {
+			reactions,
+			at,
+			diagram: sampleDiagram(nodes, elements),
+			maxMoment: findMaxMoments(nodes, elements),
+			maxDeflection: findMaxDeflections(nodes, elements)
+		}
+	};
+}
+
+function assertBeamShape(beam: BeamLine, EI: number[]): void {
+	const n = beam.spans.length;
+	if (n < 1 || beam.supports.length !== n + 1 || beam.joints.length !== Math.max(0, n - 1))
+		throw new Error('invariant: beam line needs n spans, n + 1 supports and n − 1 joints');
+	if (EI.length !== n || EI.some((v) => !(v > 0) || !Number.isFinite(v)))
+		throw new Error('invariant: EI must be one positive finite value per span');
+	if (beam.spans.some((L) => !(L > 0) || !Number.isFinite(L)))
+		throw new Error('invariant: spans must be positive and finite');
+}
+
+/** Element index and local position of x; at a node `side` picks the element. */
+function locate(nodes: number[], x: number, side: Side): { e: number; s: number; sideUsed: Side } {
+	const last = nodes.length - 2;
+	const xc = Math.min(Math.max(x, 0), nodes[last + 1]);
+	for (let e = 0; e <= last; e++) {
+		const atEnd = xc === nodes[e + 1];
+		if (xc < nodes[e + 1] || (atEnd && (side === 'left' || e === last)))
+			return { e, s: xc - nodes[e], sideUsed: atEnd ? 'left' : side };
+	}
+	return { e: last, s: nodes[last + 1] - nodes[last], sideUsed: 'left' };
+}
+
+function collectReactions(
+	beam: BeamLine,
+	nodes: number[],
+	sol: NonNullable<ReturnType<typeof solveStiffness>>,
+	elements: ElementData[]
+): NodeReaction[] {
+	return nodes.map((x, i) => {
+		const sides: [number, number][] = [];
+		if (i > 0) sides.push([i - 1, 2]);
+		if (i < beam.spans.length) sides.push([i, 0]);
+		let force = 0;
+		let moment = 0;
+		for (const [e, k] of sides) {
+			if (sol.restrained.has(sol.dofs[e][k])) force += sol.endForces[e][k];
+			if (sol.restrained.has(sol.dofs[e][k + 1])) moment += sol.endForces[e][k + 1];
+		}
+		const beamMoment =
+			i > 0 ? readElement(elements[i - 1], elements[i - 1].L, 'left').M : readElement(elements[0], 0, 'right').M;
+		return {
+			node: i,
+			x,
+			force: assertFinite(force, 'reaction'),
+			moment: assertFinite(moment, 'reaction moment'),
+			beamMoment: assertFinite(beamMoment, 'support moment')
+		};
+	});
+}
+
+function sampleDiagram(nodes: number[], elements: ElementData[]): ElasticDiagramPoint[] {
+	const out: ElasticDiagramPoint[] = [];
+	elements.forEach((el, e) => {
+		const xs = new Set(listBreakpoints(el));
+		for (let k = 1; k < DIAGRAM_SAMPLES; k++) xs.add((el.L * k) / DIAGRAM_SAMPLES);
+		for (const s of [...xs].sort((a, b) => a - b)) {
+			const sides: Side[] = s === 0 ? ['right'] : s === el.L ? ['left'] : ['left', 'right'];
+			for (const side of sides) {
+				const st = readElement(el, s, side);
+				const prev = out[out.length - 1];
+				const point = { x: nodes[e] + s, V: st.V, M: st.M, w: st.w };
+				if (prev && prev.x === point.x && prev.V === point.V && prev.M === point.M) continue;
+				out.push(point);
+			}
+		}
+	});
+	for (const p of out) for (const v of [p.x, p.V, p.M, p.w]) assertFinite(v, 'diagram value');
+	return out;
+}
+
+function findMaxMoments(nodes: number[], elements: ElementData[]): ElasticResult['maxMoment'] {
+	let hi: LocatedValue = { x: 0, value: -Infinity };
+	let lo: LocatedValue = { x: 0, value: Infinity };
+	elements.forEach((el, e) => {
+		const field = { L: el.L, breakpoints: listBreakpoints(el), read: (s: number, side: Side) => readElement(el, s, side) };
+		for (const c of listMomentCandidates(field)) {
+			if (c.M > hi.value) hi = { x: nodes[e] + c.s, value: c.M };
+			if (c.M < lo.value) lo = { x: nodes[e] + c.s, value: c.M };
+		}
+	});
+	// Round-off at a pin is not a moment: ignore values below 1e-9 of the largest.
+	const tol = 1e-9 * Math.max(Math.abs(hi.value), Math.abs(lo.value));
+	return {
+		maxSagging: hi.value > tol ? { x: hi.x, value: assertFinite(hi.value, 'max moment') } : null,
+		maxHogging: lo.value < -tol ? { x: lo.x, value: assertFinite(lo.value, 'min moment') } : null
+	};
+}
+
+function findMaxDeflections(nodes: number[], elements: ElementData[]): ElasticResult['maxDeflection'] {
+	const spans = elements.map((el, e) => {
+		const ext = findAbsoluteExtreme(
+			(s) => readElement(el, s, 'right').w,
+			(s) => readElement(el, s, 'right').slope,
+			el.L
+		);
+		return { x: nodes[e] + ext.s, value: assertFinite(ext.value, 'deflection') };
+	});
+	const overall = spans.reduce((a, b) => (Math.abs(b.value) > Math.abs(a.value) ? b : a));
+	return { spans, overall };
+}
