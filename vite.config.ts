@@ -16,15 +16,15 @@ export default defineConfig({
 				// Must match kit's own trailingSlash (default 'never') so precached URLs equal requested URLs.
 				trailingSlash: 'never',
 				adapterFallback: '200.html',
-				includeVersionFile: true
+				includeVersionFile: true,
+				// Puts the 200.html shell in the precache so unknown paths work offline (kit's SPA fallback).
+				spa: true
 			},
 			workbox: {
 				globPatterns: [
 					'client/**/*.{js,css,ico,png,svg,webp,webmanifest}',
 					'prerendered/**/*.{html,json}'
 				],
-				// The app shell answers any navigation offline, so unknown paths show our not-found page.
-				navigateFallback: '/200.html',
 				// A first visit must be controlled by the worker, or the page is never offline-capable.
 				clientsClaim: true,
 				cleanupOutdatedCaches: true

@@ -1,0 +1,45 @@
+import { defineConfig, devices } from '@playwright/test';
+import { existsSync } from 'node:fs';
+
+/** Debian's chromium by default; CHROMIUM_PATH points elsewhere. No browser download is ever made. */
+const executablePath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+if (!existsSync(executablePath)) {
+	throw new Error(
+		`No browser at ${executablePath}. Install Debian's chromium (apt-get install chromium) ` +
+			'or set CHROMIUM_PATH to a Chromium or Chrome binary.'
+	);
+}
+
+export default defineConfig({
+	testDir: 'test/e2e',
+	testMatch: '**/*.e2e.ts',
+	outputDir: 'test-results/e2e',
+	fullyParallel: false,
+	// Two cores: one browser at a time keeps timings stable.
+	workers: 1,
+	retries: 0,
+	reporter: [['list'], ['json', { outputFile: 'test-results/e2e-results.json' }]],
+	timeout: 60_000,
+	use: {
+		...devices['Pixel 7'],
+		baseURL: 'http://localhost:4173',
+		serviceWorkers: 'allow',
+		launchOptions: {
+			executablePath,
+			args: [
+				'--no-sandbox',
+				'--disable-gpu',
+				'--disable-background-networking',
+				'--disable-component-update',
+				'--disable-sync',
+				'--no-first-run'
+			]
+		}
+	},
+	webServer: {
+		command: 'npx tsx src/cli/serve-build.ts',
+		url: 'http://localhost:4173',
+		reuseExistingServer: !process.env.CI,
+		env: { PORT: '4173', HOST: '127.0.0.1' }
+	}
+});
