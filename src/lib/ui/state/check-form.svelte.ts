@@ -1,0 +1,185 @@
+import type { UnitSystem } from '$lib/ui/format';
+import type { CaseFile, CaseLoad } from './case-file';
+import { createDemoCase } from './demo-case';
+import { describeField } from './field-kinds';
+import { readPath, shiftListKeys, writePath } from './field-path';
+import { formatFieldValue, parseFieldText } from './field-text';
+import type { CheckOutcome } from './check-outcome';
+
+/** What is kept as the draft: the case plus anything typed that is not (yet) a valid value. */
+export interface FormDraft {
+	case: CaseFile;
+	/** Typed texts by field path, in the display units below. */
+	texts: Record<string, string>;
+	units: UnitSystem;
+	/** The saved check being edited, if any. */
+	savedId: string | null;
+}
+
+/** How the form runs the engine and reports changes (for the draft). */
+export interface CheckFormOptions {
+	run: (c: CaseFile) => CheckOutcome;
+	onchange?: (draft: FormDraft) => void;
+	/** Quiet time after the last keystroke before the engine runs, ms. */
+	delay?: number;
+}
+
+/**
+ * The check being entered: the case (SI) as $state, the typed texts and their messages, and the
+ * outcome as $state.raw — computed once per valid change, after a short quiet time, never per
+ * keystroke twice.
+ */
+export class CheckForm {
+	case = $state<CaseFile>(createDemoCase());
+	texts = $state<Record<string, string>>({});
+	/** Messages found while typing (not a number, must be positive, not in the library …). */
+	local = $state<Record<string, string>>({});
+	outcome = $state.raw<CheckOutcome | null>(null);
+	units = $state<UnitSystem>('SI');
+	pending = $state(false);
+	savedId = $state<string | null>(null);
+	/** Messages by field path: typing problems first, then the engine's input issues. */
+	messages = $derived(mergeMessages(this.local, this.outcome, this.case));
+	/** Engine issues that belong to no single field. */
+	generalIssues = $derived(collectGeneral(this.outcome, this.case));
+	#options: CheckFormOptions;
+	#timer: ReturnType<typeof setTimeout> | undefined;
+
+	constructor(options: CheckFormOptions) {
+		this.#options = options;
+	}
+
+	/** The text shown in the field at `path`: what was typed, else the stored value in display units. */
+	text(path: string): string {
+		return this.texts[path] ?? formatFieldValue(readPath(this.case, path), describeField(path, this.case), this.units);
+	}
+
+	/** Takes typed text for a numeric field; a valid number goes into the case in SI. */
+	setText(path: string, text: string): void {
+		this.texts[path] = text;
+		const parsed = parseFieldText(text, describeField(path, this.case), this.units);
+		if (parsed.ok) {
+			writePath(this.case, path, parsed.value);
+			delete this.local[path];
+		} else {
+			this.local[path] = parsed.message;
+		}
+		this.schedule();
+	}
+
+	/** Records a message for a non-numeric field (or clears it with null). */
+	setMessage(path: string, message: string | null): void {
+		if (message === null) delete this.local[path];
+		else this.local[path] = message;
+	}
+
+	/** A structural change (choice, list item added, section mode); field texts are kept. */
+	update(mutate: (c: CaseFile) => void): void {
+		mutate(this.case);
+		this.schedule();
+	}
+
+	/** Forgets typed texts under a path prefix (after the fields there were rebuilt). */
+	forget(prefix: string): void {
+		for (const key of Object.keys(this.texts)) if (key.startsWith(prefix)) delete this.texts[key];
+		for (const key of Object.keys(this.local)) if (key.startsWith(prefix)) delete this.local[key];
+	}
+
+	addLoad(load: CaseLoad): void {
+		this.update((c) => c.loads.push(load));
+	}
+
+	removeLoad(index: number): void {
+		this.case.loads.splice(index, 1);
+		this.texts = shiftListKeys(this.texts, 'loads', index);
+		this.local = shiftListKeys(this.local, 'loads', index);
+		this.schedule();
+	}
+
+	/** Replaces the whole case (opened, restored, shared link, demo) and runs it at once. */
+	load(c: CaseFile, options: { savedId?: string | null; texts?: Record<string, string>; units?: UnitSystem } = {}): void {
+		this.case = c;
+		this.texts = {};
+		this.local = {};
+		this.savedId = options.savedId ?? null;
+		const typedIn = options.units ?? this.units;
+		const current = this.units;
+		this.units = typedIn;
+		for (const [path, text] of Object.entries(options.texts ?? {})) {
+			this.texts[path] = text;
+			const parsed = parseFieldText(text, describeField(path, c), typedIn);
+			if (!parsed.ok) this.local[path] = parsed.message;
+		}
+		this.setUnits(current);
+		this.runNow();
+	}
+
+	/** Switches display units: valid fields are re-shown from the SI case, which never changes. */
+	setUnits(units: UnitSystem): void {
+		if (units === this.units) return;
+		for (const key of Object.keys(this.texts)) if (!(key in this.local)) delete this.texts[key];
+		this.units = units;
+	}
+
+	/** A plain copy for the draft store. */
+	snapshot(): FormDraft {
+		return {
+			case: $state.snapshot(this.case) as CaseFile,
+			texts: { ...this.texts },
+			units: this.units,
+			savedId: this.savedId
+		};
+	}
+
+	/** Waits for a quiet moment, then runs the engine once (or clears the result while typing is wrong). */
+	schedule(): void {
+		clearTimeout(this.#timer);
+		this.#options.onchange?.(this.snapshot());
+		if (Object.keys(this.local).length > 0) {
+			this.outcome = null;
+			this.pending = false;
+			return;
+		}
+		this.pending = true;
+		this.#timer = setTimeout(() => this.runNow(), this.#options.delay ?? 200);
+	}
+
+	runNow(): void {
+		clearTimeout(this.#timer);
+		this.pending = false;
+		if (Object.keys(this.local).length > 0) {
+			this.outcome = null;
+			return;
+		}
+		this.outcome = this.#options.run($state.snapshot(this.case) as CaseFile);
+	}
+
+	dispose(): void {
+		clearTimeout(this.#timer);
+	}
+}
+
+function isFieldPath(c: CaseFile, path: string): boolean {
+	const value = readPath(c, path);
+	return value !== undefined && (value === null || typeof value !== 'object');
+}
+
+function mergeMessages(
+	local: Record<string, string>,
+	outcome: CheckOutcome | null,
+	c: CaseFile
+): Record<string, string> {
+	const merged: Record<string, string> = {};
+	if (outcome?.state === 'issues') {
+		for (const issue of outcome.issues) {
+			if (isFieldPath(c, issue.path)) merged[issue.path] ??= issue.message;
+		}
+	}
+	return { ...merged, ...local };
+}
+
+function collectGeneral(outcome: CheckOutcome | null, c: CaseFile): { path: string; message: string }[] {
+	if (outcome?.state !== 'issues') return [];
+	return outcome.issues.filter((issue) => !isFieldPath(c, issue.path));
+}
+

@@ -1,0 +1,38 @@
+import type { InputIssue } from '$lib/engine/model/issue';
+
+/**
+ * The parts of the engine's report the screens read (SI output units: m, kN, kN/m, kNm, mm).
+ * Declared here so the screens depend only on what they show; the engine's own report type must
+ * stay assignable to it (checked where the engine is called).
+ */
+export interface ReportView {
+	/** Design plastic moment per span, kNm. */
+	mpRd: number[];
+	collapse: {
+		status?: string;
+		loadFactor: number | null;
+		appliesTo: 'temporary' | 'all';
+		certified: boolean;
+		hinges: { x: number; moment: number }[];
+		mechanism: { name: string } | null;
+		diagram: { x: number[]; M: number[] } | null;
+		message?: string;
+	};
+	temporaryCapacity?: { total?: number | null } | null;
+	capacityCurve?: { points: { x: number; p: number }[]; min: { x: number; p: number } } | null;
+	checks?: { id: string; label?: string; utilisation: number; pass: boolean }[];
+	verdict?: 'pass' | 'fail' | 'outside-scope';
+	governing?: string | null;
+	/** λ − 1, as a fraction. */
+	reserve?: number | null;
+	summary?: { short: string; long: string };
+	notices: string[];
+	assumptions: string[];
+	engineVersion: string;
+}
+
+/** What the result panel shows: input problems, a report, or an internal failure. */
+export type CheckOutcome =
+	| { state: 'issues'; issues: InputIssue[] }
+	| { state: 'report'; report: ReportView; warnings: InputIssue[] }
+	| { state: 'error'; message: string };
