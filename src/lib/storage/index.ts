@@ -1,0 +1,29 @@
+/**
+ * Saved checks, drafts, settings and backups in IndexedDB. The only storage API the UI uses:
+ * open a store once with `openStore`, then pass it to the calls below. Every call returns an
+ * outcome union; none throws for an expected failure (full disk, closed or read-only store).
+ */
+export type { CaseFileLike } from './case-file';
+export { CASE_FORMAT, isCaseLike, readSectionDesignation } from './case-file';
+export { BACKUP_FORMAT, BACKUP_VERSION, DB_NAME, DB_VERSION, RECORD_SCHEMA_VERSION } from './constants';
+export type { OpenStoreOptions, OpenStoreResult, StoreStatus } from './db';
+export { CheckStore, openStore } from './db';
+export type { CheckRecord, ClockOptions, Place, Revision, StoreFailureReason, StoreResult } from './types';
+export type { CheckChanges, ListOptions, NewCheck, SavedCheck } from './records';
+export { duplicateCheck, getCheck, listChecks, saveCheck, updateCheck } from './records';
+export type { DeletedCheck } from './deletion';
+export { deleteCheck, purgeDeleted, undoDelete } from './deletion';
+export type { DraftInput, DraftRecord } from './drafts';
+export { clearDraft, loadDraft, saveDraft } from './drafts';
+export type { BackupFile, ExportOptions, ImportResult } from './backup';
+export { exportBackup, importBackup } from './backup';
+export type { PersistenceAnswer } from './persist';
+export {
+	markInstallExplained,
+	requestPersistence,
+	requestPersistenceOnce,
+	shouldExplainInstall
+} from './persist';
+export type { Combination, FactorSet, LateralRestraint, Settings, Theme } from './settings-model';
+export { BUILT_IN_FACTOR_SETS, DEFAULT_SETTINGS, listFactorSets, sanitizeSettings } from './settings-model';
+export { loadSettings, saveSettings } from './settings';

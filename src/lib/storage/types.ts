@@ -1,0 +1,59 @@
+import type { CaseFileLike } from './case-file';
+
+/** Where the beam is: free text fields, any of which may be empty. */
+export interface Place {
+	building: string;
+	level: string;
+	/** Grid reference, e.g. 'C/4–5'. */
+	grid: string;
+}
+
+/** An earlier state of a check, kept when its inputs or result were edited. */
+export interface Revision {
+	/** When this state was saved (ISO 8601, UTC). */
+	savedAt: string;
+	input: CaseFileLike;
+	/** The report as computed then (structured-cloneable), or null if none was computed. */
+	result: unknown;
+	engineVersion: string;
+}
+
+/** A saved check (record schema version 2). Dates are ISO 8601 strings in UTC. */
+export interface CheckRecord {
+	id: string;
+	schemaVersion: number;
+	title: string;
+	place: Place;
+	notes: string;
+	createdAt: string;
+	updatedAt: string;
+	/** Version of the engine that computed `result`. */
+	engineVersion: string;
+	/** The inputs, as a case file in SI (m, kN, kN/m, kNm). */
+	input: CaseFileLike;
+	/** The report as computed (structured-cloneable), or null if none was computed. */
+	result: unknown;
+	/** Earlier states, oldest first. */
+	revisions: Revision[];
+	/** Set when deleted (soft delete, so undo restores the record exactly); null otherwise. */
+	deletedAt: string | null;
+}
+
+/** Why a storage call failed. */
+export type StoreFailureReason =
+	| 'quota'
+	| 'read-only'
+	| 'closed'
+	| 'not-found'
+	| 'newer'
+	| 'storage';
+
+/** Outcome of a storage call: never an exception for an expected failure. */
+export type StoreResult<T> =
+	| { ok: true; value: T }
+	| { ok: false; reason: StoreFailureReason; message: string };
+
+/** Optional clock for calls that stamp a date (tests pass a fixed one). */
+export interface ClockOptions {
+	now?: Date;
+}
