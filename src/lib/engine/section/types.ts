@@ -65,3 +65,58 @@ export interface SectionProps {
 	/** Depth between fillets (I) or flat web depth (hollow), mm; 0 where not meaningful. */
 	d: number;
 }
+
+/** Hot-finished (EN 10210-2) or cold-formed (EN 10219-2) hollow section; sets the corner radii. */
+export type HollowProcess = 'hot' | 'cold';
+
+/**
+ * A section as written in a case file. All dimensions in mm; `mp` in kN·m, `mass` in kg/m.
+ * The known-Mp form is for anything the library cannot describe by its dimensions.
+ */
+export type SectionSpec =
+	| { designation: string }
+	| { shape: 'I'; h: number; b: number; tw: number; tf: number; r: number }
+	| { shape: 'welded-I'; h: number; b: number; tw: number; tf: number }
+	| { shape: 'RHS'; h: number; b: number; t: number; process?: HollowProcess }
+	| { shape: 'CHS'; d: number; t: number }
+	| { shape: 'flat'; h: number; b: number }
+	| { mp: number; mass?: number };
+
+/** Dimensions of any shape the library computes. */
+export type SectionDims = IDims | RhsDims | ChsDims | FlatDims;
+
+/** A standard section of the library, with its properties computed from its dimensions. */
+export interface LibrarySection {
+	/** Canonical designation, e.g. `UB 305x165x40`, `W12x26`, `SHS 100x100x5.0`. */
+	designation: string;
+	family: SectionFamily;
+	/** Product standard the dimensions come from, e.g. `BS 4-1:2005 / EN 10365:2017`. */
+	standard: string;
+	shape: SectionShape;
+	/** Dimensions, mm. */
+	dims: SectionDims;
+	props: SectionProps;
+	/** Nominal mass from the designation or the product table, kg/m, where one is published. */
+	nominalMass?: number;
+}
+
+/** A section ready for analysis: library, measured or known-Mp, after any section loss. */
+export interface ResolvedSection {
+	/** Canonical designation, or a description such as `I 300x150x7.1x10.7 (measured)`. */
+	designation: string;
+	family?: SectionFamily;
+	standard?: string;
+	shape: SectionShape;
+	/** Dimensions after loss, mm; null only for known-mp. */
+	dims: SectionDims | null;
+	/** Properties after loss; null only for known-mp. */
+	props: SectionProps | null;
+	/** Plastic moment given by the user, N·mm (known-mp only). */
+	mpKnown?: number;
+	/** Mass given by the user, kg/m (known-mp only). */
+	massKnown?: number;
+	/** Uniform thickness loss applied per exposed face, mm. */
+	loss: number;
+	/** Thickness that sets the grade's strength step (flange for rolled I), mm; 0 for known-mp. */
+	governingThickness: number;
+}

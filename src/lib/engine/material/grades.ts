@@ -1,0 +1,91 @@
+import type { Checked, InputIssue } from '../model/issue';
+import type { GradeSpec, SteelGrade } from './types';
+import { GRADE_ROWS } from './grade-table';
+import { REFUSED_MATERIALS, explainRefusedMaterial } from './refused';
+
+export type { GradeSpec, SteelGrade } from './types';
+
+/** Turns the way people write grades (`s275jr`, `A572 Gr 50`, `a992`) into a library id. */
+function normaliseGradeId(text: string): string {
+	const t = text.trim().toLowerCase().replace(/\s+/g, ' ');
+	if (/^s\s?(235|275|355|460)/.test(t)) return `S${t.match(/(235|275|355|460)/)![1]}`;
+	if (/^a\s?572/.test(t)) return 'A572-50';
+	if (/^(astm )?a\s?(36|992)$/.test(t.replace('astm ', ''))) return `A${t.match(/(36|992)$/)![1]}`;
+	return t.replace(/[\s_]+/g, '-');
+}
+
+function makeIssue(path: string, code: string, message: string): InputIssue {
+	return { path, code, message, severity: 'error' };
+}
+
+/** Resolves a user-entered fy (and optional fu), N/mm². */
+function resolveOwnValues(spec: { fy: number; fu?: number }): Checked<SteelGrade> {
+	const issues: InputIssue[] = [];
+	if (!Number.isFinite(spec.fy) || spec.fy <= 0 || spec.fy > 1000) {
+		issues.push(makeIssue('fy', 'fy-not-valid', 'fy must be a yield strength between 0 and 1000 N/mm².'));
+	}
+	if (spec.fu !== undefined && (!Number.isFinite(spec.fu) || spec.fu < spec.fy)) {
+		issues.push(makeIssue('fu', 'fu-not-valid', 'fu must be a number not less than fy (N/mm²).'));
+	}
+	if (issues.length > 0) return { ok: false, issues };
+	const fu = spec.fu ?? null;
+	// EN 1993-1-1 3.2.2(1) recommended ductility: fu/fy ≥ 1.10.
+	const ductile = fu === null || fu / spec.fy >= 1.1;
+	const warnings: InputIssue[] = ductile
+		? []
+		: [{ path: 'fu', code: 'steel-not-ductile', message: 'fu/fy is below 1.10 (EN 1993-1-1 3.2.2): plastic hinges may not be relied on.', severity: 'warning' }];
+	return {
+		ok: true,
+		value: {
+			id: 'user', name: `User-entered fy = ${spec.fy} N/mm²`, fy: spec.fy, fu,
+			standard: 'Entered by the user', source: '[user]', ductile, needsConfirmation: false,
+			note: fu === null ? 'fu not given: ductility (fu/fy ≥ 1.10) could not be checked.' : undefined
+		},
+		warnings
+	};
+}
+
+/**
+ * Resolves a grade for the governing thickness t (mm): fy and fu step down with thickness as the
+ * product standard gives them. Cast and wrought iron are refused with the reason.
+ * @example resolveGrade('S355', 19) // ok, fy 345 (EN 10025-2 Table 7, 16 < t ≤ 40)
+ * @example resolveGrade('cast-iron', 20) // not ok: issue 'material-not-ductile'
+ */
+export function resolveGrade(spec: GradeSpec, thickness: number): Checked<SteelGrade> {
+	if (typeof spec !== 'string') return resolveOwnValues(spec);
+	const id = normaliseGradeId(spec);
+	const refused = explainRefusedMaterial(id);
+	if (refused) return { ok: false, issues: [refused] };
+	const row = GRADE_ROWS.find((g) => g.id.toLowerCase() === id.toLowerCase());
+	if (!row) {
+		const known = GRADE_ROWS.map((g) => g.id).join(', ');
+		return { ok: false, issues: [makeIssue('', 'grade-unknown', `Unknown grade "${spec}". Known: ${known}, or give fy.`)] };
+	}
+	if (!Number.isFinite(thickness) || thickness < 0) {
+		throw new Error(`invariant: governing thickness must be finite and ≥ 0, got ${thickness}`);
+	}
+	const band = row.bands.find((b) => thickness <= b.upTo);
+	if (!band) {
+		const top = row.bands[row.bands.length - 1].upTo;
+		return { ok: false, issues: [makeIssue('', 'thickness-beyond-grade', `${row.name} is specified only up to ${top} mm thick; this element is ${thickness} mm.`)] };
+	}
+	const value: SteelGrade = {
+		id: row.id, name: row.name, fy: band.fy, fu: band.fu, standard: row.standard,
+		source: row.source, ductile: true, needsConfirmation: row.needsConfirmation ?? false, note: row.note
+	};
+	const warnings: InputIssue[] = value.needsConfirmation
+		? [{ path: '', code: 'grade-needs-confirmation', message: `${row.name}: fy = ${band.fy} N/mm² is a lower-bound default. ${row.note ?? ''}`.trim(), severity: 'warning' }]
+		: [];
+	return { ok: true, value, warnings };
+}
+
+/**
+ * The grades for a picker, refused materials last (choosing one explains the refusal).
+ * @example listGrades()[0] // { id: 'S235', name: 'S235 (EN 10025-2)', standard: 'EN 10025-2:2004 Table 7', refused: false }
+ */
+export function listGrades(): { id: string; name: string; standard: string; refused: boolean }[] {
+	return [
+		...GRADE_ROWS.map((g) => ({ id: g.id, name: g.name, standard: g.standard, refused: false })),
+		...Object.entries(REFUSED_MATERIALS).map(([id, m]) => ({ id, name: m.name, standard: '—', refused: true }))
+	];
+}
