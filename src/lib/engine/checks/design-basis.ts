@@ -1,0 +1,55 @@
+/**
+ * A design basis: the factor sets, resistances and member checks of one code. The collapse and
+ * elastic solvers know nothing of codes; everything code-specific sits behind this interface so
+ * a second basis (e.g. AISC 360 LRFD with ASCE 7 combinations) can be added beside `en1993`.
+ */
+import type { Combination } from './en1993/factors';
+import type { ScopeDecision, ScopeInput } from './en1993/scope';
+import type { ShearAreaInput } from './en1993/shear';
+import type { ReducedMomentInput } from './en1993/interaction';
+import type { LtbResistance } from './en1993/ltb-curves';
+import type { SectionShape } from '../section/types';
+import type { WebResistance, WebResistanceInput } from './en1993/web';
+
+/** Factor settings after defaults, as a basis reports them. */
+export interface BasisFactors {
+	/** Name of the factor set used, recorded in the result. */
+	set: string;
+	combinations: Combination[];
+	/** Resistance factors for cross-section and member checks. */
+	gammaM0: number;
+	gammaM1: number;
+	/** Every factor by name, for the long summary. */
+	table: Record<string, number>;
+}
+
+/** Everything a design basis supplies. */
+export interface DesignBasis<Settings> {
+	id: string;
+	/** Plain name, e.g. `EN 1990 / EN 1993-1-1 (recommended values)`. */
+	name: string;
+	resolveFactors(settings: Settings, options: { hasImposed: boolean }): BasisFactors;
+	decideRoute(input: ScopeInput): ScopeDecision;
+	/** Bending resistance for the route, N·mm. */
+	computeBendingResistance(o: { Wpl: number; Wel: number; fy: number; gammaM0: number; elastic: boolean }): number;
+	computeShearArea(input: ShearAreaInput): number | null;
+	computeShearResistance(o: { Av: number; fy: number; gammaM0: number }): number;
+	checkWebSlenderness(o: { hw: number; tw: number; fy: number; eta: number }): {
+		ratio: number;
+		limit: number;
+		needsShearBucklingCheck: boolean;
+	};
+	computeShearReduction(o: { vEd: number; vplRd: number }): number;
+	computeReducedMomentResistance(o: ReducedMomentInput): number;
+	computeLtbResistance(o: {
+		shape: SectionShape;
+		h: number;
+		b: number;
+		Wy: number;
+		fy: number;
+		mcr: number;
+		gammaM1: number;
+	}): LtbResistance & { method: string; curve: string };
+	computeWebResistance(o: WebResistanceInput): WebResistance;
+	computeStableLength(o: { fy: number; iz: number; h: number; tf: number; psi: number }): number | null;
+}

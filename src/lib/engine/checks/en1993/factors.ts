@@ -1,0 +1,133 @@
+/**
+ * Partial factors and combinations of actions, EN 1990 6.4.3.2 and Annex A1 Table A1.2(B)
+ * (STR, recommended values). The temporary action is the load being checked; existing imposed
+ * load on the beam is a second variable action. Each variable action leads in turn.
+ */
+
+/** Name of a factor set as written in a case file. */
+export type FactorSetName = 'en1990-6.10' | 'en1990-6.10ab' | 'custom';
+
+/** Factor settings as entered; missing values take the recommended ones. */
+export interface FactorSettings {
+	set: FactorSetName;
+	/** γG,sup, unfavourable permanent action (recommended 1.35). */
+	gammaGsup?: number;
+	/** γG,inf, favourable permanent action (recommended 1.00). */
+	gammaGinf?: number;
+	/** γQ for existing imposed load (recommended 1.5). */
+	gammaQ?: number;
+	/** Factor on the temporary action; defaults to γQ. */
+	gammaT?: number;
+	/** Reduction ξ on unfavourable permanent action in 6.10b (recommended 0.85). */
+	xi?: number;
+	/** ψ0 for accompanying imposed load (0.7, categories A–D). */
+	psi0?: number;
+	/** ψ0 for the temporary action when it accompanies; defaults to psi0. */
+	psi0T?: number;
+	/** Resistance factors γM0 and γM1 (recommended 1.00 both). */
+	gammaM0?: number;
+	gammaM1?: number;
+}
+
+/** One combination expression with its factors resolved. */
+export interface Combination {
+	/** `6.10`, `6.10a`, `6.10b` or `custom`, plus which action leads. */
+	name: string;
+	/** Factor on permanent action where unfavourable / favourable. */
+	gammaGsup: number;
+	gammaGinf: number;
+	/** Factor on existing imposed load where present. */
+	gammaImposed: number;
+	/** Factor on the temporary action. */
+	gammaTemporary: number;
+}
+
+/** Factors resolved from settings, with the combinations to try. */
+export interface ResolvedFactors {
+	set: FactorSetName;
+	gammaGsup: number;
+	gammaGinf: number;
+	gammaQ: number;
+	gammaT: number;
+	xi: number;
+	psi0: number;
+	psi0T: number;
+	gammaM0: number;
+	gammaM1: number;
+	combinations: Combination[];
+}
+
+/** EN 1990 Table A1.2(B) recommended values; EN 1993-1-1 6.1 NOTE 2B for γM0, γM1. */
+export const RECOMMENDED_FACTORS = {
+	gammaGsup: 1.35,
+	gammaGinf: 1.0,
+	gammaQ: 1.5,
+	xi: 0.85,
+	psi0: 0.7,
+	gammaM0: 1.0,
+	gammaM1: 1.0
+} as const;
+
+/**
+ * Resolves the factor set into the combination expressions to try; the worst one governs.
+ * With existing imposed load present, 6.10 and 6.10b are written twice, once with each variable
+ * action leading (EN 1990 6.4.3.2(3)); 6.10a applies ψ0 to both.
+ * @example
+ * resolveFactors({ set: 'en1990-6.10' }, { hasImposed: false }).combinations[0].gammaTemporary
+ * // 1.5
+ */
+export function resolveFactors(
+	settings: FactorSettings,
+	options: { hasImposed: boolean }
+): ResolvedFactors {
+	const r = RECOMMENDED_FACTORS;
+	const gammaQ = settings.gammaQ ?? r.gammaQ;
+	const psi0 = settings.psi0 ?? r.psi0;
+	const f = {
+		set: settings.set,
+		gammaGsup: settings.gammaGsup ?? r.gammaGsup,
+		gammaGinf: settings.gammaGinf ?? r.gammaGinf,
+		gammaQ,
+		gammaT: settings.gammaT ?? gammaQ,
+		xi: settings.xi ?? r.xi,
+		psi0,
+		psi0T: settings.psi0T ?? psi0,
+		gammaM0: settings.gammaM0 ?? r.gammaM0,
+		gammaM1: settings.gammaM1 ?? r.gammaM1
+	};
+	return { ...f, combinations: listCombinations(f, options.hasImposed) };
+}
+
+function listCombinations(f: Omit<ResolvedFactors, 'combinations'>, hasImposed: boolean) {
+	const g = (sup: number) => ({ gammaGsup: sup, gammaGinf: f.gammaGinf });
+	const leadT = (name: string, sup: number): Combination => ({
+		name: hasImposed ? `${name}, temporary leading` : name,
+		...g(sup),
+		gammaImposed: f.gammaQ * f.psi0,
+		gammaTemporary: f.gammaT
+	});
+	const leadQ = (name: string, sup: number): Combination => ({
+		name: `${name}, imposed leading`,
+		...g(sup),
+		gammaImposed: f.gammaQ,
+		gammaTemporary: f.gammaT * f.psi0T
+	});
+	if (f.set === 'custom') {
+		return [{ name: 'custom', ...g(f.gammaGsup), gammaImposed: f.gammaQ, gammaTemporary: f.gammaT }];
+	}
+	const out: Combination[] = [];
+	if (f.set === 'en1990-6.10') {
+		out.push(leadT('6.10', f.gammaGsup));
+		if (hasImposed) out.push(leadQ('6.10', f.gammaGsup));
+		return out;
+	}
+	out.push({
+		name: '6.10a',
+		...g(f.gammaGsup),
+		gammaImposed: f.gammaQ * f.psi0,
+		gammaTemporary: f.gammaT * f.psi0T
+	});
+	out.push(leadT('6.10b', f.xi * f.gammaGsup));
+	if (hasImposed) out.push(leadQ('6.10b', f.xi * f.gammaGsup));
+	return out;
+}

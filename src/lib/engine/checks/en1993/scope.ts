@@ -1,0 +1,87 @@
+/**
+ * The scope gate: which analysis route the verdict may rest on, by section class
+ * (EN 1993-1-1 5.5, 5.6 and 6.2), material ductility (3.2.2) and member stability at hinges
+ * (6.3.5), and what puts a beam outside this tool.
+ */
+import type { AnalysisRoute } from '../types';
+
+/** Section class of EN 1993-1-1 Table 5.2 for major-axis bending. */
+export type SectionClass = 1 | 2 | 3 | 4;
+
+/** Facts the gate decides on. */
+export interface ScopeInput {
+	sectionClass: SectionClass;
+	/** Steel with the ductility of EN 1993-1-1 3.2.2; false for cast or wrought iron. */
+	ductile: boolean;
+	/** False while an unknown or historic grade has not been confirmed by the user. */
+	gradeConfirmed: boolean;
+	/** hw/tw > 72ε/η: shear buckling to EN 1993-1-5 would be needed. */
+	needsShearBucklingCheck: boolean;
+	/** The plastic collapse solution was verified by statics (only read for Class 1). */
+	collapseCertified: boolean;
+	/**
+	 * Every hinge of the mechanism sits at a lateral restraint and the segments next to it are
+	 * within the stable length (6.3.5), or the flange is restrained throughout.
+	 */
+	hingesRestrained: boolean;
+}
+
+/** The route and the plain reasons for it. */
+export interface ScopeDecision {
+	route: AnalysisRoute;
+	reasons: string[];
+}
+
+/**
+ * Decides the analysis route.
+ * @example
+ * decideRoute({ sectionClass: 2, ductile: true, gradeConfirmed: true,
+ *   needsShearBucklingCheck: false, collapseCertified: true, hingesRestrained: true }).route
+ * // 'elastic-plastic-section'
+ */
+export function decideRoute(s: ScopeInput): ScopeDecision {
+	const out: string[] = [];
+	if (!s.ductile) {
+		out.push('The material is not ductile steel (cast or wrought iron): this tool does not assess it.');
+	}
+	if (!s.gradeConfirmed) out.push('The steel grade is unknown and has not been confirmed.');
+	if (s.sectionClass === 4) {
+		out.push('The section is Class 4 (slender, EN 1993-1-1 5.5): local buckling is outside this tool.');
+	}
+	if (s.needsShearBucklingCheck) {
+		out.push('The web needs a shear buckling check (hw/tw > 72ε/η, EN 1993-1-1 6.2.6(6)): outside this tool.');
+	}
+	if (out.length > 0) return { route: 'outside-scope', reasons: out };
+	if (s.sectionClass === 3) {
+		return {
+			route: 'elastic-first-yield',
+			reasons: ['Class 3 section: elastic analysis with the elastic resistance Wel·fy (EN 1993-1-1 6.2.5).']
+		};
+	}
+	if (s.sectionClass === 2) {
+		return {
+			route: 'elastic-plastic-section',
+			reasons: [
+				'Class 2 section: no rotation capacity for plastic hinges (EN 1993-1-1 5.6), so elastic analysis with the plastic resistance Wpl·fy, up to the first hinge.'
+			]
+		};
+	}
+	if (!s.hingesRestrained) {
+		return {
+			route: 'elastic-plastic-section',
+			reasons: [
+				'A plastic hinge would form where the compression flange is not restrained enough (EN 1993-1-1 6.3.5), so plastic analysis is not used: elastic analysis with the plastic resistance and the buckling resistance Mb,Rd.'
+			]
+		};
+	}
+	if (!s.collapseCertified) {
+		return {
+			route: 'outside-scope',
+			reasons: ['The plastic collapse solution could not be verified by statics.']
+		};
+	}
+	return {
+		route: 'plastic',
+		reasons: ['Class 1 section, ductile steel, hinges restrained: plastic collapse analysis (EN 1993-1-1 5.4.3, 5.6).']
+	};
+}
