@@ -1,4 +1,7 @@
 /** The command registry. Add a command by adding its module here. */
+import { sectionsCommand } from './sections';
+import { sectionCommand } from './section';
+
 export interface CliCommand {
 	/** One line for the usage text. */
 	summary: string;
@@ -6,4 +9,7 @@ export interface CliCommand {
 	run(args: string[]): Promise<number>;
 }
 
-export const commands: Record<string, CliCommand> = {};
+export const commands: Record<string, CliCommand> = {
+	sections: sectionsCommand,
+	section: sectionCommand
+};
