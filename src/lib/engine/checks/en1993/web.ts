@@ -54,7 +54,7 @@ export interface WebResistance {
  * χF = 0.5/λ̄F ≤ 1 (6.3).
  * @example
  * computeWebResistance({ type: 'a', hw: 283, tw: 6, bf: 165, tf: 10.2, fyw: 275, fyf: 275,
- *   E: 210e3, ss: 50, gammaM1: 1 }).fRd // ≈ 223e3 N
+ *   E: 210e3, ss: 50, gammaM1: 1 }).fRd // ≈ 270e3 N (305x165x40 UB)
  */
 export function computeWebResistance(o: WebResistanceInput): WebResistance {
 	const ss = Math.min(o.ss, o.hw);
