@@ -1,0 +1,49 @@
+import 'fake-indexeddb/auto';
+import { openStore, type CheckStore } from '../../src/lib/storage';
+
+let counter = 0;
+
+/** A database name no other test uses, so every test starts empty. */
+export function uniqueDbName(label: string): string {
+	counter += 1;
+	return `test-${label}-${counter}-${Math.random().toString(36).slice(2)}`;
+}
+
+/** Opens a fresh store or fails the test. */
+export async function openFreshStore(label: string): Promise<CheckStore> {
+	const opened = await openStore(uniqueDbName(label));
+	if (!opened.ok) throw new Error(`could not open test store: ${opened.message}`);
+	return opened.store;
+}
+
+/** A minimal case file (demo data, invented). */
+export function demoCase(designation = '305x165x40 UB', span = 6): {
+	format: 'hingepoint.case';
+	version: number;
+	beam: { section: { designation: string }; spans: number[] };
+	loads: unknown[];
+} {
+	return { format: 'hingepoint.case', version: 1, beam: { section: { designation }, spans: [span] }, loads: [] };
+}
+
+/**
+ * Makes every object-store `put` and `add` after the first `okWrites` throw QuotaExceededError,
+ * as a full disk does. Returns the function that removes the stub.
+ */
+export function stubWritesQuota(okWrites = 0): () => void {
+	const proto = globalThis.IDBObjectStore.prototype;
+	const original = { put: proto.put, add: proto.add };
+	let calls = 0;
+	const failing = (method: 'put' | 'add') =>
+		function (this: IDBObjectStore, value: unknown, key?: IDBValidKey) {
+			calls += 1;
+			if (calls > okWrites) throw new DOMException('The quota has been exceeded.', 'QuotaExceededError');
+			return original[method].call(this, value, key);
+		};
+	proto.put = failing('put');
+	proto.add = failing('add');
+	return () => {
+		proto.put = original.put;
+		proto.add = original.add;
+	};
+}
