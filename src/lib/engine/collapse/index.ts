@@ -1,0 +1,19 @@
+/**
+ * Exact plastic collapse of steel beam lines: the public API of the collapse solver.
+ * Internal units: mm, N, N/mm, N·mm. See ../README.md for the theory.
+ */
+export type {
+	CapacityCurve,
+	CapacityPoint,
+	CollapseDiagram,
+	CollapseProblem,
+	CollapseResult,
+	CollapseSolution,
+	Hinge,
+	MechanismSummary
+} from './types';
+export { solveCollapse } from './solve';
+export { computeCapacityCurve } from './capacity-curve';
+export { momentAt, shearAt } from './diagram';
+export { validateCollapseProblem } from './validate-problem';
+export { CERTIFY_GAP } from './certified-field';

@@ -1,0 +1,148 @@
+/**
+ * The static theorem as a semi-infinite linear program: maximise an objective (λ, or the margin
+ * under the fixed loads alone) over moment fields in equilibrium with |M| ≤ Mp at every x. It is
+ * solved on a finite set of points; the exact extremes of the resulting field on every interval
+ * are added wherever they reach the resistance, and the program is solved again, until the field
+ * is admissible everywhere. A point added at a peak makes the next field's peak move by the
+ * square of the distance, so the loop converges in a few rounds.
+ */
+import type { Side } from './load-effects';
+import { computeLoadMoment } from './load-effects';
+import { findStationaryPoints } from './extremes';
+import type { SolutionSpace } from './nullspace';
+import { solveLinearProgram } from './simplex';
+import { evaluateMoment, evaluateMomentBasis, type FieldModel } from './statics';
+import type { Interval, Station } from './stations';
+
+/** A point where |M| ≤ Mp is imposed. */
+export interface CheckPoint extends Station {
+	/** Row coefficients (over y) and right-hand sides of the sagging and hogging rows. */
+	rowSag: number[];
+	rowHog: number[];
+	hSag: number;
+	hHog: number;
+}
+
+/** Result of the static linear program. */
+export type StaticSolution =
+	| {
+			status: 'optimal';
+			/** Field unknowns z (last one is λ). */
+			z: number[];
+			/** Objective reached (λ, or the margin δ). */
+			objective: number;
+			points: CheckPoint[];
+			/** Dual values per point: [sagging, hogging], for the normalised rows. */
+			duals: [number, number][];
+			/** Largest exact value of M/Mp − (1 − margin) found on the final field. */
+			violation: number;
+	  }
+	| { status: 'unbounded' | 'infeasible' };
+
+/** What to maximise: λ, or a uniform margin δ with |M| ≤ (1 − δ)·Mp (λ held by the space). */
+export type StaticObjective = 'lambda' | 'margin';
+
+function makePoint(model: FieldModel, space: SolutionSpace, s: Station): CheckPoint {
+	const B = evaluateMomentBasis(model, s.x, s.side);
+	const M0 = -computeLoadMoment(model.fixedLoads, s.x) + dot(B, space.particular);
+	const BN = space.basis.map((v) => dot(B, v));
+	return {
+		...s,
+		rowSag: BN.map((v) => v / s.sag),
+		rowHog: BN.map((v) => -v / s.hog),
+		hSag: (s.sag - M0) / s.sag,
+		hHog: (s.hog + M0) / s.hog
+	};
+}
+
+function dot(a: number[], b: number[]): number {
+	let s = 0;
+	for (let i = 0; i < a.length; i++) s += a[i] * b[i];
+	return s;
+}
+
+/** Seeds: the stations, plus third points of loaded intervals so the program starts bounded. */
+function seedStations(stations: Station[], intervals: Interval[]): Station[] {
+	const seeds = [...stations];
+	for (const iv of intervals) {
+		if (!iv.loaded) continue;
+		for (const t of [1 / 3, 2 / 3]) {
+			seeds.push({ x: iv.from + t * (iv.to - iv.from), side: -1, sag: iv.sag, hog: iv.hog });
+		}
+	}
+	return seeds;
+}
+
+/** Solves the static program exactly (to rounding) by adding the field's peaks as points. */
+export function solveStaticProgram(options: {
+	model: FieldModel;
+	space: SolutionSpace;
+	stations: Station[];
+	intervals: Interval[];
+	objective: StaticObjective;
+}): StaticSolution {
+	const { model, space, stations, intervals, objective } = options;
+	const margin = objective === 'margin';
+	const points = seedStations(stations, intervals).map((s) => makePoint(model, space, s));
+	const d = space.basis.length;
+	const c = margin ? [...new Array<number>(d).fill(0), 1] : space.basis.map((v) => v[model.lambdaIndex]);
+	for (let round = 0; round < 60; round++) {
+		const G: number[][] = [];
+		const h: number[] = [];
+		for (const p of points) {
+			G.push(margin ? [...p.rowSag, 1] : p.rowSag, margin ? [...p.rowHog, 1] : p.rowHog);
+			h.push(p.hSag, p.hHog);
+		}
+		const lp = solveLinearProgram(G, h, c);
+		if (lp.status !== 'optimal') return { status: lp.status };
+		const y = margin ? lp.y.slice(0, d) : lp.y;
+		const z = space.particular.map((v, i) => v + dot(y, space.basis.map((b) => b[i])));
+		const limit = margin ? 1 - lp.y[d] : 1;
+		const peaks = findPeaks(model, z, intervals, limit);
+		const added = addNewPoints(points, peaks.near, (s) => makePoint(model, space, s));
+		if (added === 0 || round === 59) {
+			const duals = points.map((_, i) => [lp.w[2 * i], lp.w[2 * i + 1]] as [number, number]);
+			const violation = Math.max(peaks.worst, measureStations(model, z, stations, limit));
+			const objectiveValue = margin ? lp.y[d] : z[model.lambdaIndex];
+			return { status: 'optimal', z, objective: objectiveValue, points, duals, violation };
+		}
+	}
+	throw new Error('invariant: unreachable');
+}
+
+/** Interior peaks of the field that come within 1e-9 of the limit, and the worst excess. */
+function findPeaks(model: FieldModel, z: number[], intervals: Interval[], limit: number) {
+	const near: Station[] = [];
+	let worst = -Infinity;
+	for (const iv of intervals) {
+		for (const x of findStationaryPoints(model, z, iv)) {
+			const M = evaluateMoment(model, z, x, -1);
+			const ratio = M >= 0 ? M / iv.sag : -M / iv.hog;
+			worst = Math.max(worst, ratio - limit);
+			if (ratio > limit - 1e-9) near.push({ x, side: -1, sag: iv.sag, hog: iv.hog });
+		}
+	}
+	return { near, worst };
+}
+
+/** Largest M/Mp − limit at the stations. */
+export function measureStations(model: FieldModel, z: number[], stations: Station[], limit: number): number {
+	let worst = -Infinity;
+	for (const s of stations) {
+		const M = evaluateMoment(model, z, s.x, s.side);
+		worst = Math.max(worst, (M >= 0 ? M / s.sag : -M / s.hog) - limit);
+	}
+	return worst;
+}
+
+function addNewPoints(points: CheckPoint[], candidates: Station[], make: (s: Station) => CheckPoint): number {
+	let added = 0;
+	for (const s of candidates) {
+		if (points.some((p) => Math.abs(p.x - s.x) <= 1e-13)) continue;
+		points.push(make(s));
+		added++;
+	}
+	return added;
+}
+
+export type { Side };
