@@ -6,7 +6,7 @@ export type Theme = 'light' | 'dark' | 'contrast';
 /** EN 1990 combination rule for the ultimate limit state (STR). */
 export type Combination = '6.10' | '6.10a/b';
 /** Lateral restraint of the compression flange assumed for a new check. */
-export type LateralRestraint = 'full' | 'at-supports';
+export type LateralRestraint = 'continuous' | 'ends-only';
 
 /** A named set of partial and combination factors (all dimensionless). */
 export interface FactorSet {
@@ -70,7 +70,7 @@ export const DEFAULT_SETTINGS: Readonly<Settings> = {
 	activeFactorSetId: 'en1990-6.10',
 	deflectionLimit: 200,
 	// The cautious assumption: only the supports hold the compression flange.
-	defaultRestraint: 'at-supports',
+	defaultRestraint: 'ends-only',
 	userName: '',
 	company: '',
 	theme: 'light'
@@ -94,7 +94,7 @@ export function sanitizeSettings(raw: unknown): Settings {
 				: d.activeFactorSetId,
 		deflectionLimit: isPositive(s.deflectionLimit) ? (s.deflectionLimit as number) : d.deflectionLimit,
 		defaultRestraint:
-			s.defaultRestraint === 'full' || s.defaultRestraint === 'at-supports' ? s.defaultRestraint : d.defaultRestraint,
+			s.defaultRestraint === 'continuous' || s.defaultRestraint === 'ends-only' ? s.defaultRestraint : d.defaultRestraint,
 		userName: typeof s.userName === 'string' ? s.userName : d.userName,
 		company: typeof s.company === 'string' ? s.company : d.company,
 		theme: s.theme === 'light' || s.theme === 'dark' || s.theme === 'contrast' ? s.theme : d.theme

@@ -1,0 +1,98 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import {
+	buildShareLink,
+	compactKeys,
+	decodeCaseFromFragment,
+	encodeCaseToFragment,
+	expandKeys,
+	KEY_CODES
+} from '../../../src/lib/share';
+
+// Demo data, invented: a single span carrying a temporary point load.
+const demo = {
+	format: 'hingepoint.case' as const,
+	version: 1,
+	title: 'DEMO — hoist beam, café basement',
+	beam: {
+		spans: [4.8],
+		supports: ['pin', 'pin'],
+		section: { designation: 'UB 254x146x31' },
+		grade: 'S275',
+		restraint: { lateral: 'continuous', loadHeight: 'bottom-flange' }
+	},
+	loads: [
+		{ kind: 'uniform', from: 0, to: 4.8, value: 3.2, action: 'permanent' },
+		{ kind: 'point', x: 2.1, value: 12.625, action: 'temporary' }
+	],
+	factors: { set: 'en1990-6.10', permanent: 1.35, imposed: 1.5, temporary: 1.5 },
+	deflectionLimit: 200
+};
+
+// Any JSON object with the case header; JSON.parse(JSON.stringify(…)) keeps it to what JSON carries.
+const anyCase = fc
+	.dictionary(fc.string(), fc.jsonValue())
+	.map((rest) => JSON.parse(JSON.stringify({ ...rest, format: 'hingepoint.case', version: 1 })));
+
+describe('share links', () => {
+	it('reopen the same case (round trip, property)', () => {
+		fc.assert(
+			fc.property(anyCase, (caseFile) => {
+				const decoded = decodeCaseFromFragment(`#${encodeCaseToFragment(caseFile)}`);
+				expect(decoded).toEqual({ ok: true, value: caseFile, warnings: [] });
+			})
+		);
+	});
+
+	it('restore any key exactly, including keys that look like codes or __proto__ (property)', () => {
+		const codeLike = fc.constantFrom(...Object.values(KEY_CODES), '~', '~b', '__proto__', 'beam');
+		const obj = fc.dictionary(fc.oneof(fc.string(), codeLike), fc.jsonValue());
+		fc.assert(
+			fc.property(obj, (value) => {
+				const plain = JSON.parse(JSON.stringify(value));
+				expect(expandKeys(JSON.parse(JSON.stringify(compactKeys(plain))))).toEqual(plain);
+			})
+		);
+	});
+
+	it('is shorter than the plain base64url of the JSON', () => {
+		const fragment = encodeCaseToFragment(demo);
+		const plain = Buffer.from(JSON.stringify(demo), 'utf8').toString('base64url');
+		expect(fragment.length).toBeLessThan(plain.length * 0.8);
+	});
+
+	it('build a /check link whose fragment decodes', () => {
+		const link = buildShareLink('https://example.org/', demo);
+		const url = new URL(link);
+		expect(url.pathname).toBe('/check');
+		expect(decodeCaseFromFragment(url.hash)).toMatchObject({ ok: true, value: demo });
+	});
+
+	it('refuse a link cut anywhere short (property)', () => {
+		const payload = encodeCaseToFragment(demo);
+		fc.assert(
+			fc.property(fc.integer({ min: 0, max: payload.length - 1 }), (cut) => {
+				const decoded = decodeCaseFromFragment(payload.slice(0, cut));
+				expect(decoded.ok).toBe(false);
+			})
+		);
+	});
+
+	it('explain a missing, damaged, foreign or newer link', () => {
+		const code = (hash: string) => {
+			const decoded = decodeCaseFromFragment(hash);
+			return decoded.ok ? 'ok' : decoded.issues.map((i) => `${i.path}:${i.code}`).join();
+		};
+		const b64 = (value: unknown) => Buffer.from(JSON.stringify(value), 'utf8').toString('base64url');
+		expect(code('')).toBe('link:link-missing-case');
+		expect(code('#x=1')).toBe('link:link-missing-case');
+		expect(code('#c=abc')).toBe('link:link-damaged');
+		expect(code('#c=1.%%%')).toBe('link:link-damaged');
+		expect(code(`#c=1.${b64('just text')}`)).toBe('link:link-damaged');
+		expect(code(`#c=1.${b64({ b: {} })}`)).toBe('link:link-damaged');
+		expect(code(`#c=2.${b64({ v: 1 })}`)).toBe('link:link-newer');
+		expect(code(`#c=1.${b64({ v: 2 })}`)).toBe('link:link-newer');
+		const damaged = decodeCaseFromFragment('#c=1.@@');
+		expect(damaged.ok === false && damaged.issues[0].message).toMatch(/damaged or cut short/);
+	});
+});
