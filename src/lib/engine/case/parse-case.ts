@@ -1,0 +1,107 @@
+/**
+ * Reads and validates a case file once, at the door: every problem comes back as an InputIssue
+ * naming its field path, and a valid file becomes a CaseModel in internal units.
+ */
+import type { Checked, InputIssue } from '../model/issue';
+import type { Load } from '../model/types';
+import { massToLineLoad } from '../units';
+import { parseGeometry } from './parse-geometry';
+import { parseLoads } from './parse-loads';
+import { parseBearing, parseDeflectionLimit, parseFactors, parseRestraint } from './parse-options';
+import { parseSections } from './parse-section';
+import { addError, isRecord, readNumber, warnUnknownKeys } from './read-value';
+import { CASE_FORMAT, CASE_VERSION, type CaseFile, type CaseModel } from './types';
+
+const TOP_KEYS = ['format', 'version', 'title', 'beam', 'loads', 'factors', 'deflectionLimit'];
+const BEAM_KEYS = ['spans', 'supports', 'joints', 'section', 'grade', 'sectionLoss', 'selfWeight', 'restraint', 'bearing'];
+
+/**
+ * Validates a parsed JSON value as a case file and converts it to internal units.
+ * Unknown keys are warnings; everything else wrong is an error with its path.
+ * @example
+ * parseCase({ format: 'hingepoint.case', version: 1, beam: { spans: [-6], … }, loads: [] })
+ * // { ok: false, issues: [{ path: 'beam.spans[0]', code: 'not-positive', … }] }
+ */
+export function parseCase(json: unknown): Checked<CaseModel> {
+	const issues: InputIssue[] = [];
+	if (!isRecord(json)) {
+		addError(issues, '', 'not-an-object', 'A case file is a JSON object with format, version, beam and loads.');
+		return { ok: false, issues };
+	}
+	warnUnknownKeys(json, TOP_KEYS, '', issues);
+	checkHeader(json, issues);
+	const beam = isRecord(json.beam) ? json.beam : undefined;
+	if (!beam) addError(issues, 'beam', 'beam-missing', 'The case needs a "beam" object.');
+	else warnUnknownKeys(beam, BEAM_KEYS, 'beam', issues);
+	const b = beam ?? {};
+	const line = beam ? parseGeometry(b, issues) : undefined;
+	const spansM = readSpanList(b.spans);
+	const lengthM = spansM?.reduce((s, L) => s + L, 0);
+	const loss = b.sectionLoss === undefined ? 0 : readNumber(b.sectionLoss, 'beam.sectionLoss', issues, { label: 'section loss (mm per face)', min: 0 });
+	if (b.selfWeight !== undefined && typeof b.selfWeight !== 'boolean')
+		addError(issues, 'beam.selfWeight', 'not-a-boolean', 'selfWeight must be true or false.');
+	const materials = beam && loss !== undefined ? parseSections(b, spansM?.length, loss, issues, issues) : undefined;
+	const loads = parseLoads(json.loads, lengthM, issues);
+	const factors = parseFactors(json.factors, issues);
+	const restraint = parseRestraint(b.restraint, lengthM, issues);
+	const bearing = parseBearing(b.bearing, spansM ? spansM.length + 1 : undefined, issues);
+	const deflectionLimit = parseDeflectionLimit(json.deflectionLimit, issues);
+	const errors = issues.filter((i) => i.severity === 'error');
+	if (errors.length > 0 || !line || !materials || !loads || !factors || loss === undefined) {
+		if (errors.length === 0) throw new Error('invariant: an unusable case part recorded no error');
+		return { ok: false, issues: errors };
+	}
+	const selfWeight = b.selfWeight !== false;
+	const nodes = line.spans.reduce((xs, L) => [...xs, xs[xs.length - 1] + L], [0]);
+	const selfWeightLoads: Load[] = [];
+	const selfWeightMissing: number[] = [];
+	if (selfWeight) {
+		materials.sections.forEach((s, e) => {
+			const mass = s.props?.mass ?? s.massKnown;
+			if (mass === undefined) return void selfWeightMissing.push(e);
+			if (mass > 0) selfWeightLoads.push({ kind: 'uniform', from: nodes[e], to: nodes[e + 1], value: massToLineLoad(mass), action: 'permanent' });
+		});
+	}
+	const model: CaseModel = {
+		title: typeof json.title === 'string' ? json.title : '',
+		beam: line,
+		sections: materials.sections,
+		grades: materials.grades,
+		loads: loads.loads,
+		loadLabels: loads.labels,
+		selfWeightLoads,
+		selfWeightMissing,
+		selfWeight,
+		sectionLoss: loss,
+		factors,
+		...(restraint ? { restraint } : {}),
+		...(bearing ? { bearing } : {}),
+		...(deflectionLimit !== undefined ? { deflectionLimit } : {}),
+		file: echoFile(json)
+	};
+	return { ok: true, value: model, warnings: issues.filter((i) => i.severity === 'warning') };
+}
+
+function checkHeader(json: Record<string, unknown>, issues: InputIssue[]): void {
+	if (json.format !== CASE_FORMAT)
+		addError(issues, 'format', 'format-unknown', `This is not a case file: "format" must be "${CASE_FORMAT}".`);
+	if (typeof json.version === 'number' && json.version > CASE_VERSION)
+		addError(issues, 'version', 'version-newer', `Written by a newer version (${json.version}); this engine reads version ${CASE_VERSION}. Update the app.`);
+	else if (json.version !== CASE_VERSION)
+		addError(issues, 'version', 'version-unknown', `"version" must be ${CASE_VERSION}.`);
+	if (json.title !== undefined && typeof json.title !== 'string')
+		addError(issues, 'title', 'not-a-string', 'The title must be text.');
+}
+
+/** The span list in m when every entry is a positive finite number (issues come from parseGeometry). */
+function readSpanList(value: unknown): number[] | undefined {
+	if (!Array.isArray(value) || value.length === 0) return undefined;
+	return value.every((v) => typeof v === 'number' && Number.isFinite(v) && v > 0) ? (value as number[]) : undefined;
+}
+
+/** The known parts of the file, as read (file units), without unknown keys. */
+function echoFile(json: Record<string, unknown>): CaseFile {
+	const out: Record<string, unknown> = {};
+	for (const key of TOP_KEYS) if (json[key] !== undefined) out[key] = json[key];
+	return structuredClone(out) as unknown as CaseFile;
+}

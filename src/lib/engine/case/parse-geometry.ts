@@ -1,0 +1,74 @@
+/**
+ * Reads the beam geometry of a case file (spans in m, supports, joints) into a BeamLine in mm.
+ */
+import { findMechanismIssues } from '../elastic/mechanism';
+import type { InputIssue } from '../model/issue';
+import type { BeamLine, JointKind, SupportKind } from '../model/types';
+import { mToMm } from '../units';
+import { addError, readChoice, readNumber } from './read-value';
+
+const SUPPORTS: readonly SupportKind[] = ['pin', 'fixed', 'free'];
+const JOINTS: readonly JointKind[] = ['continuous', 'simple'];
+
+/**
+ * Validates spans, supports and joints; returns the beam line in mm when all are usable.
+ * @example
+ * parseGeometry({ spans: [6], supports: ['pin', 'pin'] }, issues) // { spans: [6000], … }
+ */
+export function parseGeometry(beam: Record<string, unknown>, issues: InputIssue[]): BeamLine | undefined {
+	const before = issues.length;
+	const spans = readSpans(beam.spans, issues);
+	const n = spans?.length;
+	const supports = readList(beam.supports, 'beam.supports', n === undefined ? undefined : n + 1, issues, (v, p) =>
+		readChoice(v, p, issues, SUPPORTS, 'support')
+	);
+	const joints =
+		beam.joints === undefined
+			? n === undefined
+				? undefined
+				: new Array<JointKind>(Math.max(0, n - 1)).fill('continuous')
+			: readList(beam.joints, 'beam.joints', n === undefined ? undefined : n - 1, issues, (v, p) =>
+					readChoice(v, p, issues, JOINTS, 'joint')
+				);
+	if (!spans || !supports || !joints || issues.length > before) return undefined;
+	supports.forEach((kind, i) => {
+		if (kind === 'free' && i > 0 && i < supports.length - 1)
+			addError(issues, `beam.supports[${i}]`, 'free-inside', 'Only the two ends of the beam may be free.');
+	});
+	if (supports.length === 2 && supports.every((s) => s === 'free'))
+		addError(issues, 'beam.supports', 'no-support', 'The beam needs at least one support.');
+	if (issues.length > before) return undefined;
+	const line: BeamLine = { spans: spans.map(mToMm), supports, joints };
+	const mech = findMechanismIssues(line);
+	issues.push(...mech);
+	return mech.length > 0 ? undefined : line;
+}
+
+function readSpans(value: unknown, issues: InputIssue[]): number[] | undefined {
+	if (!Array.isArray(value) || value.length === 0) {
+		addError(issues, 'beam.spans', 'spans-missing', 'Give the span lengths in m as a list, e.g. [6.0].');
+		return undefined;
+	}
+	const out = value.map((v, i) => readNumber(v, `beam.spans[${i}]`, issues, { label: 'span (m)', positive: true }));
+	return out.every((v): v is number => v !== undefined) ? out : undefined;
+}
+
+function readList<T>(
+	value: unknown,
+	path: string,
+	length: number | undefined,
+	issues: InputIssue[],
+	readItem: (v: unknown, p: string) => T | undefined
+): T[] | undefined {
+	if (!Array.isArray(value)) {
+		addError(issues, path, 'not-a-list', 'This must be a list.');
+		return undefined;
+	}
+	if (length !== undefined && value.length !== length) {
+		const what = path.endsWith('supports') ? 'one support per node (spans + 1)' : 'one joint per internal node (spans − 1)';
+		addError(issues, path, 'wrong-length', `Expected ${length} entries: ${what}; got ${value.length}.`);
+		return undefined;
+	}
+	const out = value.map((v, i) => readItem(v, `${path}[${i}]`));
+	return out.every((v): v is T => v !== undefined) ? out : undefined;
+}

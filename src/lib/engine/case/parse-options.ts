@@ -1,0 +1,120 @@
+/**
+ * Reads the optional parts of a case file: partial factors, lateral restraint, bearing lengths
+ * and the deflection limit. The member checks interpret the last three; here they are only
+ * validated as data and converted to mm.
+ */
+import type { InputIssue } from '../model/issue';
+import { mToMm } from '../units';
+import { addError, addWarning, isRecord, readChoice, readNumber, warnUnknownKeys } from './read-value';
+import type { CaseModel, ResolvedFactors } from './types';
+
+/**
+ * EN 1990 Table A1.2(B) recommended γG = 1.35, γQ = 1.5 for equation 6.10; temporary loads take
+ * γQ; EN 1993-1-1 6.1 NOTE 2B recommended γM0 = γM1 = 1.0.
+ */
+export const DEFAULT_FACTORS: Readonly<ResolvedFactors> = {
+	permanent: 1.35,
+	imposed: 1.5,
+	temporary: 1.5,
+	gammaM0: 1.0,
+	gammaM1: 1.0
+};
+
+const FACTOR_KEYS = ['permanent', 'imposed', 'temporary', 'gammaM0', 'gammaM1'] as const;
+/** Combination values the design checks read; passed through when given. */
+const EXTRA_KEYS = ['xi', 'psi0'] as const;
+
+/**
+ * Partial factors with defaults; `temporary` defaults to the imposed-load factor in use.
+ * @example parseFactors({ imposed: 1.6 }, issues).temporary // 1.6
+ */
+export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFactors | undefined {
+	if (value === undefined) return { ...DEFAULT_FACTORS };
+	if (!isRecord(value)) {
+		addError(issues, 'factors', 'not-an-object', 'The factors must be an object, e.g. {"permanent": 1.35}.');
+		return undefined;
+	}
+	warnUnknownKeys(value, [...FACTOR_KEYS, ...EXTRA_KEYS, 'set'], 'factors', issues);
+	const out: Partial<ResolvedFactors> = {};
+	let ok = true;
+	for (const key of FACTOR_KEYS) {
+		if (value[key] === undefined) continue;
+		const v = readNumber(value[key], `factors.${key}`, issues, { label: `factor ${key}`, positive: true });
+		if (v === undefined) ok = false;
+		else out[key] = v;
+	}
+	const extra: { xi?: number; psi0?: number } = {};
+	for (const key of EXTRA_KEYS) {
+		if (value[key] === undefined) continue;
+		const v = readNumber(value[key], `factors.${key}`, issues, { label: `factor ${key}`, min: 0 });
+		if (v === undefined) ok = false;
+		else extra[key] = v;
+	}
+	for (const key of ['gammaM0', 'gammaM1'] as const) {
+		if ((out[key] ?? 1) < 1)
+			addWarning(issues, `factors.${key}`, 'factor-below-one', `${key} below 1.0 is less safe than any code value.`);
+	}
+	if (value.set !== undefined && typeof value.set !== 'string') {
+		addError(issues, 'factors.set', 'not-a-string', 'The factor set must be given by its name.');
+		ok = false;
+	}
+	if (!ok) return undefined;
+	const imposed = out.imposed ?? DEFAULT_FACTORS.imposed;
+	return {
+		permanent: out.permanent ?? DEFAULT_FACTORS.permanent,
+		imposed,
+		temporary: out.temporary ?? imposed,
+		gammaM0: out.gammaM0 ?? DEFAULT_FACTORS.gammaM0,
+		gammaM1: out.gammaM1 ?? DEFAULT_FACTORS.gammaM1,
+		...extra,
+		...(typeof value.set === 'string' ? { set: value.set } : {})
+	};
+}
+
+/** Reads `beam.restraint`; positions in m become mm. */
+export function parseRestraint(value: unknown, length: number | undefined, issues: InputIssue[]): CaseModel['restraint'] {
+	if (value === undefined) return undefined;
+	if (!isRecord(value)) {
+		addError(issues, 'beam.restraint', 'not-an-object', 'The restraint must be an object with "lateral".');
+		return undefined;
+	}
+	warnUnknownKeys(value, ['lateral', 'loadHeight'], 'beam.restraint', issues);
+	const heights = ['top-flange', 'shear-centre', 'bottom-flange'] as const;
+	const loadHeight =
+		value.loadHeight === undefined
+			? undefined
+			: readChoice(value.loadHeight, 'beam.restraint.loadHeight', issues, heights, 'load height');
+	const lat = value.lateral;
+	if (lat === 'continuous' || lat === 'ends-only') return { lateral: lat, ...(loadHeight ? { loadHeight } : {}) };
+	if (!Array.isArray(lat)) {
+		addError(issues, 'beam.restraint.lateral', 'not-one-of', 'Lateral restraint: "continuous", "ends-only" or a list of positions in m.');
+		return undefined;
+	}
+	const xs = lat.map((v, i) => {
+		const x = readNumber(v, `beam.restraint.lateral[${i}]`, issues, { label: 'restraint position (m)', min: 0 });
+		if (x !== undefined && length !== undefined && x > length) {
+			addError(issues, `beam.restraint.lateral[${i}]`, 'off-beam', `The position ${x} m is beyond the beam end (${length} m).`);
+			return undefined;
+		}
+		return x;
+	});
+	if (xs.some((x) => x === undefined)) return undefined;
+	return { lateral: (xs as number[]).map(mToMm).sort((a, b) => a - b), ...(loadHeight ? { loadHeight } : {}) };
+}
+
+/** Reads `beam.bearing`: one stiff bearing length per support, mm, zero or more. */
+export function parseBearing(value: unknown, supports: number | undefined, issues: InputIssue[]): number[] | undefined {
+	if (value === undefined) return undefined;
+	if (!Array.isArray(value) || (supports !== undefined && value.length !== supports)) {
+		addError(issues, 'beam.bearing', 'wrong-length', 'Give one bearing length (mm) per support.');
+		return undefined;
+	}
+	const out = value.map((v, i) => readNumber(v, `beam.bearing[${i}]`, issues, { label: 'bearing length (mm)', min: 0 }));
+	return out.every((v): v is number => v !== undefined) ? out : undefined;
+}
+
+/** Reads `deflectionLimit`: the n of span/n. */
+export function parseDeflectionLimit(value: unknown, issues: InputIssue[]): number | undefined {
+	if (value === undefined) return undefined;
+	return readNumber(value, 'deflectionLimit', issues, { label: 'deflection limit (span divided by)', positive: true });
+}

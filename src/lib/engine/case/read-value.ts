@@ -1,0 +1,76 @@
+/**
+ * Small readers for untrusted JSON values: each records an InputIssue at the given path instead
+ * of throwing, and returns undefined when the value is unusable.
+ */
+import type { InputIssue } from '../model/issue';
+
+/** True for a plain object (not null, not an array). */
+export function isRecord(value: unknown): value is Record<string, unknown> {
+	return typeof value === 'object' && value !== null && !Array.isArray(value);
+}
+
+/** Appends an error issue. */
+export function addError(issues: InputIssue[], path: string, code: string, message: string): void {
+	issues.push({ path, code, message, severity: 'error' });
+}
+
+/** Appends a warning issue. */
+export function addWarning(issues: InputIssue[], path: string, code: string, message: string): void {
+	issues.push({ path, code, message, severity: 'warning' });
+}
+
+/** Limits for `readNumber`. */
+export interface NumberRule {
+	/** Plain name and unit for messages, e.g. `span (m)`. */
+	label: string;
+	/** Smallest allowed value; `positive` means strictly above 0. */
+	min?: number;
+	positive?: boolean;
+}
+
+/**
+ * Reads a finite number, or records `not-a-number` / `not-positive` / `below-minimum`.
+ * @example readNumber('6', 'beam.spans[0]', issues, { label: 'span (m)' }) // undefined, 1 issue
+ */
+export function readNumber(value: unknown, path: string, issues: InputIssue[], rule: NumberRule): number | undefined {
+	if (typeof value !== 'number' || !Number.isFinite(value)) {
+		addError(issues, path, 'not-a-number', `The ${rule.label} must be a number.`);
+		return undefined;
+	}
+	if (rule.positive && !(value > 0)) {
+		addError(issues, path, 'not-positive', `The ${rule.label} must be greater than zero.`);
+		return undefined;
+	}
+	if (rule.min !== undefined && value < rule.min) {
+		addError(issues, path, 'below-minimum', `The ${rule.label} must be at least ${rule.min}.`);
+		return undefined;
+	}
+	return value;
+}
+
+/** Reads one of a fixed set of strings, or records `not-one-of`. */
+export function readChoice<T extends string>(
+	value: unknown,
+	path: string,
+	issues: InputIssue[],
+	choices: readonly T[],
+	label: string
+): T | undefined {
+	if (typeof value === 'string' && (choices as readonly string[]).includes(value)) return value as T;
+	addError(issues, path, 'not-one-of', `The ${label} must be one of: ${choices.join(', ')}.`);
+	return undefined;
+}
+
+/** Warns about keys of an object that the format does not know. */
+export function warnUnknownKeys(
+	obj: Record<string, unknown>,
+	known: readonly string[],
+	prefix: string,
+	issues: InputIssue[]
+): void {
+	for (const key of Object.keys(obj)) {
+		if (known.includes(key)) continue;
+		const path = prefix ? `${prefix}.${key}` : key;
+		addWarning(issues, path, 'unknown-key', `"${key}" is not part of the case format and was ignored.`);
+	}
+}

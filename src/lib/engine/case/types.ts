@@ -1,0 +1,125 @@
+/**
+ * The case file: the JSON shape people write, the phone app stores and the command line reads,
+ * and the validated model in internal units that the analyses use.
+ */
+import type { GradeSpec, SteelGrade } from '../material/types';
+import type { BeamLine, JointKind, Load, SupportKind } from '../model/types';
+import type { ResolvedSection, SectionSpec } from '../section/types';
+
+/** Format tag of a case file. */
+export const CASE_FORMAT = 'hingepoint.case';
+/** Version of the case-file format this engine writes and reads. */
+export const CASE_VERSION = 1;
+
+/** Action category of a load in a case file. */
+export type CaseAction = 'permanent' | 'imposed' | 'temporary';
+
+/** A load as written in a case file: positions in m, forces in kN, line loads in kN/m. */
+export type CaseLoad =
+	| { kind: 'point'; x: number; value: number; action: CaseAction; label?: string }
+	| { kind: 'uniform'; from: number; to: number; value: number; action: CaseAction; label?: string }
+	| {
+			kind: 'linear';
+			from: number;
+			to: number;
+			start: number;
+			end: number;
+			action: CaseAction;
+			label?: string;
+	  };
+
+/** Lateral restraint of the compression flange (read by the member checks). */
+export interface CaseRestraint {
+	/** `continuous`, `ends-only`, or the restraint positions in m from the left end. */
+	lateral: 'continuous' | 'ends-only' | number[];
+	/** Where the load is applied over the depth. */
+	loadHeight?: 'top-flange' | 'shear-centre' | 'bottom-flange';
+}
+
+/** Partial factors (defaults: EN 1990 6.10 recommended values, γM0 = γM1 = 1.0). */
+export interface CaseFactors {
+	permanent?: number;
+	imposed?: number;
+	temporary?: number;
+	gammaM0?: number;
+	gammaM1?: number;
+	/** ξ, reduction on unfavourable permanent actions in EN 1990 6.10b (read by the checks). */
+	xi?: number;
+	/** ψ0, combination value of accompanying imposed load (read by the checks). */
+	psi0?: number;
+	/** Identifier of a factor set defined by the design checks, e.g. `en1990-6.10`. */
+	set?: string;
+}
+
+
+/** The beam as written in a case file: spans in m, section dimensions in mm. */
+export interface CaseBeam {
+	spans: number[];
+	supports: SupportKind[];
+	/** One per internal node; omitted means all continuous. */
+	joints?: JointKind[];
+	/** One section for the whole beam, or one per span. */
+	section: SectionSpec | SectionSpec[];
+	/** Grade id (`S275`) or own values in MPa; not needed when every section is a known Mp. */
+	grade?: GradeSpec;
+	/** Uniform thickness loss per exposed face, mm. */
+	sectionLoss?: number;
+	/** Add the section's own weight as a permanent load (default true). */
+	selfWeight?: boolean;
+	restraint?: CaseRestraint;
+	/** Stiff bearing length at each support, mm (one per support; read by the web checks). */
+	bearing?: number[];
+}
+
+/** A case file (`format: 'hingepoint.case'`, version 1). Plain JSON data. */
+export interface CaseFile {
+	format: typeof CASE_FORMAT;
+	version: typeof CASE_VERSION;
+	title?: string;
+	beam: CaseBeam;
+	loads: CaseLoad[];
+	factors?: CaseFactors;
+	/** Deflection limit as a span ratio: the limit is span / deflectionLimit (e.g. 200). */
+	deflectionLimit?: number;
+}
+
+/** Partial factors after defaults. */
+export interface ResolvedFactors {
+	permanent: number;
+	imposed: number;
+	temporary: number;
+	gammaM0: number;
+	gammaM1: number;
+	xi?: number;
+	psi0?: number;
+	set?: string;
+}
+
+/** A validated case in internal units (mm, N, N/mm, MPa). */
+export interface CaseModel {
+	title: string;
+	beam: BeamLine;
+	/** One resolved section per span (after section loss). */
+	sections: ResolvedSection[];
+	/** One grade per span (fy for that section's governing thickness); null for a known Mp without grade. */
+	grades: (SteelGrade | null)[];
+	/** User loads, characteristic values, internal units, in file order. */
+	loads: Load[];
+	/** Optional labels of the user loads, same order. */
+	loadLabels: (string | null)[];
+	/** Self-weight as permanent uniform loads, one per span with a known mass. */
+	selfWeightLoads: Load[];
+	/** Spans whose self-weight is not known (a known Mp without mass) while selfWeight is on. */
+	selfWeightMissing: number[];
+	selfWeight: boolean;
+	/** Section loss per face, mm. */
+	sectionLoss: number;
+	factors: ResolvedFactors;
+	/** Lateral restraint positions converted to mm. */
+	restraint?: { lateral: 'continuous' | 'ends-only' | number[]; loadHeight?: CaseRestraint['loadHeight'] };
+	/** Stiff bearing length per support, mm. */
+	bearing?: number[];
+	deflectionLimit?: number;
+	/** The case as read (file units), for echoing and storing. */
+	file: CaseFile;
+}
