@@ -25,5 +25,14 @@ export {
 	shouldExplainInstall
 } from './persist';
 export type { Combination, FactorSet, LateralRestraint, Settings, Theme } from './settings-model';
-export { BUILT_IN_FACTOR_SETS, DEFAULT_SETTINGS, listFactorSets, sanitizeSettings } from './settings-model';
+export {
+	BUILT_IN_FACTOR_SETS,
+	DEFAULT_SETTINGS,
+	findActiveFactorSet,
+	isFactorSet,
+	listFactorSets,
+	sanitizeSettings,
+	withFactorSet,
+	withoutFactorSet
+} from './settings-model';
 export { loadSettings, saveSettings } from './settings';

@@ -106,6 +106,38 @@ export function listFactorSets(settings: Settings): FactorSet[] {
 	return [...BUILT_IN_FACTOR_SETS, ...settings.factorSets];
 }
 
+/** The factor set in use (falls back to the default built-in one). */
+export function findActiveFactorSet(settings: Settings): FactorSet {
+	const all = listFactorSets(settings);
+	return all.find((f) => f.id === settings.activeFactorSetId) ?? BUILT_IN_FACTOR_SETS[0];
+}
+
+/**
+ * Settings with an own factor set added, or replaced when its id exists; an invalid set or a
+ * built-in id is refused with a message. Pure.
+ */
+export function withFactorSet(
+	settings: Settings,
+	set: FactorSet
+): { ok: true; value: Settings } | { ok: false; message: string } {
+	if (!isFactorSet(set)) {
+		return {
+			ok: false,
+			message: 'A factor set needs a name, factors above zero, ξ up to 1 and ψ0 from 0 to 1.'
+		};
+	}
+	const others = settings.factorSets.filter((f) => f.id !== set.id);
+	return { ok: true, value: { ...settings, factorSets: [...others, { ...set }] } };
+}
+
+/** Settings without an own factor set; the active set falls back to the default if it went. Pure. */
+export function withoutFactorSet(settings: Settings, id: string): Settings {
+	const factorSets = settings.factorSets.filter((f) => f.id !== id);
+	const activeFactorSetId =
+		settings.activeFactorSetId === id ? DEFAULT_SETTINGS.activeFactorSetId : settings.activeFactorSetId;
+	return { ...settings, factorSets, activeFactorSetId };
+}
+
 /** Whether a value is a usable factor set: positive factors, 0 < ξ ≤ 1, 0 ≤ ψ0 ≤ 1. */
 export function isFactorSet(value: unknown): value is FactorSet {
 	if (!isPlainObject(value)) return false;
