@@ -1,0 +1,65 @@
+/**
+ * The `sections` and `section` commands, run as a user would (npx tsx src/cli/main.ts …):
+ * exit codes 0 / 2 and the JSON shape other tools rely on.
+ */
+import { describe, expect, it } from 'vitest';
+import { spawnSync } from 'node:child_process';
+
+function runCli(...args: string[]) {
+	const r = spawnSync('npx', ['tsx', 'src/cli/main.ts', ...args], { encoding: 'utf8', timeout: 60_000 });
+	return { code: r.status, stdout: r.stdout, stderr: r.stderr };
+}
+
+interface SectionJson {
+	designation: string;
+	family: string;
+	standard: string;
+	shape: string;
+	dims: Record<string, number>;
+	props: Record<string, number>;
+}
+
+const PROP_KEYS = ['A', 'mass', 'Iy', 'Iz', 'Wely', 'Wply', 'Welz', 'Wplz', 'It', 'Iw', 'Avz'];
+const DIM_KEYS: Record<string, string[]> = { I: ['h', 'b', 'tw', 'tf', 'r'], RHS: ['h', 'b', 't', 'ro', 'ri'], CHS: ['d', 't'] };
+
+describe('hingepoint sections --json', () => {
+	it('prints every library section with designation, family, standard, shape, dims and props', () => {
+		const { code, stdout } = runCli('sections', '--json');
+		expect(code).toBe(0);
+		const list = JSON.parse(stdout) as SectionJson[];
+		expect(list.length).toBeGreaterThan(300);
+		const families = new Set(list.map((s) => s.family));
+		expect([...families].sort()).toEqual(['CHS', 'HEA', 'HEB', 'IPE', 'RHS', 'SHS', 'UB', 'UC', 'W']);
+		for (const s of list) {
+			expect(typeof s.designation).toBe('string');
+			expect(typeof s.standard).toBe('string');
+			expect(Object.keys(s.dims).sort()).toEqual([...DIM_KEYS[s.shape]].sort());
+			for (const k of PROP_KEYS) expect(Number.isFinite(s.props[k])).toBe(true);
+		}
+	});
+});
+
+describe('hingepoint section "<designation>"', () => {
+	it('prints one section as JSON and exits 0', () => {
+		const { code, stdout } = runCli('section', '305 x 165 x 40 UB', '--json');
+		expect(code).toBe(0);
+		const s = JSON.parse(stdout);
+		expect(s).toMatchObject({ designation: 'UB 305x165x40', family: 'UB', shape: 'I' });
+		expect(s.dims).toEqual({ h: 303.4, b: 165, tw: 6, tf: 10.2, r: 8.9 });
+		expect(s.props.Wply).toBeGreaterThan(600e3);
+	});
+
+	it('exits 2 and names the nearest designations for an unknown name', () => {
+		const { code, stdout, stderr } = runCli('section', 'UB 305x165x41', '--json');
+		expect(code).toBe(2);
+		expect(stdout).toBe('');
+		expect(stderr).toMatch(/UB 305x165x40/);
+	});
+
+	it('prints a readable summary without --json', () => {
+		const { code, stdout } = runCli('section', 'HE 300 B');
+		expect(code).toBe(0);
+		expect(stdout).toMatch(/HEB 300/);
+		expect(stdout).toMatch(/Wply .* cm³/);
+	});
+});
