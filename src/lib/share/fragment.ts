@@ -1,7 +1,7 @@
 import type { Checked, InputIssue } from '$lib/engine/model/issue';
 import { CASE_FORMAT, isCaseLike, isPlainObject, type CaseFileLike } from '$lib/storage/case-file';
 import { decodeBase64Url, encodeBase64Url } from './base64url';
-import { compactKeys, expandKeys } from './compact-keys';
+import { compactCase, expandCase } from './compact';
 
 /** Version of the link encoding, written before the payload (`c=1.…`). */
 export const LINK_VERSION = 1;
@@ -10,14 +10,14 @@ const CASE_VERSION_READ = 1;
 
 /**
  * Encodes a case into a URL fragment (without the '#'): `c=<link version>.<base64url of the
- * UTF-8 JSON with short keys>`. The format name is implied by the link and left out.
+ * UTF-8 JSON with short keys and values>`. The format name is implied by the link and left out.
  * @example
  * encodeCaseToFragment({ format: 'hingepoint.case', version: 1, beam: { spans: [6] }, loads: [] })
  * // 'c=1.eyJ2IjoxLCJiIjp7InMiOls2XX0sImwiOltdfQ'
  */
 export function encodeCaseToFragment(caseFile: CaseFileLike): string {
 	const { format: _format, ...rest } = caseFile;
-	return `c=${LINK_VERSION}.${encodeBase64Url(JSON.stringify(compactKeys(rest)))}`;
+	return `c=${LINK_VERSION}.${encodeBase64Url(JSON.stringify(compactCase(rest)))}`;
 }
 
 /**
@@ -51,7 +51,7 @@ export function decodeCaseFromFragment(hash: string): Checked<CaseFileLike> {
 	} catch {
 		return refuse('link-damaged', DAMAGED);
 	}
-	const caseFile = isPlainObject(data) ? { format: CASE_FORMAT, ...(expandKeys(data) as object) } : null;
+	const caseFile = isPlainObject(data) ? { format: CASE_FORMAT, ...(expandCase(data) as object) } : null;
 	if (!isCaseLike(caseFile)) return refuse('link-damaged', DAMAGED);
 	if (caseFile.version > CASE_VERSION_READ) return refuse('link-newer', NEWER);
 	return { ok: true, value: caseFile, warnings: [] };

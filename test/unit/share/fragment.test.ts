@@ -2,11 +2,12 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
 	buildShareLink,
-	compactKeys,
+	compactCase,
 	decodeCaseFromFragment,
 	encodeCaseToFragment,
-	expandKeys,
-	KEY_CODES
+	expandCase,
+	KEY_CODES,
+	VALUE_CODES
 } from '../../../src/lib/share';
 
 // Demo data, invented: a single span carrying a temporary point load.
@@ -44,21 +45,35 @@ describe('share links', () => {
 		);
 	});
 
-	it('restore any key exactly, including keys that look like codes or __proto__ (property)', () => {
-		const codeLike = fc.constantFrom(...Object.values(KEY_CODES), '~', '~b', '__proto__', 'beam');
-		const obj = fc.dictionary(fc.oneof(fc.string(), codeLike), fc.jsonValue());
+	it('restore any key and value exactly, even ones that look like codes or __proto__ (property)', () => {
+		const codes = Object.values(VALUE_CODES).flatMap((table) => [...Object.keys(table), ...Object.values(table)]);
+		const tricky = fc.constantFrom(...Object.values(KEY_CODES), ...codes, '~', '~p', '__proto__', 'beam');
+		const enumKey = fc.constantFrom(...Object.keys(VALUE_CODES));
+		const leaf = fc.oneof(fc.jsonValue(), tricky, fc.array(tricky));
+		const entry = fc.tuple(fc.oneof(fc.string(), tricky, enumKey), leaf);
+		const obj = fc.letrec((tie) => ({
+			node: fc.array(fc.oneof(entry, fc.tuple(enumKey, tie('node'))), { maxLength: 6 }).map(Object.fromEntries)
+		})).node;
 		fc.assert(
 			fc.property(obj, (value) => {
 				const plain = JSON.parse(JSON.stringify(value));
-				expect(expandKeys(JSON.parse(JSON.stringify(compactKeys(plain))))).toEqual(plain);
+				expect(expandCase(JSON.parse(JSON.stringify(compactCase(plain))))).toEqual(plain);
 			})
 		);
+	});
+
+	it('code the enumerated values of a load', () => {
+		expect(compactCase({ loads: [{ kind: 'point', x: 2, action: 'temporary' }] })).toEqual({
+			l: [{ k: 'p', X: 2, c: 't' }]
+		});
+		// A value that is itself a code is escaped, not confused with the coded value.
+		expect(compactCase({ kind: 'p' })).toEqual({ k: '~p' });
 	});
 
 	it('is shorter than the plain base64url of the JSON', () => {
 		const fragment = encodeCaseToFragment(demo);
 		const plain = Buffer.from(JSON.stringify(demo), 'utf8').toString('base64url');
-		expect(fragment.length).toBeLessThan(plain.length * 0.8);
+		expect(fragment.length).toBeLessThan(plain.length * 0.75);
 	});
 
 	it('build a /check link whose fragment decodes', () => {
