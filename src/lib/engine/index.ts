@@ -1,0 +1,42 @@
+/**
+ * The engine's public API: `checkCase` runs a case file (parsed JSON) from validation to report.
+ * Pure TypeScript; the same call serves the phone app and the command line.
+ */
+import { parseCase } from './case/parse-case';
+import type { InputIssue } from './model/issue';
+import { buildCheckReport, type ReportOptions } from './report/build-report';
+import type { CheckReport } from './report/types';
+
+export { ENGINE_VERSION } from './report/version';
+export { parseCase } from './case/parse-case';
+export { CASE_FORMAT, CASE_VERSION } from './case/types';
+export type * from './case/types';
+export type * from './report/types';
+export type { ReportOptions } from './report/build-report';
+export type { Checked, InputIssue } from './model/issue';
+export type { ActionCategory, BeamLine, JointKind, Load, SupportKind } from './model/types';
+
+/** Outcome of `checkCase`: input problems, or a report with any warnings about the input. */
+export type CheckOutcome =
+	| { ok: false; issues: InputIssue[] }
+	| { ok: true; report: CheckReport; warnings: InputIssue[] };
+
+/**
+ * Validates a case file and, when it is valid, computes its report. Never throws for bad input
+ * (that comes back as issues); a throw means a broken invariant inside the engine.
+ * @param json the parsed case file (`format: 'hingepoint.case'`)
+ * @param options `curve: true` adds the capacity curve
+ * @example
+ * const out = checkCase({ format: 'hingepoint.case', version: 1,
+ *   beam: { spans: [6], supports: ['pin', 'pin'], section: { mp: 100 } },
+ *   loads: [{ kind: 'point', x: 3, value: 10, action: 'temporary' }],
+ *   factors: { temporary: 1 } });
+ * out.ok && out.report.collapse.loadFactor // 6.667 (= 4·Mp/(L·W), simple plastic theory)
+ */
+export function checkCase(json: unknown, options: ReportOptions = {}): CheckOutcome {
+	const parsed = parseCase(json);
+	if (!parsed.ok) return { ok: false, issues: parsed.issues };
+	const built = buildCheckReport(parsed.value, options);
+	if (!built.ok) return { ok: false, issues: built.issues };
+	return { ok: true, report: built.report, warnings: parsed.warnings };
+}

@@ -1,0 +1,38 @@
+/**
+ * Section and grade summaries for the report, with the EN 1993-1-1 Table 5.2 class.
+ */
+import type { SteelGrade } from '../material/types';
+import { classifySectionEN } from '../section/classify-en';
+import type { ResolvedSection } from '../section/types';
+import type { GradeReport, SectionReport } from './types';
+
+/** The report entry of one span's section, classified with that span's fy (235 MPa if none). */
+export function reportSection(section: ResolvedSection, grade: SteelGrade | null): SectionReport {
+	const cls = classifySectionEN(section, grade?.fy ?? 235);
+	return {
+		designation: section.designation,
+		shape: section.shape,
+		family: section.family ?? null,
+		standard: section.standard ?? null,
+		dims: section.dims ? { ...section.dims } : null,
+		props: section.props ? { ...section.props } : null,
+		loss: section.loss,
+		class: grade || section.shape === 'known-mp' ? cls.class : null,
+		classNote: cls.note ?? (grade ? null : 'No grade given: the class was not found.')
+	};
+}
+
+/** The report entry of one span's grade. */
+export function reportGrade(grade: SteelGrade | null): GradeReport | null {
+	if (!grade) return null;
+	return {
+		id: grade.id,
+		name: grade.name,
+		fy: grade.fy,
+		fu: grade.fu,
+		standard: grade.standard,
+		source: grade.source,
+		needsConfirmation: grade.needsConfirmation,
+		note: grade.note ?? null
+	};
+}
