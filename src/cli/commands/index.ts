@@ -1,6 +1,7 @@
 /** The command registry. Add a command by adding its module here. */
 import { sectionsCommand } from './sections';
 import { sectionCommand } from './section';
+import { checkCommand } from './check';
 
 export interface CliCommand {
 	/** One line for the usage text. */
@@ -11,5 +12,6 @@ export interface CliCommand {
 
 export const commands: Record<string, CliCommand> = {
 	sections: sectionsCommand,
-	section: sectionCommand
+	section: sectionCommand,
+	check: checkCommand
 };

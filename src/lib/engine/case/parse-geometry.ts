@@ -18,7 +18,8 @@ const JOINTS: readonly JointKind[] = ['continuous', 'simple'];
 export function parseGeometry(beam: Record<string, unknown>, issues: InputIssue[]): BeamLine | undefined {
 	const before = issues.length;
 	const spans = readSpans(beam.spans, issues);
-	const n = spans?.length;
+	// List lengths can be checked even when a span value is wrong.
+	const n = Array.isArray(beam.spans) && beam.spans.length > 0 ? beam.spans.length : undefined;
 	const supports = readList(beam.supports, 'beam.supports', n === undefined ? undefined : n + 1, issues, (v, p) =>
 		readChoice(v, p, issues, SUPPORTS, 'support')
 	);
