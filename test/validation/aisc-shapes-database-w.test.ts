@@ -3,7 +3,7 @@
  * nine shapes below confirmed against that database; the other rows' dimensions are from memory).
  * US tables give no root radius: r = kdes − tf. Every row: computed weight within 3 % of the
  * nominal lb/ft of its designation. Tolerances: A, Ix, Sx, Zx 1 % (the AISC database rounds d to
- * 3 s.f.; with r = kdes − tf the fillet geometry reproduces it within 0.7 %, reference D.0);
+ * 3 s.f.; with r = kdes − tf the fillet geometry reproduces it within 0.7 %, computed here);
  * J 1 % (SCI torsion-constant formula); Iy 1.5 %.
  */
 import { describe, expect, it } from 'vitest';

@@ -59,7 +59,7 @@ describe('IPE and HE properties against European section tables (from memory)', 
 		expectRel(p.Wply / 1e3, Wply, 0.005);
 		expectRel(p.Iz / 1e4, Iz, 0.005);
 		expectRel(p.It / 1e4, It, 0.03);
-		// The tables' Iw = tf·b³(h − tf)²/24 differs from Iz(h − tf)²/4 by under 0.5 % (reference D.0).
+		// Tables use Iw = tf·b³(h − tf)²/24; Iz(h − tf)²/4 (SCI P363) differs by under 0.5 %.
 		expectRel(p.Iw / 1e12, Iw, 0.005);
 		expectRel(p.Avz / 1e2, Avz, 0.005);
 	});

@@ -5,24 +5,33 @@ import { REFUSED_MATERIALS, explainRefusedMaterial } from './refused';
 
 export type { GradeSpec, SteelGrade } from './types';
 
-/** Turns the way people write grades (`s275jr`, `A572 Gr 50`, `a992`) into a library id. */
+/** Turns the way people write grades (`s275jr`, `A572 Gr 50`, `astm a992`) into a library id. */
 function normaliseGradeId(text: string): string {
-	const t = text.trim().toLowerCase().replace(/\s+/g, ' ');
-	if (/^s\s?(235|275|355|460)/.test(t)) return `S${t.match(/(235|275|355|460)/)![1]}`;
+	const t = text.trim().toLowerCase().replace(/^astm\s*/, '');
+	const en = t.match(/^s\s?(235|275|355|460)/);
+	if (en) return `S${en[1]}`;
 	if (/^a\s?572/.test(t)) return 'A572-50';
-	if (/^(astm )?a\s?(36|992)$/.test(t.replace('astm ', ''))) return `A${t.match(/(36|992)$/)![1]}`;
+	const astm = t.match(/^a\s?(36|992)$/);
+	if (astm) return `A${astm[1]}`;
 	return t.replace(/[\s_]+/g, '-');
 }
 
-function makeIssue(path: string, code: string, message: string): InputIssue {
-	return { path, code, message, severity: 'error' };
+/** Builds one issue. */
+function makeIssue(
+	path: string,
+	code: string,
+	message: string,
+	severity: 'error' | 'warning' = 'error'
+): InputIssue {
+	return { path, code, message, severity };
 }
 
 /** Resolves a user-entered fy (and optional fu), N/mm². */
 function resolveOwnValues(spec: { fy: number; fu?: number }): Checked<SteelGrade> {
 	const issues: InputIssue[] = [];
 	if (!Number.isFinite(spec.fy) || spec.fy <= 0 || spec.fy > 1000) {
-		issues.push(makeIssue('fy', 'fy-not-valid', 'fy must be a yield strength between 0 and 1000 N/mm².'));
+		const message = 'fy must be a yield strength between 0 and 1000 N/mm².';
+		issues.push(makeIssue('fy', 'fy-not-valid', message));
 	}
 	if (spec.fu !== undefined && (!Number.isFinite(spec.fu) || spec.fu < spec.fy)) {
 		issues.push(makeIssue('fu', 'fu-not-valid', 'fu must be a number not less than fy (N/mm²).'));
@@ -31,23 +40,34 @@ function resolveOwnValues(spec: { fy: number; fu?: number }): Checked<SteelGrade
 	const fu = spec.fu ?? null;
 	// EN 1993-1-1 3.2.2(1) recommended ductility: fu/fy ≥ 1.10.
 	const ductile = fu === null || fu / spec.fy >= 1.1;
-	const warnings: InputIssue[] = ductile
+	const warnings = ductile
 		? []
-		: [{ path: 'fu', code: 'steel-not-ductile', message: 'fu/fy is below 1.10 (EN 1993-1-1 3.2.2): plastic hinges may not be relied on.', severity: 'warning' }];
-	return {
-		ok: true,
-		value: {
-			id: 'user', name: `User-entered fy = ${spec.fy} N/mm²`, fy: spec.fy, fu,
-			standard: 'Entered by the user', source: '[user]', ductile, needsConfirmation: false,
-			note: fu === null ? 'fu not given: ductility (fu/fy ≥ 1.10) could not be checked.' : undefined
-		},
-		warnings
+		: [
+				makeIssue(
+					'fu',
+					'steel-not-ductile',
+					'fu/fy is below 1.10 (EN 1993-1-1 3.2.2): plastic hinges may not be relied on.',
+					'warning'
+				)
+			];
+	const value: SteelGrade = {
+		id: 'user',
+		name: `User-entered fy = ${spec.fy} N/mm²`,
+		fy: spec.fy,
+		fu,
+		standard: 'Entered by the user',
+		source: '[user]',
+		ductile,
+		needsConfirmation: false
 	};
+	if (fu === null) value.note = 'fu not given: ductility (fu/fy ≥ 1.10) could not be checked.';
+	return { ok: true, value, warnings };
 }
 
 /**
  * Resolves a grade for the governing thickness t (mm): fy and fu step down with thickness as the
- * product standard gives them. Cast and wrought iron are refused with the reason.
+ * product standard gives them. Cast and wrought iron are refused with the reason. Issue paths
+ * are '' (the grade field itself) or `fy` / `fu`; the caller prefixes them.
  * @example resolveGrade('S355', 19) // ok, fy 345 (EN 10025-2 Table 7, 16 < t ≤ 40)
  * @example resolveGrade('cast-iron', 20) // not ok: issue 'material-not-ductile'
  */
@@ -59,7 +79,8 @@ export function resolveGrade(spec: GradeSpec, thickness: number): Checked<SteelG
 	const row = GRADE_ROWS.find((g) => g.id.toLowerCase() === id.toLowerCase());
 	if (!row) {
 		const known = GRADE_ROWS.map((g) => g.id).join(', ');
-		return { ok: false, issues: [makeIssue('', 'grade-unknown', `Unknown grade "${spec}". Known: ${known}, or give fy.`)] };
+		const message = `Unknown grade "${spec}". Known: ${known}; or give fy.`;
+		return { ok: false, issues: [makeIssue('', 'grade-unknown', message)] };
 	}
 	if (!Number.isFinite(thickness) || thickness < 0) {
 		throw new Error(`invariant: governing thickness must be finite and ≥ 0, got ${thickness}`);
@@ -67,25 +88,54 @@ export function resolveGrade(spec: GradeSpec, thickness: number): Checked<SteelG
 	const band = row.bands.find((b) => thickness <= b.upTo);
 	if (!band) {
 		const top = row.bands[row.bands.length - 1].upTo;
-		return { ok: false, issues: [makeIssue('', 'thickness-beyond-grade', `${row.name} is specified only up to ${top} mm thick; this element is ${thickness} mm.`)] };
+		const message =
+			`${row.name} is specified only up to ${top} mm thick; ` +
+			`this element is ${thickness} mm.`;
+		return { ok: false, issues: [makeIssue('', 'thickness-beyond-grade', message)] };
 	}
 	const value: SteelGrade = {
-		id: row.id, name: row.name, fy: band.fy, fu: band.fu, standard: row.standard,
-		source: row.source, ductile: true, needsConfirmation: row.needsConfirmation ?? false, note: row.note
+		id: row.id,
+		name: row.name,
+		fy: band.fy,
+		fu: band.fu,
+		standard: row.standard,
+		source: row.source,
+		ductile: true,
+		needsConfirmation: row.needsConfirmation ?? false
 	};
-	const warnings: InputIssue[] = value.needsConfirmation
-		? [{ path: '', code: 'grade-needs-confirmation', message: `${row.name}: fy = ${band.fy} N/mm² is a lower-bound default. ${row.note ?? ''}`.trim(), severity: 'warning' }]
+	if (row.note) value.note = row.note;
+	const confirm = `${row.name}: fy = ${band.fy} N/mm² is a lower-bound default. ${row.note ?? ''}`;
+	const warnings = value.needsConfirmation
+		? [makeIssue('', 'grade-needs-confirmation', confirm.trim(), 'warning')]
 		: [];
 	return { ok: true, value, warnings };
 }
 
+/** One entry of the grade picker. */
+export interface GradeChoice {
+	id: string;
+	name: string;
+	standard: string;
+	/** Refused for plastic analysis (iron); choosing it shows the reason. */
+	refused: boolean;
+}
+
 /**
  * The grades for a picker, refused materials last (choosing one explains the refusal).
- * @example listGrades()[0] // { id: 'S235', name: 'S235 (EN 10025-2)', standard: 'EN 10025-2:2004 Table 7', refused: false }
+ * @example listGrades()[0] // { id: 'S235', name: 'S235 (EN 10025-2)', …, refused: false }
  */
-export function listGrades(): { id: string; name: string; standard: string; refused: boolean }[] {
-	return [
-		...GRADE_ROWS.map((g) => ({ id: g.id, name: g.name, standard: g.standard, refused: false })),
-		...Object.entries(REFUSED_MATERIALS).map(([id, m]) => ({ id, name: m.name, standard: '—', refused: true }))
-	];
+export function listGrades(): GradeChoice[] {
+	const grades = GRADE_ROWS.map((g) => ({
+		id: g.id,
+		name: g.name,
+		standard: g.standard,
+		refused: false
+	}));
+	const refused = Object.entries(REFUSED_MATERIALS).map(([id, m]) => ({
+		id,
+		name: m.name,
+		standard: '—',
+		refused: true
+	}));
+	return [...grades, ...refused];
 }

@@ -1,5 +1,5 @@
 /** Public API of the steel-grade library. */
 export type * from './types';
-export { resolveGrade, listGrades } from './grades';
+export { resolveGrade, listGrades, type GradeChoice } from './grades';
 export { REFUSED_MATERIALS, explainRefusedMaterial } from './refused';
 export { GRADE_ROWS } from './grade-table';

@@ -8,8 +8,9 @@ export const REFUSED_MATERIALS: Record<string, { name: string; reason: string }>
 	'cast-iron': {
 		name: 'Cast iron',
 		reason:
-			'Cast iron is brittle: it has no yield plateau, is weak in tension and can hide casting flaws, ' +
-			'so it cannot form plastic hinges and a collapse (plastic) check would be unsafe. ' +
+			'Cast iron is brittle: it has no yield plateau, is weak in tension and can hide ' +
+			'casting flaws, so it cannot form plastic hinges and a collapse (plastic) check ' +
+			'would be unsafe. ' +
 			'It must be assessed elastically by permissible stresses by a specialist engineer.'
 	},
 	'wrought-iron': {

@@ -1,4 +1,7 @@
-/** A grade as written in a case file: a library id (`S275`, `A992`, `unknown-old`, `cast-iron`) or own values. */
+/**
+ * A grade as written in a case file: a library id (`S275`, `A992`, `unknown-old`, `cast-iron`)
+ * or the user's own values in N/mm².
+ */
 export type GradeSpec = string | { fy: number; fu?: number };
 
 /** A steel grade resolved for one governing thickness. Strengths in N/mm². */

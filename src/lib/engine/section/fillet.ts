@@ -17,7 +17,7 @@ export function computeSpandrelOffset(r: number): number {
 
 /** Second moment of one spandrel about its own centroidal axis parallel to a face, mm⁴. */
 export function computeSpandrelOwnI(r: number): number {
-	// ∫y²dA over the spandrel about the face minus A·ȳ²; the face integral is r⁴(1 − 5π/16).
+	// ∫y²dA about the face minus A·ȳ² (parallel axes); the face integral is r⁴(1 − 5π/16).
 	const a = computeSpandrelArea(r);
 	const y = computeSpandrelOffset(r);
 	return r ** 4 * (1 - (5 * Math.PI) / 16) - a * y * y;

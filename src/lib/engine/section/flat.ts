@@ -3,7 +3,8 @@ import { STEEL_DENSITY } from '../units';
 
 /**
  * Properties of a solid rectangle (flat bar or plate on edge), h along the major axis' normal.
- * It by the series approximation for a rectangle a ≥ c: a·c³[1/3 − 0.21(c/a)(1 − c⁴/(12a⁴))]
+ * It by the series approximation for a rectangle a ≥ c:
+ * a·c³[1/3 − 0.21(c/a)(1 − c⁴/(12a⁴))]
  * (Roark's Formulas for Stress and Strain, Table 10.1, from memory); Iw taken as 0;
  * Avz = A (EN 1993-1-1 6.2.6(3)(h), plates and solid bars).
  * @param dims h (depth), b (width) in mm

@@ -61,5 +61,6 @@ export function computeRolledTorsionConstant(dims: IDims): number {
 		(0.0865 * r * tw) / tf ** 2 -
 		(0.0725 * tw ** 2) / tf ** 2;
 	const D1 = ((tf + r) ** 2 + (r + 0.25 * tw) * tw) / (2 * r + tf);
-	return (2 / 3) * b * tf ** 3 + (1 / 3) * (h - 2 * tf) * tw ** 3 + 2 * alpha * D1 ** 4 - 0.42 * tf ** 4;
+	const plates = (2 / 3) * b * tf ** 3 + (1 / 3) * (h - 2 * tf) * tw ** 3;
+	return plates + 2 * alpha * D1 ** 4 - 0.42 * tf ** 4;
 }

@@ -15,7 +15,7 @@ export interface SectionMeasurements {
 export interface IdentifyOptions {
 	/** How many candidates to return (default 5). */
 	limit?: number;
-	/** Measuring tolerance per dimension, mm (default: tape ±3 mm on h and b, ±1 mm on tf and tw). */
+	/** Measuring tolerance per dimension, mm (default: tape ±3 on h and b, ±1 on tf and tw). */
 	tolerance?: Partial<Record<'h' | 'b' | 'tf' | 'tw', number>>;
 }
 

@@ -3,7 +3,12 @@ export type * from './types';
 export { resolveSection, type ResolveSectionOptions } from './resolve';
 export { findSection, suggestSections, listSections } from './search';
 export { parseDesignation } from './designation';
-export { identifySection, type IdentifyCandidate, type IdentifyOptions, type SectionMeasurements } from './identify';
+export {
+	identifySection,
+	type IdentifyCandidate,
+	type IdentifyOptions,
+	type SectionMeasurements
+} from './identify';
 export { computeSectionProperties } from './properties';
 export { computeISectionProperties, computeRolledTorsionConstant } from './i-section';
 export { computeRhsProperties, computeRhsCornerRadii } from './rhs';
@@ -12,4 +17,10 @@ export { computeFlatProperties } from './flat';
 export { applySectionLoss } from './loss';
 export { validateSectionDims } from './validate-dims';
 export { classifySectionEN, type EnClassification, type EnElementClass } from './classify-en';
-export { classifySectionAISC, E_AISC, type AiscClassification, type AiscElementClass, type AiscCategory } from './classify-aisc';
+export {
+	classifySectionAISC,
+	E_AISC,
+	type AiscClassification,
+	type AiscElementClass,
+	type AiscCategory
+} from './classify-aisc';

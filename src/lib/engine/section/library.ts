@@ -45,7 +45,8 @@ function buildLibrary(): LibrarySection[] {
 	] as const) {
 		for (const [serial, h, b, tw, tf, r] of rows) {
 			const mass = Number(serial.split('x')[2]);
-			sections.push(makeSection(`${family} ${serial}`, family, standard, 'I', { h, b, tw, tf, r }, mass));
+			const dims = { h, b, tw, tf, r };
+			sections.push(makeSection(`${family} ${serial}`, family, standard, 'I', dims, mass));
 		}
 	}
 	for (const [family, rows] of [

@@ -12,7 +12,8 @@ function makeConsumedIssue(element: string, thickness: number, c: number): Input
 		severity: 'error',
 		message:
 			`A loss of ${c} mm on each exposed face would consume the ${element} ` +
-			`(${thickness} mm thick). Measure the remaining thickness and enter the section by its dimensions.`
+			`(${thickness} mm thick). Measure the remaining thickness and enter the section ` +
+			'by its dimensions.'
 	};
 }
 
@@ -33,15 +34,17 @@ export function applySectionLoss(
 		const { h, b, tw, tf, r } = dims as IDims;
 		if (tf - 2 * c <= 0) return { ok: false, issues: [makeConsumedIssue('flange', tf, c)] };
 		if (tw - 2 * c <= 0) return { ok: false, issues: [makeConsumedIssue('web', tw, c)] };
+		const rAfter = shape === 'I' ? r + c : 0;
 		return {
 			ok: true,
-			dims: { h: h - 2 * c, b: b - 2 * c, tw: tw - 2 * c, tf: tf - 2 * c, r: shape === 'I' ? r + c : 0 }
+			dims: { h: h - 2 * c, b: b - 2 * c, tw: tw - 2 * c, tf: tf - 2 * c, r: rAfter }
 		};
 	}
 	if (shape === 'RHS') {
 		const { h, b, t, ro, ri } = dims as RhsDims;
 		if (t - c <= 0) return { ok: false, issues: [makeConsumedIssue('wall', t, c)] };
-		return { ok: true, dims: { h: h - 2 * c, b: b - 2 * c, t: t - c, ro: Math.max(ro - c, 0), ri } };
+		const roAfter = Math.max(ro - c, 0);
+		return { ok: true, dims: { h: h - 2 * c, b: b - 2 * c, t: t - c, ro: roAfter, ri } };
 	}
 	if (shape === 'CHS') {
 		const { d, t } = dims as ChsDims;

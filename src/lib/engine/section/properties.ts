@@ -1,4 +1,12 @@
-import type { ChsDims, FlatDims, IDims, RhsDims, SectionDims, SectionProps, SectionShape } from './types';
+import type {
+	ChsDims,
+	FlatDims,
+	IDims,
+	RhsDims,
+	SectionDims,
+	SectionProps,
+	SectionShape
+} from './types';
 import { computeISectionProperties } from './i-section';
 import { computeRhsProperties } from './rhs';
 import { computeChsProperties } from './chs';

@@ -22,7 +22,8 @@ export function findSection(text: string): LibrarySection | null {
 	if (parsed.unknownWord !== null || parsed.numbers.length === 0) return null;
 	for (const section of listSections()) {
 		if (parsed.family && section.family !== parsed.family) continue;
-		if (isSameNumbers(parseDesignation(section.designation).numbers, parsed.numbers)) return section;
+		const own = parseDesignation(section.designation).numbers;
+		if (isSameNumbers(own, parsed.numbers)) return section;
 	}
 	return null;
 }

@@ -1,6 +1,6 @@
 /**
  * European IPE, HE A and HE B sections. Dimensions and nominal masses from memory of
- * EN 10365:2017 (IPE 80–600, HE 100–600 A and B) — not yet checked against the printed standard;
+ * EN 10365:2017 (IPE 80–600, HE 100–600 A and B), not yet checked against the printed standard;
  * every row is tested against its nominal mass (test/validation/en10365-european-sections.test.ts).
  * Row: [size, h, b, tw, tf, r, nominal kg/m] in mm and kg/m.
  */

@@ -1,8 +1,9 @@
 /**
- * US wide-flange W shapes, W4 to W36 (the lighter and most used sizes). Dimensions in inches from
- * memory of ASTM A6/A6M and the AISC Shapes Database v15.0 (the rows W8x31 … W24x62 of engineering
- * reference D.3 are confirmed against that database). US tables give no root radius: the library
- * uses r = kdes − tf (engineering reference D.0), converted to mm at load time with units.ts.
+ * US wide-flange W shapes, W4 to W36 (the lighter and most used sizes). Dimensions in inches
+ * from memory of ASTM A6/A6M and the AISC Shapes Database v15.0 (the nine rows W8x31 … W24x62
+ * of engineering reference D.3 are confirmed against that database). US tables give no root
+ * radius: the library uses r = kdes − tf (engineering reference D.0), converted to mm at load
+ * time with the US factors of units.ts.
  * Row: [name 'W d x lb/ft', d, bf, tw, tf, kdes] in inches.
  */
 export const W_STANDARD = 'ASTM A6/A6M (AISC Shapes Database v15.0)';
