@@ -10,7 +10,7 @@ import type { Side } from './load-effects';
 import { computeLoadMoment } from './load-effects';
 import { findStationaryPoints } from './extremes';
 import type { SolutionSpace } from './nullspace';
-import { solveLinearProgram } from './simplex';
+import { addRow, createProgram, solveProgram } from './simplex';
 import { evaluateMoment, evaluateMomentBasis, type FieldModel } from './statics';
 import type { Interval, Station } from './stations';
 
@@ -45,14 +45,15 @@ export type StaticObjective = 'lambda' | 'margin';
 function makePoint(model: FieldModel, space: SolutionSpace, s: Station): CheckPoint {
 	const B = evaluateMomentBasis(model, s.x, s.side);
 	const M0 = -computeLoadMoment(model.fixedLoads, s.x) + dot(B, space.particular);
-	const BN = space.basis.map((v) => dot(B, v));
-	return {
-		...s,
-		rowSag: BN.map((v) => v / s.sag),
-		rowHog: BN.map((v) => -v / s.hog),
-		hSag: (s.sag - M0) / s.sag,
-		hHog: (s.hog + M0) / s.hog
-	};
+	const k = space.basis.length;
+	const rowSag = new Array<number>(k);
+	const rowHog = new Array<number>(k);
+	for (let i = 0; i < k; i++) {
+		const v = dot(B, space.basis[i]);
+		rowSag[i] = v / s.sag;
+		rowHog[i] = -v / s.hog;
+	}
+	return { x: s.x, side: s.side, sag: s.sag, hog: s.hog, rowSag, rowHog, hSag: (s.sag - M0) / s.sag, hHog: (s.hog + M0) / s.hog };
 }
 
 function dot(a: number[], b: number[]): number {
@@ -86,24 +87,27 @@ export function solveStaticProgram(options: {
 	const points = seedStations(stations, intervals).map((s) => makePoint(model, space, s));
 	const d = space.basis.length;
 	const c = margin ? [...new Array<number>(d).fill(0), 1] : space.basis.map((v) => v[model.lambdaIndex]);
+	const lp = createProgram(c);
+	const addPoint = (p: CheckPoint) => {
+		addRow(lp, margin ? [...p.rowSag, 1] : p.rowSag, p.hSag);
+		addRow(lp, margin ? [...p.rowHog, 1] : p.rowHog, p.hHog);
+	};
+	points.forEach(addPoint);
 	for (let round = 0; round < 60; round++) {
-		const G: number[][] = [];
-		const h: number[] = [];
-		for (const p of points) {
-			G.push(margin ? [...p.rowSag, 1] : p.rowSag, margin ? [...p.rowHog, 1] : p.rowHog);
-			h.push(p.hSag, p.hHog);
-		}
-		const lp = solveLinearProgram(G, h, c);
-		if (lp.status !== 'optimal') return { status: lp.status };
-		const y = margin ? lp.y.slice(0, d) : lp.y;
-		const z = space.particular.map((v, i) => v + dot(y, space.basis.map((b) => b[i])));
-		const limit = margin ? 1 - lp.y[d] : 1;
+		const result = solveProgram(lp);
+		if (result.status !== 'optimal') return { status: result.status };
+		const y = result.y;
+		const z = space.particular.slice();
+		for (let k = 0; k < d; k++) for (let i = 0; i < z.length; i++) z[i] += y[k] * space.basis[k][i];
+		const limit = margin ? 1 - y[d] : 1;
 		const peaks = findPeaks(model, z, intervals, limit);
-		const added = addNewPoints(points, peaks.near, (s) => makePoint(model, space, s));
-		if (added === 0 || round === 59) {
-			const duals = points.map((_, i) => [lp.w[2 * i], lp.w[2 * i + 1]] as [number, number]);
+		const before = points.length;
+		addNewPoints(points, peaks.near, (s) => makePoint(model, space, s));
+		for (let i = before; i < points.length; i++) addPoint(points[i]);
+		if (points.length === before || round === 59) {
+			const duals = points.map((_, i) => [result.w[2 * i], result.w[2 * i + 1]] as [number, number]);
 			const violation = Math.max(peaks.worst, measureStations(model, z, stations, limit));
-			const objectiveValue = margin ? lp.y[d] : z[model.lambdaIndex];
+			const objectiveValue = margin ? y[d] : z[model.lambdaIndex];
 			return { status: 'optimal', z, objective: objectiveValue, points, duals, violation };
 		}
 	}

@@ -3,59 +3,103 @@
  *   maximise cᵀy  subject to  G y ≤ h  (y free),
  * solved through its dual  minimise hᵀw  subject to  Gᵀw = c, w ≥ 0.  The dual has as many
  * equations as y has components (a handful: the redundants and λ), so the tableau stays tiny
- * however many points are checked, and w is exactly the mechanism (hinge rotations).
+ * however many points are checked, and w is exactly the mechanism (hinge rotations). Rows can be
+ * added after a solve: the old basis stays feasible for the dual, so the next solve starts warm.
  */
 import { solveSquare } from './nullspace';
 
-/** Outcome of `solveLinearProgram`. */
+/** Outcome of `solveProgram`. */
 export type LinearProgramResult =
-	| { status: 'optimal'; y: number[]; w: number[]; objective: number; basis: number[] }
+	| { status: 'optimal'; y: number[]; w: number[]; objective: number }
 	| { status: 'unbounded' } /* cᵀy grows without limit (the dual has no solution) */
 	| { status: 'infeasible' }; /* no y satisfies G y ≤ h (the dual is unbounded) */
 
-const TOL = 1e-11;
-// Pricing must see constraint violations near rounding level, or the last refinement is ignored.
+/** Pivot entries smaller than this are treated as zero. */
+const PIVOT_TOL = 1e-11;
+/** Pricing must see constraint violations near rounding level, or the last refinement is ignored. */
 const PRICE_TOL = 1e-14;
 
-interface Tableau {
+/** Tableau of the dual: columns 0…d−1 are artificials, column d + j belongs to row j of G. */
+export interface LinearProgram {
+	d: number;
+	c: number[];
+	G: number[][];
+	h: number[];
 	T: number[][];
 	rhs: number[];
 	basis: number[];
-	/** Original row signs (rows with negative c were negated). */
+	inBasis: boolean[];
 	sign: number[];
-	m: number;
+	/** True once phase 1 is over. */
+	warm: boolean;
 }
 
-function pivot(tab: Tableau, row: number, col: number): void {
-	const { T, rhs } = tab;
-	const p = T[row][col];
-	const pr = T[row];
-	for (let j = 0; j < pr.length; j++) pr[j] /= p;
-	rhs[row] /= p;
-	for (let i = 0; i < T.length; i++) {
-		if (i === row) continue;
-		const f = T[i][col];
-		if (f === 0) continue;
-		const r = T[i];
-		for (let j = 0; j < r.length; j++) r[j] -= f * pr[j];
-		rhs[i] -= f * rhs[row];
+/** An empty program maximising cᵀy. */
+export function createProgram(c: number[]): LinearProgram {
+	const d = c.length;
+	const sign = c.map((v) => (v < 0 ? -1 : 1));
+	const T: number[][] = [];
+	for (let i = 0; i < d; i++) {
+		const row = new Array<number>(d).fill(0);
+		row[i] = 1;
+		T.push(row);
 	}
-	tab.basis[row] = col;
+	const rhs = c.map((v, i) => sign[i] * v);
+	const basis = c.map((_, i) => i);
+	const inBasis = c.map(() => true);
+	return { d, c, G: [], h: [], T, rhs, basis, inBasis, sign, warm: false };
 }
 
-/** Runs simplex iterations for the given column costs; false when unbounded. */
-function iterate(tab: Tableau, cost: (j: number) => number, allowed: (j: number) => boolean): boolean {
-	const { T, rhs, basis } = tab;
+/** Adds the inequality g·y ≤ hj. */
+export function addRow(lp: LinearProgram, g: number[], hj: number): void {
+	const { d, T, sign } = lp;
+	lp.G.push(g);
+	lp.h.push(hj);
+	lp.inBasis.push(false);
+	// Tableau column = B⁻¹·(S g); B⁻¹ is held in the artificial columns.
+	for (let i = 0; i < d; i++) {
+		const row = T[i];
+		let s = 0;
+		for (let k = 0; k < d; k++) s += row[k] * sign[k] * g[k];
+		row.push(s);
+	}
+}
+
+function pivot(lp: LinearProgram, r: number, col: number): void {
+	const { T, rhs } = lp;
+	const pr = T[r];
+	const p = pr[col];
+	const width = pr.length;
+	for (let j = 0; j < width; j++) pr[j] /= p;
+	rhs[r] /= p;
+	for (let i = 0; i < T.length; i++) {
+		if (i === r) continue;
+		const row = T[i];
+		const f = row[col];
+		if (f === 0) continue;
+		for (let j = 0; j < width; j++) row[j] -= f * pr[j];
+		rhs[i] -= f * rhs[r];
+	}
+	lp.inBasis[lp.basis[r]] = false;
+	lp.inBasis[col] = true;
+	lp.basis[r] = col;
+}
+
+/** Simplex iterations; phase 1 prices artificials at 1, phase 2 prices column d + j at h_j. */
+function iterate(lp: LinearProgram, phase: 1 | 2): boolean {
+	const { T, rhs, basis, inBasis, d, h } = lp;
 	const cols = T[0].length;
+	const cb = new Array<number>(d);
 	let degenerate = 0;
-	for (let iter = 0; iter < 100 * cols; iter++) {
-		const bland = degenerate > 2 * T.length;
+	for (let iter = 0; iter < 50 * cols + 100; iter++) {
+		for (let i = 0; i < d; i++) cb[i] = phase === 1 ? (basis[i] < d ? 1 : 0) : basis[i] < d ? 0 : h[basis[i] - d];
+		const bland = degenerate > 2 * d;
 		let enter = -1;
 		let best = -PRICE_TOL;
-		for (let j = 0; j < cols; j++) {
-			if (!allowed(j) || basis.includes(j)) continue;
-			let r = cost(j);
-			for (let i = 0; i < T.length; i++) r -= cost(basis[i]) * T[i][j];
+		for (let j = phase === 1 ? 0 : d; j < cols; j++) {
+			if (inBasis[j]) continue;
+			let r = phase === 1 ? (j < d ? 1 : 0) : h[j - d];
+			for (let i = 0; i < d; i++) r -= cb[i] * T[i][j];
 			if (r < best) {
 				enter = j;
 				best = r;
@@ -65,72 +109,75 @@ function iterate(tab: Tableau, cost: (j: number) => number, allowed: (j: number)
 		if (enter < 0) return true;
 		let leave = -1;
 		let ratio = Infinity;
-		for (let i = 0; i < T.length; i++) {
-			if (T[i][enter] <= TOL) continue;
-			const q = rhs[i] / T[i][enter];
-			if (q < ratio - 1e-14 || (Math.abs(q - ratio) <= 1e-14 && basis[i] < basis[leave])) {
+		for (let i = 0; i < d; i++) {
+			const a = T[i][enter];
+			if (a <= PIVOT_TOL) continue;
+			const q = rhs[i] / a;
+			if (q < ratio - 1e-15 || (q <= ratio + 1e-15 && leave >= 0 && basis[i] < basis[leave])) {
 				ratio = q;
 				leave = i;
 			}
 		}
 		if (leave < 0) return false;
-		degenerate = ratio <= 1e-14 ? degenerate + 1 : 0;
-		pivot(tab, leave, enter);
+		degenerate = ratio <= 1e-15 ? degenerate + 1 : 0;
+		pivot(lp, leave, enter);
 	}
 	throw new Error('invariant: simplex did not terminate');
 }
 
-/** Maximises cᵀy subject to G y ≤ h with y free (G has one row per inequality). */
-export function solveLinearProgram(G: number[][], h: number[], c: number[]): LinearProgramResult {
-	const m = G.length;
-	const d = c.length;
-	const sign = c.map((v) => (v < 0 ? -1 : 1));
-	const T = Array.from({ length: d }, (_, i) => {
-		const row = new Array<number>(m + d).fill(0);
-		for (let j = 0; j < m; j++) row[j] = sign[i] * G[j][i];
-		row[m + i] = 1;
-		return row;
-	});
-	const tab: Tableau = { T, rhs: c.map((v, i) => sign[i] * v), basis: c.map((_, i) => m + i), sign, m };
-	iterate(tab, (j) => (j >= m ? 1 : 0), () => true);
-	const infeasibility = tab.rhs.reduce((s, v, i) => s + (tab.basis[i] >= m ? v : 0), 0);
-	if (infeasibility > 1e-9) return { status: 'unbounded' };
-	// Drive artificials out of the basis where a real column can replace them.
-	for (let i = 0; i < d; i++) {
-		if (tab.basis[i] < m) continue;
-		let col = -1;
-		for (let j = 0; j < m; j++) if (!tab.basis.includes(j) && Math.abs(T[i][j]) > 1e-9) col = j;
-		if (col >= 0) pivot(tab, i, col);
+/** Solves (or re-solves after `addRow`) the program. */
+export function solveProgram(lp: LinearProgram): LinearProgramResult {
+	const { d, T, basis } = lp;
+	if (!lp.warm) {
+		iterate(lp, 1);
+		let infeasibility = 0;
+		for (let i = 0; i < d; i++) if (basis[i] < d) infeasibility += lp.rhs[i];
+		if (infeasibility > 1e-9) return { status: 'unbounded' };
+		// Drive artificials out where a real column can replace them.
+		for (let i = 0; i < d; i++) {
+			if (basis[i] >= d) continue;
+			for (let j = d; j < T[i].length; j++) {
+				if (!lp.inBasis[j] && Math.abs(T[i][j]) > 1e-9) {
+					pivot(lp, i, j);
+					break;
+				}
+			}
+		}
+		lp.warm = true;
 	}
-	if (!iterate(tab, (j) => (j >= m ? 0 : h[j]), (j) => j < m || tab.basis.includes(j))) {
-		return { status: 'infeasible' };
-	}
-	return readSolution(tab, G, h, c);
+	if (!iterate(lp, 2)) return { status: 'infeasible' };
+	return readSolution(lp);
 }
 
-/** Reads w and y from the final tableau, re-solving the basic system for accuracy. */
-function readSolution(tab: Tableau, G: number[][], h: number[], c: number[]): LinearProgramResult {
-	const { T, basis, sign, m } = tab;
-	const d = c.length;
+/** Reads w and y, re-solving the basic system for accuracy. */
+function readSolution(lp: LinearProgram): LinearProgramResult {
+	const { T, basis, sign, d, G, h, c } = lp;
+	const m = G.length;
 	const w = new Array<number>(m).fill(0);
-	basis.forEach((b, i) => {
-		if (b < m) w[b] = Math.max(0, tab.rhs[i]);
-	});
-	// Simplex multipliers: yᵢ = signᵢ Σ_k h_{B_k} (B⁻¹)_{k,i}; B⁻¹ sits in the artificial columns.
+	for (let i = 0; i < d; i++) if (basis[i] >= d) w[basis[i] - d] = Math.max(0, lp.rhs[i]);
+	// Simplex multipliers: yᵢ = signᵢ Σ_k h_{B_k} (B⁻¹)_{k,i}.
 	let y = new Array<number>(d).fill(0);
 	for (let i = 0; i < d; i++) {
 		let s = 0;
-		for (let k = 0; k < d; k++) if (basis[k] < m) s += h[basis[k]] * T[k][m + i];
+		for (let k = 0; k < d; k++) if (basis[k] >= d) s += h[basis[k] - d] * T[k][i];
 		y[i] = sign[i] * s;
 	}
-	if (basis.every((b) => b < m)) {
-		const GB = basis.map((b) => G[b]);
-		const yExact = solveSquare(GB, basis.map((b) => h[b]));
-		const transposed = Array.from({ length: d }, (_, i) => basis.map((b) => G[b][i]));
+	if (basis.every((b) => b >= d)) {
+		const rows = basis.map((b) => G[b - d]);
+		const yExact = solveSquare(rows, basis.map((b) => h[b - d]));
+		const transposed = c.map((_, i) => rows.map((r) => r[i]));
 		const wB = solveSquare(transposed, c);
 		if (yExact) y = yExact;
-		if (wB) basis.forEach((b, k) => (w[b] = Math.max(0, wB[k])));
+		if (wB) basis.forEach((b, k) => (w[b - d] = Math.max(0, wB[k])));
 	}
-	const objective = c.reduce((s, v, i) => s + v * y[i], 0);
-	return { status: 'optimal', y, w, objective, basis: basis.filter((b) => b < m) };
+	let objective = 0;
+	for (let i = 0; i < d; i++) objective += c[i] * y[i];
+	return { status: 'optimal', y, w, objective };
+}
+
+/** Maximises cᵀy subject to G y ≤ h with y free, in one call. */
+export function solveLinearProgram(G: number[][], h: number[], c: number[]): LinearProgramResult {
+	const lp = createProgram(c);
+	for (let j = 0; j < G.length; j++) addRow(lp, G[j], h[j]);
+	return solveProgram(lp);
 }

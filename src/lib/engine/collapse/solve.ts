@@ -5,25 +5,80 @@
  */
 import { assertFinite } from '../model/issue';
 import { certifyField } from './certified-field';
-import { measureMomentRatio } from './certify';
-import { measureLoadSize, normaliseProblem } from './normalise';
+import { combineLowerBound, measureMomentRatio } from './certify';
+import { measureLoadSize, normaliseProblem, type ProblemScale } from './normalise';
 import { solveEquilibrium } from './nullspace';
 import { solveStaticProgram } from './lower-bound';
-import { buildFieldModel, type FieldModel } from './statics';
+import { buildFieldModel } from './statics';
 import { buildStations } from './stations';
 import type { CollapseProblem, CollapseResult } from './types';
 import { validateCollapseProblem } from './validate-problem';
 
-/** Field at λ = 0 with the largest uniform slack, and that slack measured exactly. */
-function findFixedLoadField(model: FieldModel, stations: ReturnType<typeof buildStations>) {
+/** A field in equilibrium with the fixed loads alone (λ = 0) and its exact relative slack. */
+export interface FixedLoadField {
+	z: number[];
+	/** 1 − max |M|/Mp; negative when the fixed loads alone exceed the collapse load. */
+	slack: number;
+}
+
+/** The field at λ = 0 with the largest uniform slack (normalised problem). */
+export function findFixedLoadField(p: CollapseProblem): FixedLoadField {
+	const model = buildFieldModel({ ...p, variableLoads: [] });
 	const zero = new Array<number>(model.unknowns.length).fill(0);
-	if (model.fixedLoads.length === 0) return { z: zero, slack: 1 };
+	if (p.fixedLoads.length === 0) return { z: zero, slack: 1 };
+	const grid = buildStations(model, p.capacity);
 	const lambdaRow = zero.map((_, i) => (i === model.lambdaIndex ? 1 : 0));
 	const space = solveEquilibrium([...model.E, lambdaRow], [...model.f, 0]);
-	const sol = solveStaticProgram({ model, space, ...stations, objective: 'margin' });
+	const sol = solveStaticProgram({ model, space, ...grid, objective: 'margin' });
 	if (sol.status !== 'optimal') throw new Error(`invariant: margin program ${sol.status}`);
-	const slack = 1 - measureMomentRatio(model, sol.z, stations.stations, stations.intervals);
-	return { z: sol.z, slack };
+	return { z: sol.z, slack: 1 - measureMomentRatio(model, sol.z, grid.stations, grid.intervals) };
+}
+
+/** Throws when the problem has input errors (callers validate at the door). */
+export function assertValidProblem(problem: CollapseProblem): void {
+	const errors = validateCollapseProblem(problem).filter((i) => i.severity === 'error');
+	if (errors.length > 0) {
+		throw new Error(`invariant: invalid collapse problem: ${errors.map((e) => `${e.path} ${e.code}`).join(', ')}`);
+	}
+}
+
+/** Result for fixed loads that already exceed the collapse load. */
+export function reportFixedLoadFailure(slack: number): CollapseResult & { status: 'fails-under-fixed' } {
+	// With λ = 0 the program is homogeneous in the loads: 1 − slack is (fixed load)/(collapse load).
+	const overstress = assertFinite(1 - slack, 'overstress');
+	return {
+		status: 'fails-under-fixed',
+		message: `The fixed loads alone already exceed the collapse load of the beam, by ${((overstress - 1) * 100).toPrecision(3)} %.`,
+		overstress
+	};
+}
+
+function solveLambdaProgram(p: CollapseProblem) {
+	const model = buildFieldModel(p);
+	const grid = buildStations(model, p.capacity);
+	const space = solveEquilibrium(model.E, model.f);
+	return { model, grid, sol: solveStaticProgram({ model, space, ...grid, objective: 'lambda' }) };
+}
+
+/**
+ * λ alone (no mechanism, diagram or certificate) of a normalised problem whose fixed-load field
+ * is admissible: the static program's optimum, exact to rounding; null when unbounded.
+ */
+export function solveLoadFactorOnly(p: CollapseProblem, scale: ProblemScale, fixedField: FixedLoadField): number | null {
+	const { model, sol } = solveLambdaProgram(p);
+	if (sol.status !== 'optimal') return null;
+	const lambda = Math.max(0, sol.z[model.lambdaIndex]);
+	return combineLowerBound(lambda, Math.max(0, sol.violation), fixedField.slack) * scale.lambda;
+}
+
+/** Solves a normalised problem whose fixed-load field is already known and admissible. */
+export function solveNormalised(p: CollapseProblem, scale: ProblemScale, fixedField: FixedLoadField): CollapseResult {
+	const { model, grid, sol } = solveLambdaProgram(p);
+	if (sol.status === 'unbounded') {
+		return { status: 'unbounded', message: 'The variable loads can never cause collapse (they relieve the beam or go straight into supports).' };
+	}
+	if (sol.status !== 'optimal') throw new Error('invariant: static program infeasible although λ = 0 is admissible');
+	return certifyField({ model, grid, sol, fixedField, scale });
 }
 
 /**
@@ -37,31 +92,12 @@ function findFixedLoadField(model: FieldModel, stations: ReturnType<typeof build
  * // → 66.667 (W = 4Mp/L = 66.7 kN)
  */
 export function solveCollapse(problem: CollapseProblem): CollapseResult {
-	const errors = validateCollapseProblem(problem).filter((i) => i.severity === 'error');
-	if (errors.length > 0) {
-		throw new Error(`invariant: invalid collapse problem: ${errors.map((e) => `${e.path} ${e.code}`).join(', ')}`);
-	}
+	assertValidProblem(problem);
 	if (measureLoadSize(problem.variableLoads) === 0) {
 		return { status: 'unbounded', message: 'There is no variable load to increase.' };
 	}
 	const { problem: p, scale } = normaliseProblem(problem);
-	const model = buildFieldModel(p);
-	const grid = buildStations(model, p.capacity);
-	const fixedField = findFixedLoadField(model, grid);
-	if (fixedField.slack < -1e-12) {
-		// With λ = 0 the program is homogeneous in the loads: 1 − slack is (fixed load)/(collapse load).
-		const overstress = assertFinite(1 - fixedField.slack, 'overstress');
-		return {
-			status: 'fails-under-fixed',
-			message: `The fixed loads alone already exceed the collapse load of the beam, by ${((overstress - 1) * 100).toPrecision(3)} %.`,
-			overstress
-		};
-	}
-	const space = solveEquilibrium(model.E, model.f);
-	const sol = solveStaticProgram({ model, space, ...grid, objective: 'lambda' });
-	if (sol.status === 'unbounded') {
-		return { status: 'unbounded', message: 'The variable loads can never cause collapse (they relieve the beam or go straight into supports).' };
-	}
-	if (sol.status !== 'optimal') throw new Error('invariant: static program infeasible although λ = 0 is admissible');
-	return certifyField({ model, grid, sol, fixedField, scale });
+	const fixedField = findFixedLoadField(p);
+	if (fixedField.slack < -1e-12) return reportFixedLoadFailure(fixedField.slack);
+	return solveNormalised(p, scale, fixedField);
 }

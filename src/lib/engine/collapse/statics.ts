@@ -84,39 +84,49 @@ function addZeroMoment(model: FieldModel, x: number, side: Side): void {
 	model.f.push(computeLoadMoment(model.fixedLoads, x));
 }
 
+/** Coefficient of unknown u in M(x). */
+function momentCoefficient(model: FieldModel, u: FieldUnknown, x: number, side: Side): number {
+	if (u.kind === 'end-moment') return 1;
+	if (u.kind === 'lambda') return -computeLoadMoment(model.variableLoads, x);
+	const X = model.nodeX[u.node];
+	if (u.kind === 'reaction') return x > X ? x - X : 0;
+	return x > X || (x === X && side > 0) ? 1 : 0;
+}
+
+/** Coefficient of unknown u in V(x). */
+function shearCoefficient(model: FieldModel, u: FieldUnknown, x: number, side: Side): number {
+	if (u.kind === 'lambda') return -computeLoadShear(model.variableLoads, x, side);
+	if (u.kind !== 'reaction') return 0;
+	const X = model.nodeX[u.node];
+	return x > X || (x === X && side > 0) ? 1 : 0;
+}
+
 /** Coefficients B_i(x) of the moment field, so M(x) = M_fixed(x) + B(x)·z. */
 export function evaluateMomentBasis(model: FieldModel, x: number, side: Side): number[] {
-	return model.unknowns.map((u) => {
-		if (u.kind === 'end-moment') return 1;
-		if (u.kind === 'lambda') return -computeLoadMoment(model.variableLoads, x);
-		const X = model.nodeX[u.node];
-		if (u.kind === 'reaction') return x > X ? x - X : 0;
-		return x > X || (x === X && side > 0) ? 1 : 0;
-	});
+	const n = model.unknowns.length;
+	const B = new Array<number>(n);
+	for (let i = 0; i < n; i++) B[i] = momentCoefficient(model, model.unknowns[i], x, side);
+	return B;
 }
 
 /** Coefficients of the shear field V = dM/dx, so V(x) = V_fixed(x) + S(x)·z. */
 export function evaluateShearBasis(model: FieldModel, x: number, side: Side): number[] {
-	return model.unknowns.map((u) => {
-		if (u.kind === 'lambda') return -computeLoadShear(model.variableLoads, x, side);
-		if (u.kind !== 'reaction') return 0;
-		const X = model.nodeX[u.node];
-		return x > X || (x === X && side > 0) ? 1 : 0;
-	});
+	const n = model.unknowns.length;
+	const S = new Array<number>(n);
+	for (let i = 0; i < n; i++) S[i] = shearCoefficient(model, model.unknowns[i], x, side);
+	return S;
 }
 
 /** Bending moment of the field z at x, sagging positive. */
 export function evaluateMoment(model: FieldModel, z: number[], x: number, side: Side): number {
-	const B = evaluateMomentBasis(model, x, side);
 	let m = -computeLoadMoment(model.fixedLoads, x);
-	for (let i = 0; i < z.length; i++) m += B[i] * z[i];
+	for (let i = 0; i < z.length; i++) if (z[i] !== 0) m += momentCoefficient(model, model.unknowns[i], x, side) * z[i];
 	return m;
 }
 
 /** Shear of the field z at x (V = dM/dx). */
 export function evaluateShear(model: FieldModel, z: number[], x: number, side: Side): number {
-	const S = evaluateShearBasis(model, x, side);
 	let v = -computeLoadShear(model.fixedLoads, x, side);
-	for (let i = 0; i < z.length; i++) v += S[i] * z[i];
+	for (let i = 0; i < z.length; i++) if (z[i] !== 0) v += shearCoefficient(model, model.unknowns[i], x, side) * z[i];
 	return v;
 }
