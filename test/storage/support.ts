@@ -1,5 +1,5 @@
 import 'fake-indexeddb/auto';
-import { openStore, type CheckStore } from '../../src/lib/storage';
+import { openStore, type CaseFile, type CheckStore } from '../../src/lib/storage';
 
 let counter = 0;
 
@@ -16,14 +16,14 @@ export async function openFreshStore(label: string): Promise<CheckStore> {
 	return opened.store;
 }
 
-/** A minimal case file (demo data, invented). */
-export function demoCase(designation = '305x165x40 UB', span = 6): {
-	format: 'hingepoint.case';
-	version: number;
-	beam: { section: { designation: string }; spans: number[] };
-	loads: unknown[];
-} {
-	return { format: 'hingepoint.case', version: 1, beam: { section: { designation }, spans: [span] }, loads: [] };
+/** A simply supported case file with no loads (demo data, invented). */
+export function demoCase(designation = '305x165x40 UB', span = 6): CaseFile {
+	return {
+		format: 'hingepoint.case',
+		version: 1,
+		beam: { spans: [span], supports: ['pin', 'pin'], section: { designation } },
+		loads: []
+	};
 }
 
 /**

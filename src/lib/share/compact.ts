@@ -1,26 +1,29 @@
 /**
  * Short names for the case-file keys, to keep links short. Codes are never reused for another
- * key: a link made today must still open after keys are added.
+ * key (a link made today must still open later), and none is a key the case already writes
+ * short (x, h, b, r, t, d), so those need no escaping.
  */
 export const KEY_CODES: Readonly<Record<string, string>> = {
 	version: 'v',
-	title: 't',
-	beam: 'b',
+	title: 'i',
+	beam: 'B',
 	spans: 's',
 	supports: 'u',
 	joints: 'j',
 	section: 'n',
-	designation: 'd',
+	designation: 'e',
+	shape: 'y',
+	process: 'p',
+	mass: 'm',
 	grade: 'g',
 	sectionLoss: 'o',
 	selfWeight: 'w',
-	restraint: 'r',
+	restraint: 'R',
 	lateral: 'q',
-	loadHeight: 'h',
-	bearing: 'e',
+	loadHeight: 'H',
+	bearing: 'G',
 	loads: 'l',
 	kind: 'k',
-	x: 'X',
 	value: 'a',
 	action: 'c',
 	from: 'F',
@@ -44,6 +47,7 @@ export const KEY_CODES: Readonly<Record<string, string>> = {
  */
 export const VALUE_CODES: Readonly<Record<string, Readonly<Record<string, string>>>> = {
 	kind: { point: 'p', uniform: 'u', linear: 'l' },
+	shape: { I: 'i', 'welded-I': 'w', RHS: 'r', CHS: 'c', flat: 'f' },
 	action: { permanent: 'g', imposed: 'q', temporary: 't' },
 	supports: { pin: 'p', fixed: 'f', free: 'o' },
 	joints: { continuous: 'c', simple: 's' },
@@ -77,7 +81,7 @@ const VALUES = new Map(Object.entries(VALUE_CODES).map(([key, codes]) => [key, m
  * Replaces known keys and enumerated values by their codes, everywhere in a JSON value. Anything
  * that looks like a code is escaped, so `expandCase` restores any JSON value exactly.
  * @example
- * compactCase({ loads: [{ kind: 'point', x: 2 }] }) // { l: [{ k: 'p', X: 2 }] }
+ * compactCase({ loads: [{ kind: 'point', x: 2 }] }) // { l: [{ k: 'p', x: 2 }] }
  */
 export function compactCase(value: unknown): unknown {
 	return walk(value, null, 'encode');
@@ -86,7 +90,7 @@ export function compactCase(value: unknown): unknown {
 /**
  * Undoes `compactCase`.
  * @example
- * expandCase({ l: [{ k: 'p', X: 2 }] }) // { loads: [{ kind: 'point', x: 2 }] }
+ * expandCase({ l: [{ k: 'p', x: 2 }] }) // { loads: [{ kind: 'point', x: 2 }] }
  */
 export function expandCase(value: unknown): unknown {
 	return walk(value, null, 'decode');

@@ -1,5 +1,5 @@
 import type { Checked, InputIssue } from '$lib/engine/model/issue';
-import { CASE_FORMAT, isCaseLike, isPlainObject, type CaseFileLike } from '$lib/storage/case-file';
+import { CASE_FORMAT, isCaseLike, isPlainObject, type CaseFile } from '$lib/storage/case-file';
 import { decodeBase64Url, encodeBase64Url } from './base64url';
 import { compactCase, expandCase } from './compact';
 
@@ -13,9 +13,9 @@ const CASE_VERSION_READ = 1;
  * UTF-8 JSON with short keys and values>`. The format name is implied by the link and left out.
  * @example
  * encodeCaseToFragment({ format: 'hingepoint.case', version: 1, beam: { spans: [6] }, loads: [] })
- * // 'c=1.eyJ2IjoxLCJiIjp7InMiOls2XX0sImwiOltdfQ'
+ * // 'c=1.eyJ2IjoxLCJCIjp7InMiOls2XX0sImwiOltdfQ'
  */
-export function encodeCaseToFragment(caseFile: CaseFileLike): string {
+export function encodeCaseToFragment(caseFile: CaseFile): string {
 	const { format: _format, ...rest } = caseFile;
 	return `c=${LINK_VERSION}.${encodeBase64Url(JSON.stringify(compactCase(rest)))}`;
 }
@@ -25,15 +25,16 @@ export function encodeCaseToFragment(caseFile: CaseFileLike): string {
  * browsers never send the fragment.
  * @param base the app's origin and base path, e.g. 'https://example.org'
  */
-export function buildShareLink(base: string, caseFile: CaseFileLike): string {
+export function buildShareLink(base: string, caseFile: CaseFile): string {
 	return `${base.replace(/\/+$/, '')}/check#${encodeCaseToFragment(caseFile)}`;
 }
 
 /**
  * Reads a case back from a location hash (with or without the '#'). A damaged, cut or foreign
- * link comes back as issues with a plain message; the case itself is checked later by the engine.
+ * link comes back as issues with a plain message. Only the header and the top-level shape are
+ * checked here; the engine's `checkCase` validates the beam and loads when the form runs.
  */
-export function decodeCaseFromFragment(hash: string): Checked<CaseFileLike> {
+export function decodeCaseFromFragment(hash: string): Checked<CaseFile> {
 	const params = new URLSearchParams(hash.replace(/^#/, ''));
 	const payload = params.get('c');
 	if (payload === null || payload === '') {
@@ -61,7 +62,7 @@ const DAMAGED =
 	'This link is damaged or cut short, so the check cannot be opened. Ask for the link again, or copy all of it.';
 const NEWER = 'This link was made by a newer version of Hingepoint. Update the app, then open it again.';
 
-function refuse(code: string, message: string): Checked<CaseFileLike> {
+function refuse(code: string, message: string): Checked<CaseFile> {
 	const issue: InputIssue = { path: 'link', message, code, severity: 'error' };
 	return { ok: false, issues: [issue] };
 }

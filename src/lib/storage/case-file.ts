@@ -1,45 +1,45 @@
+import { CASE_FORMAT, type CaseFile } from '$lib/engine/case/types';
+
 /**
- * The case file as storage and sharing see it: a JSON object in SI (m, kN, kN/m, kNm) whose
- * `format` is 'hingepoint.case'. Storage treats the rest as opaque, structured-cloneable data;
- * the engine's `checkCase` is the one place that validates it.
+ * The case file as storage and sharing see it: the engine's JSON shape in SI (m, kN, kN/m, kNm).
+ * Storage checks only the header and the top-level shape; the engine's `checkCase` is the one
+ * place that validates the beam and the loads.
  */
-export interface CaseFileLike {
-	format: 'hingepoint.case';
-	version: number;
-	title?: string;
-	[key: string]: unknown;
-}
-
-/** The case-file format name written in every case. */
-export const CASE_FORMAT = 'hingepoint.case';
+export type { CaseFile } from '$lib/engine/case/types';
+export { CASE_FORMAT } from '$lib/engine/case/types';
 
 /**
- * Whether a value looks like a case file: a plain object naming our format with a whole-number
- * version. Says nothing about whether the beam and loads are valid.
+ * Whether a value has the shape of a case file at the top: our format name, a whole-number
+ * version, a `beam` object and a `loads` list. Says nothing about whether they are valid.
  * @example
- * isCaseLike({ format: 'hingepoint.case', version: 1 }) // true
+ * isCaseLike({ format: 'hingepoint.case', version: 1, beam: {}, loads: [] }) // true
  */
-export function isCaseLike(value: unknown): value is CaseFileLike {
+export function isCaseLike(value: unknown): value is CaseFile {
 	if (!isPlainObject(value)) return false;
 	const version = value.version;
-	return value.format === CASE_FORMAT && Number.isInteger(version) && (version as number) >= 1;
+	return (
+		value.format === CASE_FORMAT &&
+		Number.isInteger(version) &&
+		(version as number) >= 1 &&
+		isPlainObject(value.beam) &&
+		Array.isArray(value.loads)
+	);
 }
 
 /**
- * The section designation of a case, if one is recorded (e.g. '305x165x40 UB'), for search.
- * Reads `beam.section` as a string or as an object with a `designation` or `name`.
+ * The section designation of a case, if one is recorded (e.g. 'UB 254x146x31'), for search.
+ * Reads `beam.section` (or its first entry, one per span): its `designation`, else its `shape`.
  * @example
  * readSectionDesignation({ beam: { section: { designation: 'IPE 300' } } }) // 'IPE 300'
  */
 export function readSectionDesignation(input: unknown): string {
 	const beam = isPlainObject(input) ? input.beam : undefined;
-	const section = isPlainObject(beam) ? beam.section : undefined;
+	const raw = isPlainObject(beam) ? beam.section : undefined;
+	const section: unknown = Array.isArray(raw) ? raw[0] : raw;
 	if (typeof section === 'string') return section;
 	if (!isPlainObject(section)) return '';
-	for (const key of ['designation', 'name', 'label']) {
-		if (typeof section[key] === 'string') return section[key];
-	}
-	return '';
+	if (typeof section.designation === 'string') return section.designation;
+	return typeof section.shape === 'string' ? section.shape : '';
 }
 
 /** A non-null, non-array object. */

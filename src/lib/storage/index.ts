@@ -3,7 +3,7 @@
  * open a store once with `openStore`, then pass it to the calls below. Every call returns an
  * outcome union; none throws for an expected failure (full disk, closed or read-only store).
  */
-export type { CaseFileLike } from './case-file';
+export type { CaseFile } from './case-file';
 export { CASE_FORMAT, isCaseLike, readSectionDesignation } from './case-file';
 export { BACKUP_FORMAT, BACKUP_VERSION, DB_NAME, DB_VERSION, RECORD_SCHEMA_VERSION } from './constants';
 export type { OpenStoreOptions, OpenStoreResult, StoreStatus } from './db';

@@ -1,4 +1,4 @@
-import type { CaseFileLike } from './case-file';
+import type { CaseFile } from './case-file';
 import { MAX_REVISIONS, RECORD_SCHEMA_VERSION } from './constants';
 import type { CheckStore } from './db';
 import { fail } from './errors';
@@ -14,7 +14,7 @@ export interface NewCheck extends ClockOptions {
 	place?: Partial<Place>;
 	notes?: string;
 	/** The inputs as a case file (SI). */
-	input: CaseFileLike;
+	input: CaseFile;
 	/** The report as computed (structured-cloneable), or null. */
 	result: unknown;
 	engineVersion: string;

@@ -1,5 +1,5 @@
 import type { DBSchema } from 'idb';
-import type { CaseFileLike } from './case-file';
+import type { CaseFile } from './case-file';
 import type { CheckRecord, Revision } from './types';
 
 /** A check record as version 1 wrote it: the place was one free-text string. */
@@ -12,7 +12,7 @@ export interface CheckRecordV1 {
 	createdAt: string;
 	updatedAt: string;
 	engineVersion: string;
-	input: CaseFileLike;
+	input: CaseFile;
 	result: unknown;
 	revisions: Revision[];
 	deletedAt: string | null;

@@ -1,4 +1,4 @@
-import type { CaseFileLike } from './case-file';
+import type { CaseFile } from './case-file';
 
 /** Where the beam is: free text fields, any of which may be empty. */
 export interface Place {
@@ -12,7 +12,7 @@ export interface Place {
 export interface Revision {
 	/** When this state was saved (ISO 8601, UTC). */
 	savedAt: string;
-	input: CaseFileLike;
+	input: CaseFile;
 	/** The report as computed then (structured-cloneable), or null if none was computed. */
 	result: unknown;
 	engineVersion: string;
@@ -30,7 +30,7 @@ export interface CheckRecord {
 	/** Version of the engine that computed `result`. */
 	engineVersion: string;
 	/** The inputs, as a case file in SI (m, kN, kN/m, kNm). */
-	input: CaseFileLike;
+	input: CaseFile;
 	/** The report as computed (structured-cloneable), or null if none was computed. */
 	result: unknown;
 	/** Earlier states, oldest first. */

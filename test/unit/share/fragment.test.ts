@@ -9,10 +9,11 @@ import {
 	KEY_CODES,
 	VALUE_CODES
 } from '../../../src/lib/share';
+import type { CaseFile } from '../../../src/lib/storage';
 
 // Demo data, invented: a single span carrying a temporary point load.
-const demo = {
-	format: 'hingepoint.case' as const,
+const demo: CaseFile = {
+	format: 'hingepoint.case',
 	version: 1,
 	title: 'DEMO — hoist beam, café basement',
 	beam: {
@@ -30,10 +31,17 @@ const demo = {
 	deflectionLimit: 200
 };
 
-// Any JSON object with the case header; JSON.parse(JSON.stringify(…)) keeps it to what JSON carries.
+// Any JSON object with the case header and top-level shape; JSON.parse(JSON.stringify(…)) keeps
+// it to what JSON carries.
 const anyCase = fc
-	.dictionary(fc.string(), fc.jsonValue())
-	.map((rest) => JSON.parse(JSON.stringify({ ...rest, format: 'hingepoint.case', version: 1 })));
+	.record({
+		rest: fc.dictionary(fc.string(), fc.jsonValue()),
+		beam: fc.dictionary(fc.string(), fc.jsonValue()),
+		loads: fc.array(fc.jsonValue())
+	})
+	.map(({ rest, beam, loads }) =>
+		JSON.parse(JSON.stringify({ ...rest, format: 'hingepoint.case', version: 1, beam, loads }))
+	);
 
 describe('share links', () => {
 	it('reopen the same case (round trip, property)', () => {
@@ -64,10 +72,15 @@ describe('share links', () => {
 
 	it('code the enumerated values of a load', () => {
 		expect(compactCase({ loads: [{ kind: 'point', x: 2, action: 'temporary' }] })).toEqual({
-			l: [{ k: 'p', X: 2, c: 't' }]
+			l: [{ k: 'p', x: 2, c: 't' }]
 		});
 		// A value that is itself a code is escaped, not confused with the coded value.
 		expect(compactCase({ kind: 'p' })).toEqual({ k: '~p' });
+	});
+
+	it('leave the short keys of a custom section as they are', () => {
+		const section = { shape: 'I', h: 300, b: 150, tw: 7.1, tf: 10.7, r: 15 };
+		expect(compactCase({ section })).toEqual({ n: { y: 'i', h: 300, b: 150, tw: 7.1, tf: 10.7, r: 15 } });
 	});
 
 	it('is shorter than the plain base64url of the JSON', () => {
@@ -104,9 +117,10 @@ describe('share links', () => {
 		expect(code('#c=abc')).toBe('link:link-damaged');
 		expect(code('#c=1.%%%')).toBe('link:link-damaged');
 		expect(code(`#c=1.${b64('just text')}`)).toBe('link:link-damaged');
-		expect(code(`#c=1.${b64({ b: {} })}`)).toBe('link:link-damaged');
+		expect(code(`#c=1.${b64({ B: {} })}`)).toBe('link:link-damaged');
+		expect(code(`#c=1.${b64({ v: 1, B: {} })}`)).toBe('link:link-damaged');
 		expect(code(`#c=2.${b64({ v: 1 })}`)).toBe('link:link-newer');
-		expect(code(`#c=1.${b64({ v: 2 })}`)).toBe('link:link-newer');
+		expect(code(`#c=1.${b64({ v: 2, B: {}, l: [] })}`)).toBe('link:link-newer');
 		const damaged = decodeCaseFromFragment('#c=1.@@');
 		expect(damaged.ok === false && damaged.issues[0].message).toMatch(/damaged or cut short/);
 	});
