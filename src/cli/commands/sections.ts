@@ -2,6 +2,15 @@ import type { CliCommand } from './index';
 import { listSections } from '../../lib/engine/section/index';
 import { formatSig, toSectionJson } from './section-json';
 
+/** Column headings and widths of the readable table. */
+const COLUMNS: [string, number][] = [
+	['designation', 22],
+	['kg/m', 8],
+	['A cm²', 9],
+	['Iy cm⁴', 10],
+	['Wpl,y cm³', 11]
+];
+
 /** `sections [--family UB] [--json]`: every library section, as JSON or a table. */
 export const sectionsCommand: CliCommand = {
 	summary: 'list the section library (--family UB|UC|IPE|HEA|HEB|W|SHS|RHS|CHS, --json)',
@@ -17,17 +26,15 @@ export const sectionsCommand: CliCommand = {
 			process.stdout.write(JSON.stringify(sections.map(toSectionJson)) + '\n');
 			return 0;
 		}
-		const head = `${'designation'.padEnd(22)}${'kg/m'.padStart(8)}${'A cm²'.padStart(9)}${'Iy cm⁴'.padStart(10)}${'Wpl,y cm³'.padStart(11)}`;
-		const lines = sections.map((s) =>
-			[
-				s.designation.padEnd(22),
-				formatSig(s.props.mass).padStart(8),
-				formatSig(s.props.A / 100).padStart(9),
-				formatSig(s.props.Iy / 1e4).padStart(10),
-				formatSig(s.props.Wply / 1e3).padStart(11)
-			].join('')
-		);
-		process.stdout.write([head, ...lines, `${sections.length} sections`].join('\n') + '\n');
+		const head = COLUMNS.map(([name, w], i) => (i === 0 ? name.padEnd(w) : name.padStart(w)));
+		const lines = sections.map((s) => {
+			const { mass, A, Iy, Wply } = s.props;
+			const cells = [mass, A / 100, Iy / 1e4, Wply / 1e3].map((v, i) =>
+				formatSig(v).padStart(COLUMNS[i + 1][1])
+			);
+			return s.designation.padEnd(COLUMNS[0][1]) + cells.join('');
+		});
+		process.stdout.write([head.join(''), ...lines, `${sections.length} sections`].join('\n') + '\n');
 		return 0;
 	}
 };
