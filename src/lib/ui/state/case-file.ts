@@ -1,64 +1,38 @@
 /**
- * The case file as the app edits it: plain JSON in SI (m, kN, kN/m, kNm; section dimensions mm,
- * stresses MPa). Structurally the engine's case format (`hingepoint.case`, version 1), so a stored
- * check, a draft and a shared link all hold exactly what the command line reads.
+ * The case file as the app edits it: the engine's own JSON shape (`hingepoint.case`), in SI
+ * (m, kN, kN/m, kNm; section dimensions mm, stresses MPa). A stored check, a draft and a shared
+ * link all hold exactly what the command line reads.
  */
+import type { CaseFile } from '$lib/engine/case';
 
-export type SupportChoice = 'pin' | 'fixed' | 'free';
-export type JointChoice = 'continuous' | 'simple';
-/** Existing permanent, existing imposed, proposed temporary. */
-export type CaseAction = 'permanent' | 'imposed' | 'temporary';
+export type { CaseAction, CaseFile, CaseLoad, CaseRestraint } from '$lib/engine/case';
+export type { SupportKind as SupportChoice, JointKind as JointChoice } from '$lib/engine/model/types';
 
-/** Section of the beam: a library designation, measured I dimensions (mm) or a known Mp (kNm). */
-export type CaseSection =
-	| { designation: string }
-	| { shape: 'I'; h: number; b: number; tw: number; tf: number; r: number }
-	| { mp: number; mass?: number };
-
-export type CaseLoad =
-	| { kind: 'point'; x: number; value: number; action: CaseAction }
-	| { kind: 'uniform'; from: number; to: number; value: number; action: CaseAction }
-	| { kind: 'linear'; from: number; to: number; start: number; end: number; action: CaseAction };
-
+/** Where the load acts over the depth (for lateral-torsional buckling). */
 export type LoadHeight = 'top-flange' | 'shear-centre' | 'bottom-flange';
 
-export interface CaseRestraint {
-	/** Continuous (e.g. a slab on the top flange), only at the supports, or at given positions (m). */
-	lateral: 'continuous' | 'ends-only' | number[];
-	loadHeight: LoadHeight;
+/** The one section of a beam (the app edits a single section for all spans). */
+export type CaseSection = Exclude<CaseFile['beam']['section'], unknown[]>;
+
+/**
+ * The section the form edits: the first when the case gives one per span.
+ * @example
+ * readSection({ beam: { section: [{ mp: 100 }, { mp: 80 }] } }) // { mp: 100 }
+ */
+export function readSection(c: Pick<CaseFile, 'beam'>): CaseSection {
+	const section = c.beam.section;
+	return Array.isArray(section) ? section[0] : section;
 }
 
-export interface CaseFactors {
-	set?: string;
-	permanent?: number;
-	imposed?: number;
-	temporary?: number;
-	gammaM0?: number;
-	gammaM1?: number;
-	xi?: number;
-	psi0?: number;
+/**
+ * Treats stored or linked JSON as a case file. Safe because every case goes through the engine's
+ * validation before anything is computed, and problems come back as field messages.
+ */
+export function asCaseFile(json: unknown): CaseFile {
+	return json as CaseFile;
 }
 
-/** The JSON case file, SI units. */
-export interface CaseFile {
-	format: 'hingepoint.case';
-	version: number;
-	title?: string;
-	beam: {
-		spans: number[];
-		supports: SupportChoice[];
-		joints?: JointChoice[];
-		section: CaseSection;
-		grade?: string | { fy: number };
-		/** Uniform thickness loss per exposed face, mm. */
-		sectionLoss?: number;
-		selfWeight?: boolean;
-		restraint?: CaseRestraint;
-		/** Stiff bearing lengths, mm. */
-		bearing?: { supports?: number; loads?: number };
-	};
-	loads: CaseLoad[];
-	factors?: CaseFactors;
-	/** Deflection limit as span / this number. */
-	deflectionLimit?: number;
+/** The case as the storage layer types it (plain JSON with string keys). */
+export function asStoredCase(c: CaseFile): CaseFile & Record<string, unknown> {
+	return c as CaseFile & Record<string, unknown>;
 }

@@ -1,4 +1,5 @@
 import type { UnitSystem } from '$lib/ui/format';
+import { totalLength } from './beam-layout';
 import type { CaseFile, CaseLoad } from './case-file';
 import { createDemoCase } from './demo-case';
 import { describeField } from './field-kinds';
@@ -59,7 +60,9 @@ export class CheckForm {
 		this.texts[path] = text;
 		const parsed = parseFieldText(text, describeField(path, this.case), this.units);
 		if (parsed.ok) {
+			const before = totalLength(this.case.beam);
 			writePath(this.case, path, parsed.value);
+			if (path.startsWith('beam.spans')) this.#stretchFullLoads(before);
 			delete this.local[path];
 		} else {
 			this.local[path] = parsed.message;
@@ -85,6 +88,32 @@ export class CheckForm {
 		for (const key of Object.keys(this.local)) if (key.startsWith(prefix)) delete this.local[key];
 	}
 
+	/** Sets spans, supports and joints together (a new support arrangement). */
+	setBeamLine(line: Pick<CaseFile['beam'], 'spans' | 'supports' | 'joints'>): void {
+		const before = totalLength(this.case.beam);
+		this.case.beam.spans = line.spans;
+		this.case.beam.supports = line.supports;
+		this.case.beam.joints = line.joints;
+		const bearing = this.case.beam.bearing;
+		// One stiff bearing length per support: a new arrangement takes the first one everywhere.
+		if (bearing) this.case.beam.bearing = line.supports.map(() => bearing[0] ?? 0);
+		this.forget('beam.spans');
+		this.forget('beam.bearing');
+		this.#stretchFullLoads(before);
+		this.schedule();
+	}
+
+	// A load entered over the whole beam keeps covering the whole beam when a span changes.
+	#stretchFullLoads(before: number): void {
+		const after = totalLength(this.case.beam);
+		if (Math.abs(after - before) < 1e-12) return;
+		this.case.loads.forEach((load, i) => {
+			if (load.kind === 'point' || Math.abs(load.from) > 1e-9 || Math.abs(load.to - before) > 1e-9) return;
+			load.to = after;
+			delete this.texts[`loads[${i}].to`];
+		});
+	}
+
 	addLoad(load: CaseLoad): void {
 		this.update((c) => c.loads.push(load));
 	}
@@ -106,6 +135,8 @@ export class CheckForm {
 		const current = this.units;
 		this.units = typedIn;
 		for (const [path, text] of Object.entries(options.texts ?? {})) {
+			// Only numeric fields are re-read; a search text (designation) restarts from the case.
+			if (typeof readPath(c, path) !== 'number') continue;
 			this.texts[path] = text;
 			const parsed = parseFieldText(text, describeField(path, c), typedIn);
 			if (!parsed.ok) this.local[path] = parsed.message;

@@ -9,21 +9,23 @@ export interface ReportView {
 	/** Design plastic moment per span, kNm. */
 	mpRd: number[];
 	collapse: {
-		status?: string;
+		status: string;
 		loadFactor: number | null;
 		appliesTo: 'temporary' | 'all';
 		certified: boolean;
 		hinges: { x: number; moment: number }[];
 		mechanism: { name: string } | null;
 		diagram: { x: number[]; M: number[] } | null;
-		message?: string;
+		message: string | null;
 	};
-	temporaryCapacity?: { total?: number | null } | null;
-	capacityCurve?: { points: { x: number; p: number }[]; min: { x: number; p: number } } | null;
-	checks?: { id: string; label?: string; utilisation: number; pass: boolean }[];
+	/** λ × the proposed temporary loads: `total` in kN (characteristic). */
+	temporaryCapacity: { total: number } | null;
+	/** Largest characteristic point load by position: x m, p kN. */
+	capacityCurve: { points: { x: number; p: number }[]; min: { x: number; p: number } } | null;
+	checks?: { id: string; label?: string; utilisation: number; pass: boolean; level?: string }[];
 	verdict?: 'pass' | 'fail' | 'outside-scope';
-	governing?: string | null;
-	/** λ − 1, as a fraction. */
+	governing?: { id: string; label: string } | string | null;
+	/** Reserve against the governing check, %. */
 	reserve?: number | null;
 	summary?: { short: string; long: string };
 	notices: string[];

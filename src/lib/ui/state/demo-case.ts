@@ -21,7 +21,7 @@ export function createDemoCase(): CaseFile {
 			sectionLoss: 0,
 			selfWeight: true,
 			restraint: { lateral: 'continuous', loadHeight: 'bottom-flange' },
-			bearing: { supports: 100, loads: 50 }
+			bearing: [100, 100]
 		},
 		loads: [
 			{ kind: 'uniform', from: 0, to: 4.8, value: 3.2, action: 'permanent' },

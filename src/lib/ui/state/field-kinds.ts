@@ -23,8 +23,6 @@ const FIXED: Record<string, FieldInfo> = {
 	'beam.section.mp': { kind: 'moment', rule: 'positive' },
 	'beam.grade.fy': { kind: 'stress', rule: 'positive' },
 	'beam.sectionLoss': { kind: 'dimension', rule: 'non-negative' },
-	'beam.bearing.supports': { kind: 'dimension', rule: 'non-negative' },
-	'beam.bearing.loads': { kind: 'dimension', rule: 'non-negative' },
 	deflectionLimit: { kind: 'ratio', rule: 'positive' }
 };
 
@@ -36,6 +34,7 @@ const FIXED: Record<string, FieldInfo> = {
 export function describeField(path: string, c: CaseFile): FieldInfo {
 	if (FIXED[path]) return FIXED[path];
 	if (/^beam\.spans\[\d+\]$/.test(path)) return { kind: 'length', rule: 'positive' };
+	if (/^beam\.bearing\[\d+\]$/.test(path)) return { kind: 'dimension', rule: 'non-negative' };
 	if (path.startsWith('factors.')) return { kind: 'ratio', rule: 'positive' };
 	const load = /^(loads\[\d+\])\.(\w+)$/.exec(path);
 	if (load) {

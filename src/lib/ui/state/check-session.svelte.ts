@@ -1,0 +1,151 @@
+import { decodeCaseFromFragment } from '$lib/share';
+import {
+	getCheck,
+	loadDraft,
+	markInstallExplained,
+	saveCheck,
+	shouldExplainInstall,
+	updateCheck,
+	type CheckRecord,
+	type FactorSet,
+	type Place,
+	type Settings
+} from '$lib/storage';
+import { applySettingsDefaults } from './case-defaults';
+import { asCaseFile, asStoredCase, type CaseFile } from './case-file';
+import { CheckForm } from './check-form.svelte';
+import { createBlankCase, createDemoCase } from './demo-case';
+import { DraftKeeper, readDraft } from './draft-keeper';
+import { runCheck, ENGINE_VERSION } from './run-check';
+import { connectStore } from './store-connection';
+
+/** Where the form's case came from when the page opened. */
+export type CheckSource = 'saved' | 'link' | 'draft' | 'demo' | 'blank';
+
+/**
+ * The check screen's session: the form, the saved record being edited (if any), draft keeping,
+ * saving with revisions, and the one-time storage and install messages.
+ */
+export class CheckSession {
+	readonly drafts = new DraftKeeper();
+	readonly form = new CheckForm({ run: runCheck, onchange: (draft) => this.drafts.queue(draft) });
+	record = $state.raw<CheckRecord | null>(null);
+	source = $state<CheckSource>('demo');
+	/** Plain message after open/save (e.g. a damaged link, storage refused). */
+	message = $state('');
+	/** Shown once after the first save: what installing to the home screen does. */
+	explainInstall = $state(false);
+	saving = $state(false);
+
+	/** Opens what the address asks for: ?id= a saved check, #c= a shared link, else the draft or the demo. */
+	async open(url: URL): Promise<void> {
+		const store = await connectStore();
+		const id = url.searchParams.get('id');
+		if (id && store) {
+			const found = await getCheck(store, id);
+			if (found.ok) {
+				this.record = found.value;
+				this.source = 'saved';
+				this.form.load(asCaseFile(found.value.input), { savedId: id });
+				return;
+			}
+			this.message = found.message;
+		}
+		if (url.hash.includes('c=')) {
+			const decoded = decodeCaseFromFragment(url.hash);
+			if (decoded.ok) {
+				this.source = 'link';
+				this.form.load(asCaseFile(decoded.value));
+				return;
+			}
+			this.message = decoded.issues.map((issue) => issue.message).join(' ');
+		}
+		const draft = store ? await loadDraft(store) : null;
+		const restored = draft?.ok && draft.value ? readDraft(draft.value.form) : null;
+		if (restored) {
+			if (restored.savedId && store) {
+				const saved = await getCheck(store, restored.savedId);
+				this.record = saved.ok ? saved.value : null;
+			}
+			this.source = 'draft';
+			this.form.load(restored.case, { savedId: this.record ? restored.savedId : null, texts: restored.texts, units: restored.units });
+			return;
+		}
+		if (!store) this.message = 'This browser does not let the app store data: checks cannot be saved here.';
+		this.source = 'demo';
+		this.form.load(createDemoCase());
+	}
+
+	/** Starts again from an empty form with the user's defaults (the draft follows). */
+	startBlank(defaults: { settings: Settings; set: FactorSet }): void {
+		this.record = null;
+		this.source = 'blank';
+		this.form.load(applySettingsDefaults(createBlankCase(), defaults.settings, defaults.set));
+		this.form.schedule();
+	}
+
+	startDemo(): void {
+		this.record = null;
+		this.source = 'demo';
+		this.form.load(createDemoCase());
+		this.form.schedule();
+	}
+
+	/** Saves a new check, or the edited one with a revision of its previous state. */
+	async save(details: { title: string; place: Place; notes: string }): Promise<boolean> {
+		const store = await connectStore();
+		if (!store) {
+			this.message = 'Storage is not available in this browser; the check was not saved.';
+			return false;
+		}
+		this.saving = true;
+		this.form.runNow();
+		const outcome = this.form.outcome;
+		const result = outcome?.state === 'report' ? outcome.report : null;
+		const input = $state.snapshot(this.form.case) as CaseFile;
+		input.title = details.title;
+		this.form.case.title = details.title;
+		try {
+			if (this.record) {
+				const updated = await updateCheck(store, this.record.id, {
+					...details,
+					input: asStoredCase(input),
+					result,
+					engineVersion: ENGINE_VERSION
+				});
+				if (!updated.ok) return this.#fail(updated.message);
+				this.record = updated.value;
+				this.message = `Saved. ${updated.value.revisions.length} earlier version${updated.value.revisions.length === 1 ? '' : 's'} kept.`;
+			} else {
+				const saved = await saveCheck(store, { ...details, input: asStoredCase(input), result, engineVersion: ENGINE_VERSION });
+				if (!saved.ok) return this.#fail(saved.message);
+				this.record = saved.value.record;
+				this.message = describePersistence(saved.value.persistence);
+				const explain = await shouldExplainInstall(store);
+				this.explainInstall = explain.ok && explain.value;
+			}
+			this.form.savedId = this.record.id;
+			await this.drafts.flush(this.form.snapshot());
+			return true;
+		} finally {
+			this.saving = false;
+		}
+	}
+
+	async dismissInstallNote(): Promise<void> {
+		this.explainInstall = false;
+		const store = await connectStore();
+		if (store) await markInstallExplained(store);
+	}
+
+	#fail(message: string): false {
+		this.message = `Not saved: ${message}`;
+		return false;
+	}
+}
+
+function describePersistence(answer: 'granted' | 'denied' | 'unsupported' | null): string {
+	if (answer === 'granted') return 'Saved. This browser has agreed to keep your checks.';
+	if (answer === null) return 'Saved.';
+	return 'Saved. This browser may clear stored data when space runs low: export a backup now and then.';
+}

@@ -1,0 +1,26 @@
+import { ENGINEER_NOTICE_SHORT } from '$lib/engine/notice';
+import { formatNumber } from '$lib/ui/format';
+import type { ReportView } from '$lib/ui/state/check-outcome';
+
+const VERDICT_WORDS = { pass: 'PASS', fail: 'FAIL', 'outside-scope': 'OUTSIDE SCOPE' } as const;
+
+/**
+ * The short and long texts to share: the engine's own summary when it gives one, always ending
+ * with the engineer-of-record notice; otherwise a plain line with the verdict and λ.
+ * @example
+ * composeShareTexts(report, 'Plant room beam').short // '…PASS…Screening aid only…'
+ */
+export function composeShareTexts(report: ReportView, title: string): { short: string; long: string } {
+	const fallback = [
+		title || 'Beam check',
+		`Verdict: ${report.verdict ? VERDICT_WORDS[report.verdict] : 'none'}`,
+		`Collapse load factor: ${report.collapse.loadFactor != null ? formatNumber(report.collapse.loadFactor, 3) : '—'}`
+	].join('\n');
+	const short = withNotice(report.summary?.short ?? fallback);
+	const long = withNotice(report.summary?.long ?? fallback);
+	return { short, long };
+}
+
+function withNotice(text: string): string {
+	return text.includes(ENGINEER_NOTICE_SHORT) ? text : `${text}\n${ENGINEER_NOTICE_SHORT}`;
+}
