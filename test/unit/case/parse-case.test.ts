@@ -97,6 +97,18 @@ describe('parseCase: valid files', () => {
 		expect(r.value.factors).toMatchObject({ set: 'en1990-6.10ab', xi: 0.85, psi0: 0.7 });
 	});
 
+	it('accepts a load ending at the beam end when the span sum rounds below it (8.1 + 1.2 = 9.2999… m)', () => {
+		// Regression: a UDL to 9.3 m was refused as off the beam, found by the random-case property.
+		const r = parseCase(
+			makeCase((c) => {
+				c.beam.spans = [8.1, 1.2];
+				c.beam.supports = ['pin', 'pin', 'pin'];
+				c.loads = [{ kind: 'uniform', from: 0, to: 9.3, value: 1, action: 'permanent' }];
+			})
+		);
+		expect(r.ok && r.value.loads[0]).toMatchObject({ from: 0, to: 9300 });
+	});
+
 	it('unknown keys are warnings, not errors', () => {
 		const r = parseCase(makeCase((c) => ((c.colour = 'blue'), (c.beam.paint = 'red'))));
 		expect(r.ok).toBe(true);

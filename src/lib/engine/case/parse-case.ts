@@ -36,14 +36,13 @@ export function parseCase(json: unknown): Checked<CaseModel> {
 	const b = beam ?? {};
 	const line = beam ? parseGeometry(b, issues) : undefined;
 	const spansM = readSpanList(b.spans);
-	const lengthM = spansM?.reduce((s, L) => s + L, 0);
 	const loss = b.sectionLoss === undefined ? 0 : readNumber(b.sectionLoss, 'beam.sectionLoss', issues, { label: 'section loss (mm per face)', min: 0 });
 	if (b.selfWeight !== undefined && typeof b.selfWeight !== 'boolean')
 		addError(issues, 'beam.selfWeight', 'not-a-boolean', 'selfWeight must be true or false.');
 	const materials = beam && loss !== undefined ? parseSections(b, spansM?.length, loss, issues, issues) : undefined;
-	const loads = parseLoads(json.loads, lengthM, issues);
+	const loads = parseLoads(json.loads, spansM, issues);
 	const factors = parseFactors(json.factors, issues);
-	const restraint = parseRestraint(b.restraint, lengthM, issues);
+	const restraint = parseRestraint(b.restraint, spansM, issues);
 	const bearing = parseBearing(b.bearing, spansM ? spansM.length + 1 : undefined, issues);
 	const deflectionLimit = parseDeflectionLimit(json.deflectionLimit, issues);
 	const errors = issues.filter((i) => i.severity === 'error');

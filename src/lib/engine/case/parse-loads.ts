@@ -15,12 +15,12 @@ const KEYS: Record<Load['kind'], readonly string[]> = {
 };
 
 /**
- * Validates every load against the beam length (m); returns loads and labels in file order.
- * @example parseLoads([{ kind: 'point', x: 2, value: 12.5, action: 'temporary' }], 6, issues)
+ * Validates every load against the beam (spans in m); returns loads and labels in file order.
+ * @example parseLoads([{ kind: 'point', x: 2, value: 12.5, action: 'temporary' }], [6], issues)
  */
 export function parseLoads(
 	value: unknown,
-	length: number | undefined,
+	spans: number[] | undefined,
 	issues: InputIssue[]
 ): { loads: Load[]; labels: (string | null)[] } | undefined {
 	if (!Array.isArray(value)) {
@@ -31,7 +31,7 @@ export function parseLoads(
 	const loads: Load[] = [];
 	const labels: (string | null)[] = [];
 	value.forEach((raw, i) => {
-		const load = parseLoad(raw, `loads[${i}]`, length, issues);
+		const load = parseLoad(raw, `loads[${i}]`, spans ? measureBeam(spans) : undefined, issues);
 		if (load) {
 			loads.push(load);
 			labels.push(isRecord(raw) && typeof raw.label === 'string' ? raw.label : null);
@@ -41,7 +41,40 @@ export function parseLoads(
 	return after > before ? undefined : { loads, labels };
 }
 
-function parseLoad(raw: unknown, path: string, length: number | undefined, issues: InputIssue[]): Load | undefined {
+/** Beam length in m and in mm (the mm sum is the one the model's nodes use). */
+interface BeamLength {
+	m: number;
+	mm: number;
+}
+
+/** Length of a beam of spans in m, in m and in mm. */
+export function measureBeam(spans: number[]): BeamLength {
+	return { m: spans.reduce((s, L) => s + L, 0), mm: spans.reduce((s, L) => s + mToMm(L), 0) };
+}
+
+/**
+ * A position in m checked against the beam, returned in mm. Sums of spans in m carry round-off
+ * (8.1 + 1.2 = 9.2999…), so the ends are matched within 1e-9 relative and snapped to the beam.
+ */
+export function readPosition(
+	v: unknown,
+	path: string,
+	length: BeamLength | undefined,
+	issues: InputIssue[],
+	code = 'load-off-beam'
+): number | undefined {
+	const x = readNumber(v, path, issues, { label: 'position (m)' });
+	if (x === undefined || length === undefined) return x === undefined ? undefined : mToMm(x);
+	const tol = 1e-9 * Math.max(1, length.m);
+	if (x < -tol || x > length.m + tol) {
+		const shown = Number(length.m.toPrecision(10));
+		addError(issues, path, code, `The position ${x} m is off the beam, which runs from 0 to ${shown} m.`);
+		return undefined;
+	}
+	return Math.min(Math.max(mToMm(x), 0), length.mm);
+}
+
+function parseLoad(raw: unknown, path: string, length: BeamLength | undefined, issues: InputIssue[]): Load | undefined {
 	if (!isRecord(raw)) {
 		addError(issues, path, 'not-an-object', 'Each load must be an object with kind, position, value and action.');
 		return undefined;
@@ -50,16 +83,7 @@ function parseLoad(raw: unknown, path: string, length: number | undefined, issue
 	const action = readChoice(raw.action, `${path}.action`, issues, ACTIONS, 'action');
 	if (!kind) return undefined;
 	warnUnknownKeys(raw, KEYS[kind], path, issues);
-	const onBeam = (v: unknown, key: string): number | undefined => {
-		const x = readNumber(v, `${path}.${key}`, issues, { label: 'position (m)' });
-		if (x === undefined || length === undefined) return x;
-		if (x < 0 || x > length) {
-			const msg = `The position ${x} m is off the beam, which runs from 0 to ${length} m.`;
-			addError(issues, `${path}.${key}`, 'load-off-beam', msg);
-			return undefined;
-		}
-		return x;
-	};
+	const onBeam = (v: unknown, key: string): number | undefined => readPosition(v, `${path}.${key}`, length, issues);
 	const force = (key: string, label: string): number | undefined => {
 		const v = readNumber(raw[key], `${path}.${key}`, issues, { label });
 		if (v !== undefined && v < 0)
@@ -70,21 +94,22 @@ function parseLoad(raw: unknown, path: string, length: number | undefined, issue
 		const x = onBeam(raw.x, 'x');
 		const value = force('value', 'load (kN)');
 		if (x === undefined || value === undefined || !action) return undefined;
-		return { kind, x: mToMm(x), value: kNToN(value), action };
+		return { kind, x, value: kNToN(value), action };
 	}
 	const from = onBeam(raw.from, 'from');
 	const to = onBeam(raw.to, 'to');
 	if (from !== undefined && to !== undefined && !(to > from)) {
-		addError(issues, `${path}.to`, 'range-empty', `"to" (${to} m) must be greater than "from" (${from} m).`);
+		const [a, b] = [from / 1000, to / 1000];
+		addError(issues, `${path}.to`, 'range-empty', `"to" (${b} m) must be greater than "from" (${a} m).`);
 		return undefined;
 	}
 	if (kind === 'uniform') {
 		const value = force('value', 'line load (kN/m)');
 		if (from === undefined || to === undefined || value === undefined || !action) return undefined;
-		return { kind, from: mToMm(from), to: mToMm(to), value: kNPerMToNPerMm(value), action };
+		return { kind, from, to, value: kNPerMToNPerMm(value), action };
 	}
 	const start = force('start', 'line load at "from" (kN/m)');
 	const end = force('end', 'line load at "to" (kN/m)');
 	if (from === undefined || to === undefined || start === undefined || end === undefined || !action) return undefined;
-	return { kind, from: mToMm(from), to: mToMm(to), start: kNPerMToNPerMm(start), end: kNPerMToNPerMm(end), action };
+	return { kind, from, to, start: kNPerMToNPerMm(start), end: kNPerMToNPerMm(end), action };
 }

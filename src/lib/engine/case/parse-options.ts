@@ -4,7 +4,7 @@
  * validated as data and converted to mm.
  */
 import type { InputIssue } from '../model/issue';
-import { mToMm } from '../units';
+import { measureBeam, readPosition } from './parse-loads';
 import { addError, addWarning, isRecord, readChoice, readNumber, warnUnknownKeys } from './read-value';
 import type { CaseModel, ResolvedFactors } from './types';
 
@@ -72,7 +72,7 @@ export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFact
 }
 
 /** Reads `beam.restraint`; positions in m become mm. */
-export function parseRestraint(value: unknown, length: number | undefined, issues: InputIssue[]): CaseModel['restraint'] {
+export function parseRestraint(value: unknown, spans: number[] | undefined, issues: InputIssue[]): CaseModel['restraint'] {
 	if (value === undefined) return undefined;
 	if (!isRecord(value)) {
 		addError(issues, 'beam.restraint', 'not-an-object', 'The restraint must be an object with "lateral".');
@@ -90,16 +90,10 @@ export function parseRestraint(value: unknown, length: number | undefined, issue
 		addError(issues, 'beam.restraint.lateral', 'not-one-of', 'Lateral restraint: "continuous", "ends-only" or a list of positions in m.');
 		return undefined;
 	}
-	const xs = lat.map((v, i) => {
-		const x = readNumber(v, `beam.restraint.lateral[${i}]`, issues, { label: 'restraint position (m)', min: 0 });
-		if (x !== undefined && length !== undefined && x > length) {
-			addError(issues, `beam.restraint.lateral[${i}]`, 'off-beam', `The position ${x} m is beyond the beam end (${length} m).`);
-			return undefined;
-		}
-		return x;
-	});
+	const length = spans ? measureBeam(spans) : undefined;
+	const xs = lat.map((v, i) => readPosition(v, `beam.restraint.lateral[${i}]`, length, issues, 'off-beam'));
 	if (xs.some((x) => x === undefined)) return undefined;
-	return { lateral: (xs as number[]).map(mToMm).sort((a, b) => a - b), ...(loadHeight ? { loadHeight } : {}) };
+	return { lateral: (xs as number[]).sort((a, b) => a - b), ...(loadHeight ? { loadHeight } : {}) };
 }
 
 /** Reads `beam.bearing`: one stiff bearing length per support, mm, zero or more. */

@@ -1,0 +1,147 @@
+/**
+ * checkCase end to end against closed forms of simple plastic theory (B.G. Neal, "The Plastic
+ * Methods of Structural Analysis", 3rd ed., 1977, beam mechanisms by virtual work — from memory),
+ * EN 1993-1-1 6.2.5 (Mpl,Rd = Wpl·fy/γM0) and handbook elastic formulas (Roark's Formulas for
+ * Stress and Strain, Table 8.1 — from memory). Case numbers are invented.
+ */
+import { describe, expect, it } from 'vitest';
+import { checkCase, ENGINE_VERSION, type CheckReport } from '../../../src/lib/engine/index';
+import { ENGINEER_NOTICE_SHORT } from '../../../src/lib/engine/notice';
+import { E_STEEL, GRAVITY } from '../../../src/lib/engine/units';
+
+const expectRel = (actual: number | null | undefined, expected: number, rel = 1e-9): void => {
+	expect(actual).not.toBeNull();
+	expect(Math.abs((actual as number) - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
+};
+
+/** Simply supported beam of given Mp (kNm) and span (m) with the given loads (file units). */
+function simpleCase(o: { mp?: number; L?: number; loads: unknown[]; factors?: object; section?: object; grade?: string }) {
+	return {
+		format: 'hingepoint.case',
+		version: 1,
+		title: 'DEMO — invented',
+		beam: {
+			spans: [o.L ?? 6],
+			supports: ['pin', 'pin'],
+			section: o.section ?? { mp: o.mp ?? 100 },
+			...(o.grade ? { grade: o.grade, selfWeight: false } : {})
+		},
+		loads: o.loads,
+		factors: o.factors ?? { permanent: 1, imposed: 1, temporary: 1 }
+	};
+}
+
+function run(json: unknown, curve = false): CheckReport {
+	const out = checkCase(json, { curve });
+	if (!out.ok) throw new Error(out.issues.map((i) => `${i.path}: ${i.message}`).join('; '));
+	return out.report;
+}
+
+const point = (x: number, value: number, action = 'temporary') => ({ kind: 'point', x, value, action });
+const udl = (value: number, action: string, from = 0, to = 6) => ({ kind: 'uniform', from, to, value, action });
+
+describe('checkCase: plastic collapse', () => {
+	it('central point load on a simply supported span: λ = 4Mp/(LW) (Neal, virtual work)', () => {
+		const [Mp, L, W] = [100, 6, 10];
+		const r = run(simpleCase({ mp: Mp, L, loads: [point(3, W)] }));
+		expectRel(r.collapse.loadFactor, (4 * Mp) / L / W);
+		expect(r.collapse.certified).toBe(true);
+		expect(r.collapse.appliesTo).toBe('temporary');
+		expectRel(r.collapse.hinges[0].x, L / 2);
+		expectRel(r.temporaryCapacity!.loads[0].capacity, (4 * Mp) / L);
+		expect(r.temporaryCapacity!.loads[0].unit).toBe('kN');
+	});
+
+	it('γM0 divides a given Mp like any other resistance (EN 1993-1-1 6.2.5)', () => {
+		const r = run(simpleCase({ mp: 100, loads: [point(3, 10)], factors: { temporary: 1, gammaM0: 1.1 } }));
+		expectRel(r.mpRd[0], 100 / 1.1);
+		expectRel(r.collapse.loadFactor, (4 * 100) / 1.1 / 6 / 10);
+	});
+
+	it('fixed UDL held, variable central load: Q = (4Mp/L − gL/2)/γT (Neal; fixed loads not scaled)', () => {
+		const [Mp, L, g, gT] = [100, 6, 5, 1.5];
+		const r = run(simpleCase({ mp: Mp, loads: [udl(g, 'permanent'), point(3, 1)], factors: { permanent: 1, temporary: gT } }));
+		expectRel(r.temporaryCapacity!.loads[0].capacity, ((4 * Mp) / L - (g * L) / 2) / gT);
+	});
+
+	it('with no temporary load λ multiplies all loads: UDL collapse w = 8Mp/L² (Neal)', () => {
+		const [Mp, L, w, gG] = [100, 6, 4, 1.35];
+		const r = run(simpleCase({ mp: Mp, loads: [udl(w, 'permanent')], factors: { permanent: gG } }));
+		expect(r.collapse.appliesTo).toBe('all');
+		expectRel(r.collapse.loadFactor, (8 * Mp) / (L * L) / (w * gG));
+		expect(r.temporaryCapacity).toBeNull();
+	});
+
+	it('says plainly when the fixed loads alone fail, with no load factor', () => {
+		const r = run(simpleCase({ mp: 50, loads: [udl(20, 'permanent'), point(2, 5)] }));
+		expect(r.collapse.status).toBe('fails-under-fixed');
+		expect(r.collapse.loadFactor).toBeNull();
+		expect(r.collapse.certified).toBe(false);
+		expect(r.temporaryCapacity).toBeNull();
+		expect(r.notices.join(' ')).toMatch(/existing loads alone/);
+	});
+});
+
+describe('checkCase: section, grade and elastic results', () => {
+	const ub = simpleCase({ section: { designation: 'UB 305x165x40' }, grade: 'S275', loads: [udl(4, 'permanent'), point(3, 10)] });
+
+	it('Mp,Rd = Wpl,y·fy/γM0 with fy for the flange thickness (EN 1993-1-1 6.2.5; EN 10025-2 Table 7)', () => {
+		const r = run(ub);
+		// tf = 10.2 mm ≤ 16 mm → fy = 275 MPa (EN 10025-2:2004 Table 7).
+		expect(r.grade!.fy).toBe(275);
+		expectRel(r.mpRd[0], (r.section.props!.Wply * 275) / 1e6);
+		expect(r.section.class).toBe(1);
+	});
+
+	it('deflection under unfactored loads: 5wL⁴/384EI + WL³/48EI (Roark Table 8.1)', () => {
+		const r = run(ub);
+		const EI = E_STEEL * r.section.props!.Iy;
+		const [w, W, L] = [4, 10_000, 6000];
+		expectRel(r.elastic.maxDeflection!.total.value, (5 * w * L ** 4) / (384 * EI) + (W * L ** 3) / (48 * EI), 1e-9);
+		expectRel(r.elastic.maxDeflection!.temporary!.value, (W * L ** 3) / (48 * EI), 1e-9);
+	});
+
+	it('first hinge equals collapse in a statically determinate beam; first yield is lower by Wel/Wpl', () => {
+		// Determinate beam, loads in proportion: M ∝ λ everywhere, so first hinge = collapse
+		// (simple plastic theory, Neal) and first yield = collapse × Wel/Wpl when only λ-loads act.
+		const r = run(simpleCase({ section: { designation: 'UB 305x165x40' }, grade: 'S275', loads: [point(3, 10)] }));
+		expectRel(r.elastic.firstHinge!.factor, r.collapse.loadFactor!, 1e-9);
+		const { Wely, Wply } = r.section.props!;
+		expectRel(r.elastic.firstYield!.factor, (r.collapse.loadFactor! * Wely) / Wply, 1e-9);
+	});
+
+	it('self-weight = mass × g, as a permanent load (EN 1991-1-1 Table A.4 density; standard g)', () => {
+		const withSw = { ...ub, beam: { ...ub.beam, selfWeight: true } };
+		const r = run(withSw);
+		expectRel(r.selfWeight[0], (r.section.props!.mass * GRAVITY) / 1000);
+	});
+
+	it('a known-Mp section has no deflection or first yield, each with a reason', () => {
+		const r = run(simpleCase({ mp: 100, loads: [point(3, 10)] }));
+		expect(r.elastic.maxDeflection).toBeNull();
+		expect(r.elastic.firstYield).toBeNull();
+		expect(r.elastic.notAvailable.length).toBeGreaterThan(0);
+		expect(r.section.class).toBeNull();
+	});
+});
+
+describe('checkCase: the report as data', () => {
+	it('starts its notices with the engineer-of-record notice and records the engine version', () => {
+		const r = run(simpleCase({ loads: [point(3, 10)] }));
+		expect(r.notices[0]).toBe(ENGINEER_NOTICE_SHORT);
+		expect(r.engineVersion).toBe(ENGINE_VERSION);
+		expect(r.assumptions.length).toBeGreaterThan(3);
+	});
+
+	it('is plain data: survives structuredClone and a JSON round trip unchanged', () => {
+		const r = run(simpleCase({ loads: [point(2, 10), udl(3, 'imposed')] }));
+		expect(structuredClone(r)).toEqual(r);
+		expect(JSON.parse(JSON.stringify(r))).toEqual(r);
+	});
+
+	it('returns issues, not a report, for an invalid case', () => {
+		const out = checkCase({ ...simpleCase({ loads: [point(8, 10)] }) });
+		expect(out.ok).toBe(false);
+		expect(!out.ok && out.issues.map((i) => i.path)).toContain('loads[0].x');
+	});
+});
