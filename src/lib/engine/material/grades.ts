@@ -1,9 +1,13 @@
 import type { Checked, InputIssue } from '../model/issue';
 import type { GradeSpec, SteelGrade } from './types';
 import { GRADE_ROWS } from './grade-table';
+import { HISTORIC_GRADE_ROWS } from './historic-grades';
 import { REFUSED_MATERIALS, explainRefusedMaterial } from './refused';
 
 export type { GradeSpec, SteelGrade } from './types';
+
+/** Current grades first, then historic ones. */
+const ALL_ROWS = [...GRADE_ROWS, ...HISTORIC_GRADE_ROWS];
 
 /** Turns the way people write grades (`s275jr`, `A572 Gr 50`, `astm a992`) into a library id. */
 function normaliseGradeId(text: string): string {
@@ -76,9 +80,9 @@ export function resolveGrade(spec: GradeSpec, thickness: number): Checked<SteelG
 	const id = normaliseGradeId(spec);
 	const refused = explainRefusedMaterial(id);
 	if (refused) return { ok: false, issues: [refused] };
-	const row = GRADE_ROWS.find((g) => g.id.toLowerCase() === id.toLowerCase());
+	const row = ALL_ROWS.find((g) => g.id.toLowerCase() === id.toLowerCase());
 	if (!row) {
-		const known = GRADE_ROWS.map((g) => g.id).join(', ');
+		const known = ALL_ROWS.map((g) => g.id).join(', ');
 		const message = `Unknown grade "${spec}". Known: ${known}; or give fy.`;
 		return { ok: false, issues: [makeIssue('', 'grade-unknown', message)] };
 	}
@@ -125,7 +129,7 @@ export interface GradeChoice {
  * @example listGrades()[0] // { id: 'S235', name: 'S235 (EN 10025-2)', …, refused: false }
  */
 export function listGrades(): GradeChoice[] {
-	const grades = GRADE_ROWS.map((g) => ({
+	const grades = ALL_ROWS.map((g) => ({
 		id: g.id,
 		name: g.name,
 		standard: g.standard,

@@ -46,8 +46,3 @@ export function parseDesignation(text: string): ParsedDesignation {
 	const family = FAMILY_WORDS[joined] ?? null;
 	return { family, numbers, unknownWord: family ? null : joined };
 }
-
-/** Numbers that identify a library section inside its family (the designation's numbers). */
-export function extractKeyNumbers(designation: string): number[] {
-	return parseDesignation(designation).numbers;
-}

@@ -17,8 +17,10 @@ function makeSection(
 	dims: SectionDims,
 	nominalMass?: number
 ): LibrarySection {
-	const props = computeSectionProperties(shape, dims);
-	return { designation, family, standard, shape, dims, props, nominalMass };
+	const props = Object.freeze(computeSectionProperties(shape, dims));
+	// Frozen: every caller shares these objects, so none may change them for the others.
+	const section = { designation, family, standard, shape, dims: Object.freeze(dims), props };
+	return Object.freeze(nominalMass === undefined ? section : { ...section, nominalMass });
 }
 
 /** Wall thickness as printed in hollow-section designations: always one decimal (5.0, 6.3). */

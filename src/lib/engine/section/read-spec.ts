@@ -43,7 +43,7 @@ function readDesignation(text: string): Checked<ReadSpec> {
 	}
 	const { designation, family, standard, dims } = found;
 	const shape = found.shape as Dimensioned;
-	return { ok: true, value: { shape, dims, designation, family, standard }, warnings: [] };
+	return { ok: true, value: { shape, dims: { ...dims }, designation, family, standard }, warnings: [] };
 }
 
 /**

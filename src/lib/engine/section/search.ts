@@ -4,6 +4,19 @@ import { parseDesignation } from './designation';
 
 export { listSections } from './library';
 
+let indexed: { section: LibrarySection; numbers: number[] }[] | null = null;
+
+/** Every library section with its designation's numbers, parsed once (the tables never change). */
+function listIndexed(): { section: LibrarySection; numbers: number[] }[] {
+	if (!indexed) {
+		indexed = listSections().map((section) => ({
+			section,
+			numbers: parseDesignation(section.designation).numbers
+		}));
+	}
+	return indexed;
+}
+
 /** True when both lists hold the same numbers (5 equals 5.0). */
 function isSameNumbers(a: number[], b: number[]): boolean {
 	return a.length === b.length && a.every((value, i) => Math.abs(value - b[i]) < 1e-9);
@@ -20,10 +33,9 @@ function isSameNumbers(a: number[], b: number[]): boolean {
 export function findSection(text: string): LibrarySection | null {
 	const parsed = parseDesignation(text);
 	if (parsed.unknownWord !== null || parsed.numbers.length === 0) return null;
-	for (const section of listSections()) {
+	for (const { section, numbers } of listIndexed()) {
 		if (parsed.family && section.family !== parsed.family) continue;
-		const own = parseDesignation(section.designation).numbers;
-		if (isSameNumbers(own, parsed.numbers)) return section;
+		if (isSameNumbers(numbers, parsed.numbers)) return section;
 	}
 	return null;
 }
@@ -58,12 +70,11 @@ function measureEditDistance(a: string, b: string): number {
 export function suggestSections(text: string, n: number): string[] {
 	const parsed = parseDesignation(text);
 	const typed = text.toLowerCase().replace(/\s+/g, '');
-	const scored = listSections().map((section) => {
-		const own = parseDesignation(section.designation);
+	const scored = listIndexed().map(({ section, numbers }) => {
 		const familyPenalty = parsed.family && parsed.family !== section.family ? 10 : 0;
 		const score =
 			parsed.numbers.length > 0
-				? familyPenalty + measureNumberDistance(parsed.numbers, own.numbers)
+				? familyPenalty + measureNumberDistance(parsed.numbers, numbers)
 				: measureEditDistance(typed, section.designation.toLowerCase().replace(/\s+/g, ''));
 		return { designation: section.designation, score };
 	});
