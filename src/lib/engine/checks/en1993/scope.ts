@@ -24,6 +24,10 @@ export interface ScopeInput {
 	 * within the stable length (6.3.5), or the flange is restrained throughout.
 	 */
 	hingesRestrained: boolean;
+	/** Why the hinges are not restrained enough, for the message. */
+	hingeRestraintNote?: string;
+	/** Further reasons found elsewhere that put the beam outside scope. */
+	otherReasons?: string[];
 }
 
 /** The route and the plain reasons for it. */
@@ -51,6 +55,7 @@ export function decideRoute(s: ScopeInput): ScopeDecision {
 	if (s.needsShearBucklingCheck) {
 		out.push('The web needs a shear buckling check (hw/tw > 72ε/η, EN 1993-1-1 6.2.6(6)): outside this tool.');
 	}
+	out.push(...(s.otherReasons ?? []));
 	if (out.length > 0) return { route: 'outside-scope', reasons: out };
 	if (s.sectionClass === 3) {
 		return {
@@ -70,7 +75,7 @@ export function decideRoute(s: ScopeInput): ScopeDecision {
 		return {
 			route: 'elastic-plastic-section',
 			reasons: [
-				'A plastic hinge would form where the compression flange is not restrained enough (EN 1993-1-1 6.3.5), so plastic analysis is not used: elastic analysis with the plastic resistance and the buckling resistance Mb,Rd.'
+				`A plastic hinge would form where the compression flange is not restrained enough (EN 1993-1-1 6.3.5${s.hingeRestraintNote ? `: ${s.hingeRestraintNote}` : ''}), so plastic analysis is not used: elastic analysis with the plastic resistance and the buckling resistance Mb,Rd.`
 			]
 		};
 	}

@@ -1,0 +1,95 @@
+/**
+ * The bending row. Plastic route: the exact collapse factor over all arrangements (with shear
+ * reductions at hinges). Elastic routes: the factor at which the elastic moment first reaches
+ * the section resistance. Utilisation is 1/(factor on all design loads together), so it is
+ * ≤ 1 exactly when the beam carries the design loads.
+ */
+import { solveCollapse } from '../collapse/index';
+import { computeElasticLimitFactor } from '../elastic/index';
+import type { Load } from '../model/types';
+import type { CheckContext } from './context';
+import { applyArrangement } from './factor-loads';
+import type { LoadArrangement } from './load-arrangements';
+import type { PlasticArrangement } from './plastic-bending';
+import type { CheckResult } from './types';
+
+/** The arrangement with the smallest collapse factor (null factors count as unbounded). */
+export function pickGoverningCollapse(all: PlasticArrangement[]): PlasticArrangement {
+	let best = all[0];
+	for (const p of all) {
+		if (p.loadFactor !== null && (best.loadFactor === null || p.loadFactor < best.loadFactor)) best = p;
+	}
+	return best;
+}
+
+/** Bending row of the plastic route. */
+export function describePlasticBending(ctx: CheckContext, g: PlasticArrangement): CheckResult {
+	const d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement: g.arrangement });
+	const inverse = (loads: Load[]) => {
+		if (loads.length === 0) return 0;
+		const r = solveCollapse({ beam: ctx.beam, capacity: g.capacity, fixedLoads: [], variableLoads: loads });
+		return r.status === 'unbounded' || r.status === 'fails-under-fixed' ? 0 : 1 / r.loadFactor;
+	};
+	const utilisation = inverse([...d.fixed, ...d.variable]);
+	const values: Record<string, number> = {};
+	if (g.loadFactor !== null) values.loadFactor = g.loadFactor;
+	g.reductions.forEach((r, i) => {
+		values[`rho${i + 1}`] = r.rho;
+		values[`myVRd${i + 1}`] = r.myVRd;
+		values[`vEd${i + 1}`] = r.vEd;
+	});
+	const reduced = g.reductions.length > 0
+		? ` Hinge resistance reduced for shear (EN 1993-1-1 6.2.8) at ${g.reductions.length} hinge${g.reductions.length > 1 ? 's' : ''}.`
+		: '';
+	return {
+		id: 'bending',
+		label: 'Bending: plastic collapse',
+		clause: 'EN 1993-1-1 5.4.3, 6.2.5',
+		level: 'governing',
+		utilisation,
+		utilisationExisting: inverse(d.fixed),
+		pass: g.loadFactor === null || g.loadFactor >= 1,
+		multiplierAtCapacity: g.loadFactor,
+		values,
+		x: 'hinges' in g.result ? g.result.hinges[0]?.x : undefined,
+		arrangement: g.arrangement.name,
+		note: `${'mechanism' in g.result ? `Mechanism: ${g.result.mechanism.name}.` : ''}${reduced}`.trim() || undefined
+	};
+}
+
+/** Bending row of an elastic route; `resistance` per span, N·mm. */
+export function checkElasticBending(ctx: CheckContext, o: { EI: number[]; resistance: number[]; elastic: boolean }): CheckResult {
+	let worst: { arr: LoadArrangement; u: number; factor: number | null; x?: number } | null = null;
+	let existing = 0;
+	for (const arr of ctx.arrangements) {
+		const d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement: arr });
+		const run = (fixedLoads: Load[], variableLoads: Load[]) =>
+			computeElasticLimitFactor({ beam: ctx.beam, EI: o.EI, fixedLoads, variableLoads, limit: o.resistance });
+		const inverse = (loads: Load[]) => {
+			if (loads.length === 0) return 0;
+			const r = run([], loads);
+			return r.status === 'reached' ? 1 / r.factor : 0;
+		};
+		const f = run(d.fixed, d.variable);
+		const factor = f.status === 'reached' ? f.factor : f.status === 'fails-under-fixed' ? 0 : null;
+		const u = inverse([...d.fixed, ...d.variable]);
+		existing = Math.max(existing, inverse(d.fixed));
+		const x = f.status === 'reached' || f.status === 'fails-under-fixed' ? f.x : undefined;
+		if (!worst || (factor !== null && (worst.factor === null || factor < worst.factor))) worst = { arr, u, factor, x };
+		worst.u = Math.max(worst.u, u);
+	}
+	if (!worst) throw new Error('invariant: at least one load arrangement');
+	return {
+		id: 'bending',
+		label: o.elastic ? 'Bending: elastic resistance (first yield)' : 'Bending: plastic resistance at the first hinge',
+		clause: o.elastic ? 'EN 1993-1-1 6.2.5 (Wel·fy)' : 'EN 1993-1-1 6.2.5 (Wpl·fy), elastic analysis',
+		level: 'governing',
+		utilisation: worst.u,
+		utilisationExisting: existing,
+		pass: worst.u <= 1,
+		multiplierAtCapacity: worst.factor,
+		values: worst.factor === null ? {} : { loadFactor: worst.factor },
+		x: worst.x,
+		arrangement: worst.arr.name
+	};
+}

@@ -1,0 +1,54 @@
+/**
+ * Is the lateral restraint enough for plastic hinges (EN 1993-1-1 6.3.5, from memory)? Each
+ * hinge needs a restraint within h/2 (6.3.5.2), and the segments next to it must be no longer
+ * than the stable length of 6.3.5.3. A segment with loads inside is taken with ψ = 1, the
+ * shortest stable length.
+ */
+import { momentAt, type Hinge, type CollapseDiagram } from '../collapse/index';
+import { mmToM } from '../units';
+import type { DesignBasis } from './design-basis';
+import { computeEndMomentRatio } from './en1993/stable-length';
+import type { SpanMember } from './member';
+import { spanOf } from './plastic-bending';
+import type { RestraintSegment } from './restraint';
+
+/** Inputs of {@link checkHingeRestraint}. */
+export interface HingeRestraintInput {
+	basis: DesignBasis<unknown>;
+	hinges: Hinge[];
+	diagram: CollapseDiagram;
+	/** Segments between restraints; empty means restrained throughout. */
+	segments: RestraintSegment[];
+	nodes: number[];
+	members: SpanMember[];
+	/** Positions of point loads and load edges, mm (to tell whether a segment is loaded). */
+	loadPositions: { from: number; to: number }[];
+}
+
+/** Whether the hinges are restrained, and the reason when not. */
+export function checkHingeRestraint(o: HingeRestraintInput): { ok: boolean; reason?: string } {
+	if (o.segments.length === 0) return { ok: true };
+	for (const hinge of o.hinges) {
+		const m = o.members[spanOf(o.nodes, hinge.x)];
+		const near = o.segments.filter(
+			(s) => Math.abs(s.from - hinge.x) <= m.h / 2 || Math.abs(s.to - hinge.x) <= m.h / 2
+		);
+		if (near.length === 0) {
+			return { ok: false, reason: `no lateral restraint within h/2 of the hinge at ${mmToM(hinge.x).toFixed(2)} m` };
+		}
+		for (const s of near) {
+			const loaded = o.loadPositions.some((l) => l.to > s.from && l.from < s.to);
+			const psi = loaded
+				? 1
+				: computeEndMomentRatio(momentAt(o.diagram, s.from, 'right'), momentAt(o.diagram, s.to, 'left'));
+			const stable = o.basis.computeStableLength({ fy: m.fy, iz: m.iz, h: m.h, tf: m.tf, psi });
+			if (stable === null || s.to - s.from > stable) {
+				return {
+					ok: false,
+					reason: `the segment from ${mmToM(s.from).toFixed(2)} to ${mmToM(s.to).toFixed(2)} m next to a hinge is longer than the stable length`
+				};
+			}
+		}
+	}
+	return { ok: true };
+}

@@ -1,0 +1,60 @@
+/**
+ * Bending with shear on the elastic routes (EN 1993-1-1 6.2.8): at span ends and beside point
+ * loads, |M| against My,V,Rd for the shear there. (On the plastic route the reduction is built
+ * into the hinge capacities instead.) Class 3 uses (1 − ρ)·Wel·fy/γM0, a conservative
+ * simplification of the elastic interaction.
+ */
+import type { Side } from '../elastic/index';
+import { listPointLoadPositions, type CheckContext } from './context';
+import { spanOf } from './plastic-bending';
+import type { CheckResult } from './types';
+import { findWorstArrangement } from './worst-arrangement';
+
+/** The interaction row, or null when no span has a known shear resistance. */
+export function checkBeamInteraction(
+	ctx: CheckContext,
+	o: { vRd: (number | null)[]; elastic: boolean }
+): CheckResult | null {
+	if (o.vRd.every((v) => v === null)) return null;
+	const points: { x: number; side: Side; span: number }[] = [];
+	ctx.beam.spans.forEach((_, i) => {
+		points.push({ x: ctx.nodes[i], side: 'right', span: i }, { x: ctx.nodes[i + 1], side: 'left', span: i });
+	});
+	for (const x of listPointLoadPositions(ctx.loads)) {
+		const span = spanOf(ctx.nodes, x);
+		points.push({ x, side: 'left', span }, { x, side: 'right', span });
+	}
+	const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
+		let best = { utilisation: 0, mEd: 0, vEd: 0, rho: 0, mvRd: 0, x: 0 };
+		for (const p of points) {
+			const vplRd = o.vRd[p.span];
+			const m = ctx.members[p.span];
+			if (vplRd === null) continue;
+			const f = ctx.effects.fixedAt(arr, p.x, p.side);
+			const v = ctx.effects.variableAt(arr, p.x, p.side);
+			const mEd = Math.abs(f.M + t * v.M);
+			const vEd = Math.abs(f.V + t * v.V);
+			const rho = ctx.basis.computeShearReduction({ vEd, vplRd });
+			const mvRd = o.elastic
+				? ((1 - rho) * m.Wel * m.fy) / ctx.gammaM0
+				: ctx.basis.computeReducedMomentResistance({ Wpl: m.Wpl, Aw: m.hw * m.tw, tw: m.tw, fy: m.fy, gammaM0: ctx.gammaM0, rho });
+			const u = mvRd > 0 ? mEd / mvRd : mEd > 0 ? Number.MAX_VALUE : 0;
+			if (u > best.utilisation) best = { utilisation: u, mEd, vEd, rho, mvRd, x: p.x };
+		}
+		return { utilisation: best.utilisation, detail: best };
+	});
+	const d = worst.detail;
+	return {
+		id: 'interaction',
+		label: 'Bending with shear',
+		clause: 'EN 1993-1-1 6.2.8',
+		level: 'governing',
+		utilisation: worst.utilisation,
+		utilisationExisting: worst.utilisationExisting,
+		pass: worst.utilisation <= 1,
+		multiplierAtCapacity: worst.multiplier,
+		values: { mEd: d.mEd, vEd: d.vEd, rho: d.rho, myVRd: d.mvRd },
+		x: d.x,
+		arrangement: worst.arrangement.name
+	};
+}

@@ -1,0 +1,98 @@
+/**
+ * Lateral-torsional buckling of every laterally unrestrained segment (EN 1993-1-1 6.3.2):
+ * Mcr from the segment's own moment diagram and load height (general energy method), χLT by
+ * the basis, Mb,Rd, and the worst load arrangement. Segments reaching a free cantilever tip are
+ * outside scope (the fork-end model does not hold there).
+ */
+import type { Load } from '../model/types';
+import { E_STEEL, G_STEEL } from '../units';
+import type { CheckContext } from './context';
+import { applyArrangement } from './factor-loads';
+import type { LoadArrangement } from './load-arrangements';
+import { computeCriticalMoment } from './mcr';
+import { spanOf } from './plastic-bending';
+import { computeLoadHeight, type LoadHeight, type RestraintSegment } from './restraint';
+import type { LtbSegment, SegmentLoad } from './segment-moment';
+import type { CheckResult } from './types';
+import { findWorstArrangement } from './worst-arrangement';
+
+/** Options of {@link checkBeamLtb}. */
+export interface LtbCheckOptions {
+	segments: RestraintSegment[];
+	/** Where the loads act over the depth. */
+	loadHeight: LoadHeight;
+	/** Use Wel (Class 3) instead of Wpl for Wy. */
+	elasticModulus: boolean;
+}
+
+/** LTB rows, and the reasons a segment is outside scope. */
+export function checkBeamLtb(ctx: CheckContext, o: LtbCheckOptions): { checks: CheckResult[]; outOfScope: string[] } {
+	const checks: CheckResult[] = [];
+	const outOfScope: string[] = [];
+	const designLoads = new Map<LoadArrangement, ReturnType<typeof applyArrangement>>();
+	const loadsOf = (arr: LoadArrangement) => {
+		let d = designLoads.get(arr);
+		if (!d) designLoads.set(arr, (d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement: arr })));
+		return d;
+	};
+	o.segments.forEach((seg, index) => {
+		const m = ctx.members[spanOf(ctx.nodes, (seg.from + seg.to) / 2)];
+		if (seg.freeEnd) {
+			outOfScope.push('A cantilever whose tip is not restrained laterally: its buckling is outside this tool (add a restraint at the tip).');
+			return;
+		}
+		if (!m.propsKnown) return;
+		const Wy = o.elasticModulus ? m.Wel : m.Wpl;
+		const zg = computeLoadHeight(o.loadHeight, m.h);
+		const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
+			const d = loadsOf(arr);
+			const segment: LtbSegment = {
+				length: seg.to - seg.from,
+				momentStart: ctx.effects.fixedAt(arr, seg.from, 'right').M + t * ctx.effects.variableAt(arr, seg.from, 'right').M,
+				momentEnd: ctx.effects.fixedAt(arr, seg.to, 'left').M + t * ctx.effects.variableAt(arr, seg.to, 'left').M,
+				loads: [...clipLoads(d.fixed, seg, 1), ...clipLoads(d.variable, seg, t)]
+			};
+			const cr = computeCriticalMoment({ segment, EIz: E_STEEL * m.Iz, GIt: G_STEEL * m.It, EIw: E_STEEL * m.Iw, zg });
+			if (cr === null) return { utilisation: 0, detail: null };
+			const r = ctx.basis.computeLtbResistance({ shape: m.shape, h: m.h, b: m.b, Wy, fy: m.fy, mcr: cr.mcr, gammaM1: ctx.gammaM1 });
+			return { utilisation: cr.mMax / r.mbRd, detail: { ...r, mcr: cr.mcr, mEd: cr.mMax } };
+		});
+		const d = worst.detail;
+		checks.push({
+			id: 'ltb',
+			label: `Lateral-torsional buckling, segment ${index + 1}`,
+			clause: d?.method ?? 'EN 1993-1-1 6.3.2',
+			level: 'governing',
+			utilisation: worst.utilisation,
+			utilisationExisting: worst.utilisationExisting,
+			pass: worst.utilisation <= 1,
+			multiplierAtCapacity: worst.multiplier,
+			values: d
+				? { mEd: d.mEd, mcr: d.mcr, lambdaLT: d.lambdaBar, chiLT: d.chiLT, mbRd: d.mbRd, from: seg.from, to: seg.to }
+				: { from: seg.from, to: seg.to },
+			x: seg.from,
+			arrangement: worst.arrangement.name,
+			note: d ? `χLT by ${d.method}, curve ${d.curve}; Mcr by the energy method for this segment's moment diagram.` : 'No moment in this segment.'
+		});
+	});
+	return { checks, outOfScope };
+}
+
+/** Loads inside a segment, in its own coordinate, scaled by a factor. */
+function clipLoads(loads: Load[], seg: RestraintSegment, factor: number): SegmentLoad[] {
+	const out: SegmentLoad[] = [];
+	if (factor === 0) return out;
+	for (const l of loads) {
+		if (l.kind === 'point') {
+			if (l.x > seg.from && l.x < seg.to) out.push({ kind: 'point', x: l.x - seg.from, value: l.value * factor });
+			continue;
+		}
+		const a = Math.max(l.from, seg.from);
+		const b = Math.min(l.to, seg.to);
+		if (b <= a) continue;
+		const at = (x: number) =>
+			l.kind === 'uniform' ? l.value : l.start + ((l.end - l.start) * (x - l.from)) / (l.to - l.from);
+		out.push({ kind: 'line', from: a - seg.from, to: b - seg.from, start: at(a) * factor, end: at(b) * factor });
+	}
+	return out;
+}

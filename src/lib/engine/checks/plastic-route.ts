@@ -1,0 +1,80 @@
+/**
+ * The plastic route: collapse of every load arrangement, the governing one, whether its hinges
+ * are restrained enough, and the bending row. Falls back to an elastic route when they are not.
+ */
+import { applyArrangement } from './factor-loads';
+import { describePlasticBending, pickGoverningCollapse } from './bending-check';
+import { buildCapacity } from './capacity';
+import type { CheckContext } from './context';
+import type { ScopeDecision, ScopeInput } from './en1993/scope';
+import { checkHingeRestraint } from './hinge-restraint';
+import type { CollapseSummary } from './inputs';
+import { solvePlasticArrangement } from './plastic-bending';
+import type { RestraintSegment } from './restraint';
+import type { CheckResult } from './types';
+
+/** Outcome of the plastic route. */
+export interface PlasticRouteOutcome {
+	scope: ScopeDecision;
+	collapse: CollapseSummary;
+	bending: CheckResult;
+}
+
+/** Solves the plastic route (fills ctx.plastic with every arrangement's collapse). */
+export function runPlasticRoute(
+	ctx: CheckContext,
+	o: { segments: RestraintSegment[]; vRd: (number | null)[]; scopeBase: ScopeInput }
+): PlasticRouteOutcome {
+	const capacity = buildCapacity(ctx.beam.spans, ctx.members.map((m) => m.mp / ctx.gammaM0));
+	const all = ctx.arrangements.map((arrangement) => {
+		const d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement });
+		const p = solvePlasticArrangement({
+			basis: ctx.basis,
+			beam: ctx.beam,
+			members: ctx.members,
+			nodes: ctx.nodes,
+			capacity,
+			arrangement,
+			fixedLoads: d.fixed,
+			variableLoads: d.variable,
+			effects: ctx.effects,
+			vplRd: o.vRd,
+			gammaM0: ctx.gammaM0
+		});
+		ctx.plastic.set(arrangement, p);
+		return p;
+	});
+	const g = pickGoverningCollapse(all);
+	const r = g.result;
+	const hinges = 'hinges' in r ? r.hinges : [];
+	const restraint =
+		'diagram' in r
+			? checkHingeRestraint({
+					basis: ctx.basis,
+					hinges,
+					diagram: r.diagram,
+					segments: o.segments,
+					nodes: ctx.nodes,
+					members: ctx.members,
+					loadPositions: ctx.loads.map((l) => (l.kind === 'point' ? { from: l.x, to: l.x } : { from: l.from, to: l.to }))
+				})
+			: { ok: true };
+	const scope = ctx.basis.decideRoute({
+		...o.scopeBase,
+		collapseCertified: all.every((p) => p.certified),
+		hingesRestrained: restraint.ok,
+		hingeRestraintNote: restraint.reason
+	});
+	return {
+		scope,
+		collapse: {
+			loadFactor: g.loadFactor,
+			certified: g.certified,
+			mechanism: 'mechanism' in r ? r.mechanism.name : null,
+			hinges: hinges.map((h) => ({ x: h.x, moment: h.moment })),
+			arrangement: g.arrangement.name,
+			reductions: g.reductions
+		},
+		bending: describePlasticBending(ctx, g)
+	};
+}

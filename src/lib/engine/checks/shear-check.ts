@@ -1,0 +1,61 @@
+/**
+ * Shear check over the beam (EN 1993-1-1 6.2.6): the largest design shear at the span ends and
+ * beside every point load, against Vpl,Rd of that span, worst load arrangement.
+ */
+import type { Side } from '../elastic/index';
+import { listPointLoadPositions, readShears, type CheckContext } from './context';
+import { spanOf } from './plastic-bending';
+import type { CheckResult } from './types';
+import { findWorstArrangement } from './worst-arrangement';
+
+/** Plastic shear resistance per span, N, or null where the section is known only by Mp. */
+export function computeSpanShearResistances(ctx: CheckContext): (number | null)[] {
+	return ctx.members.map((m) => {
+		if (!m.propsKnown) return null;
+		const Av = ctx.basis.computeShearArea({ ...m, eta: ctx.eta });
+		return Av === null ? null : ctx.basis.computeShearResistance({ Av, fy: m.fy, gammaM0: ctx.gammaM0 });
+	});
+}
+
+/**
+ * The shear check, or null when no span has a known shear resistance.
+ */
+export function checkBeamShear(ctx: CheckContext, vRd: (number | null)[]): CheckResult | null {
+	if (vRd.every((v) => v === null)) return null;
+	const points: { x: number; side: Side; span: number }[] = [];
+	ctx.beam.spans.forEach((_, i) => {
+		points.push({ x: ctx.nodes[i], side: 'right', span: i }, { x: ctx.nodes[i + 1], side: 'left', span: i });
+	});
+	for (const x of listPointLoadPositions(ctx.loads)) {
+		const span = spanOf(ctx.nodes, x);
+		points.push({ x, side: 'left', span }, { x, side: 'right', span });
+	}
+	const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
+		let best = { utilisation: 0, vEd: 0, vRd: 0, x: 0 };
+		for (const p of points) {
+			const r = vRd[p.span];
+			if (r === null) continue;
+			const vEd = Math.max(...readShears(ctx, arr, p.x, p.side, t).map(Math.abs));
+			if (vEd / r > best.utilisation) best = { utilisation: vEd / r, vEd, vRd: r, x: p.x };
+		}
+		return { utilisation: best.utilisation, detail: best };
+	});
+	const d = worst.detail;
+	return {
+		id: 'shear',
+		label: 'Shear',
+		clause: 'EN 1993-1-1 6.2.6',
+		level: 'governing',
+		utilisation: worst.utilisation,
+		utilisationExisting: worst.utilisationExisting,
+		pass: worst.utilisation <= 1,
+		multiplierAtCapacity: worst.multiplier,
+		values: { vEd: d.vEd, vRd: d.vRd },
+		x: d.x,
+		arrangement: worst.arrangement.name,
+		note:
+			ctx.plastic.size > 0
+				? 'Larger of the elastic shear and the shear of the collapse moment field at the design load.'
+				: 'Elastic shear.'
+	};
+}
