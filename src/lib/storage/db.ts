@@ -81,8 +81,11 @@ export async function openStore(
 	let store: CheckStore | null = null;
 	try {
 		const db = await openDB<HingepointDB>(name, DB_VERSION, {
-			upgrade: (database, oldVersion, newVersion, tx) =>
-				applyStoreMigrations(database, tx, oldVersion, newVersion ?? DB_VERSION),
+			upgrade: (database, oldVersion, newVersion, tx) => {
+				// A failed upgrade rejects openDB itself; this only keeps the abort from surfacing twice.
+				tx.done.catch(() => undefined);
+				applyStoreMigrations(database, tx, oldVersion, newVersion ?? DB_VERSION);
+			},
 			blocked: () => options.onBlocked?.(),
 			// A newer version waits for us: let it upgrade, and have the UI offer the reload.
 			blocking: () => store?.close('update-needed'),

@@ -25,12 +25,15 @@ export function fail<T>(reason: StoreFailureReason, message?: string): StoreResu
 
 /**
  * Maps an IndexedDB error to a failure outcome: a full disk to 'quota', a closed or evicted
- * connection to 'closed', anything else to 'storage'.
+ * connection to 'closed', data that cannot be cloned and anything else to 'storage'.
  */
 export function toFailure<T>(error: unknown): StoreResult<T> {
 	const name = readErrorName(error);
 	if (name === 'QuotaExceededError') return fail('quota');
 	if (name === 'InvalidStateError' || name === 'TransactionInactiveError') return fail('closed');
+	if (name === 'DataCloneError') {
+		return fail('storage', 'This check holds data that cannot be stored, so nothing was changed. Please report it.');
+	}
 	return fail('storage');
 }
 

@@ -88,3 +88,15 @@ describe('formatQuantity', () => {
 		expect(formatQuantity(-0.0001, 'force', 'SI')).toBe('0.0\u00a0kN');
 	});
 });
+
+describe('the engine’s US factors (src/lib/engine/units.ts)', () => {
+	it('equal the exact definitions of NIST SP 811 Appendix B', async () => {
+		const { US } = await import('../../../src/lib/engine/units');
+		expectRel(US.inToMm, IN_M * 1000, 1e-15);
+		expectRel(US.ftToM, FT_M, 1e-15);
+		expectRel(US.kipToKN, KIP_KN, 1e-14);
+		expectRel(US.ksiToMPa, KSI_MPA, 1e-14);
+		// lb/ft → kg/m: 0.453 592 37 kg per 0.3048 m.
+		expectRel(US.lbPerFtToKgPerM, 0.45359237 / FT_M, 1e-14);
+	});
+});
