@@ -1,0 +1,79 @@
+/**
+ * The `check` command, run as a separate process on the demo fixtures (invented cases): exit
+ * codes, the JSON fields, and one number against simple plastic theory (B.G. Neal, "The Plastic
+ * Methods of Structural Analysis", 1977: W = 4Mp/L for a central load — from memory).
+ */
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+
+const FIXTURES = 'test/fixtures/cases';
+
+function runCheck(...args: string[]): { code: number | null; out: string; err: string } {
+	// The local tsx binary is what `npx tsx` runs, without npx's start-up cost per call.
+	const r = spawnSync('node_modules/.bin/tsx', ['src/cli/main.ts', 'check', ...args], { encoding: 'utf8', timeout: 60_000 });
+	return { code: r.status, out: r.stdout, err: r.stderr };
+}
+
+describe('check command', () => {
+	it('prints one JSON report and exits 0; λ = 4Mp/(LW) for the known-Mp demo', () => {
+		const r = runCheck(`${FIXTURES}/demo-known-mp-central-point.json`, '--json');
+		expect(r.code).toBe(0);
+		const report = JSON.parse(r.out);
+		const [Mp, L, W] = [100, 6, 10]; // as in the fixture
+		expect(Math.abs(report.collapse.loadFactor - (4 * Mp) / L / W)).toBeLessThan(1e-9 * 6.67);
+		for (const key of ['mpRd', 'collapse', 'temporaryCapacity', 'elastic', 'section', 'grade', 'notices', 'assumptions', 'engineVersion'])
+			expect(report).toHaveProperty(key);
+		expect(report.collapse).toMatchObject({ appliesTo: 'temporary', certified: true });
+		expect(report.collapse.hinges[0]).toMatchObject({ x: 3 });
+	});
+
+	it('exits 0 also when the beam fails, and says so', () => {
+		const r = runCheck(`${FIXTURES}/demo-overloaded.json`, '--json');
+		expect(r.code).toBe(0);
+		expect(JSON.parse(r.out).collapse).toMatchObject({ status: 'fails-under-fixed', loadFactor: null });
+	});
+
+	it('adds the capacity curve field with --curve', () => {
+		const r = runCheck(`${FIXTURES}/demo-hoist-on-ub.json`, '--json', '--curve');
+		expect(r.code).toBe(0);
+		expect(JSON.parse(r.out)).toHaveProperty('capacityCurve');
+	});
+
+	it('exits 2 on invalid input and names each field', () => {
+		const r = runCheck(`${FIXTURES}/invalid-fields.json`, '--json');
+		expect(r.code).toBe(2);
+		const paths = JSON.parse(r.out).errors.map((e: { path: string }) => e.path);
+		expect(paths).toEqual(expect.arrayContaining(['beam.spans[1]', 'beam.supports', 'beam.section.designation']));
+	});
+
+	it('exits 2 with an error object on a JSON syntax error or a missing file', () => {
+		for (const file of [`${FIXTURES}/invalid-syntax.json`, `${FIXTURES}/no-such-case.json`]) {
+			const r = runCheck(file, '--json');
+			expect(r.code).toBe(2);
+			expect(JSON.parse(r.out).errors[0].message).toMatch(/JSON|cannot read/);
+		}
+	});
+
+	it('prints a readable summary without --json', () => {
+		const dir = mkdtempSync(join(tmpdir(), 'hp-check-'));
+		const file = join(dir, 'case.json');
+		writeFileSync(
+			file,
+			JSON.stringify({
+				format: 'hingepoint.case',
+				version: 1,
+				title: 'DEMO — invented text case',
+				beam: { spans: [4], supports: ['fixed', 'free'], section: { mp: 40 } },
+				loads: [{ kind: 'point', x: 4, value: 2, action: 'temporary' }]
+			})
+		);
+		const r = runCheck(file);
+		expect(r.code).toBe(0);
+		// Cantilever tip load: W = Mp/L (Neal) → λ = 40/(4 · 2 · 1.5) = 3.333 with γ temporary 1.5.
+		expect(r.out).toContain('load factor λ = 3.333');
+		expect(r.out).toContain('Screening aid only.');
+	});
+});
