@@ -40,16 +40,19 @@ describe('UB rows (BS 4-1:2005 / EN 10365:2017)', () => {
 
 // SCI P363 tabulated values, from memory: kg/m, A cm², Iy cm⁴, Wel,y cm³, Wpl,y cm³, Iz cm⁴,
 // It cm⁴, Iw dm⁶, d mm, iy cm, iz cm.
-const TABULATED = [
+type Row = readonly [string, ...number[]];
+const TABULATED: readonly Row[] = [
 	['UB 203x133x25', 25.1, 32.0, 2340, 230, 258, 308, 5.96, 0.0294, 172.4, 8.56, 3.10],
 	['UB 254x146x31', 31.1, 39.7, 4410, 351, 393, 448, 8.55, 0.066, 219.0, 10.5, 3.36],
 	['UB 305x165x40', 40.3, 51.3, 8500, 560, 623, 764, 14.7, 0.164, 265.2, 12.9, 3.86],
 	['UB 356x171x51', 51.0, 64.9, 14100, 796, 896, 968, 23.8, 0.286, 311.6, 14.8, 3.86],
 	['UB 457x191x67', 67.1, 85.5, 29400, 1300, 1470, 1450, 37.1, 0.705, 407.6, 18.5, 4.12]
-] as const;
+];
 
 describe('UB properties against SCI P363 tables (from memory)', () => {
-	it.each(TABULATED)('%s', (designation, mass, A, Iy, Wely, Wply, Iz, It, Iw, d, iy, iz) => {
+	const cases = TABULATED.map((row) => [row[0], row.slice(1) as number[]] as const);
+	it.each(cases)('%s', (designation, values) => {
+		const [mass, A, Iy, Wely, Wply, Iz, It, Iw, d, iy, iz] = values;
 		const s = ubs.find((x) => x.designation === designation)!;
 		const p = s.props;
 		expectRel(p.mass, mass, 0.01);
