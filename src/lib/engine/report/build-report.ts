@@ -3,10 +3,12 @@
  * collapse, the temporary-load capacity, the optional capacity curve and the elastic results.
  */
 import type { CaseModel } from '../case/types';
-import { computeCapacityCurve } from '../collapse/capacity-curve';
-import { solveCollapse } from '../collapse/solve';
-import type { CollapseProblem } from '../collapse/types';
-import { validateCollapseProblem } from '../collapse/validate-problem';
+import {
+	computeCapacityCurve,
+	solveCollapse,
+	validateCollapseProblem,
+	type CollapseProblem
+} from '../collapse/index';
 import type { InputIssue } from '../model/issue';
 import { nPerMmToKNPerM } from '../units';
 import { reportCapacityCurve, reportTemporaryCapacity } from './capacity-report';

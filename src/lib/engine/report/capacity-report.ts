@@ -3,7 +3,7 @@
  * largest single temporary point load along the beam (the capacity curve).
  */
 import type { CaseModel } from '../case/types';
-import type { CapacityCurve } from '../collapse/types';
+import type { CapacityCurve } from '../collapse/index';
 import { mmToM, nToKN } from '../units';
 import { sumLoadForce } from './design-loads';
 import type { CapacityCurveReport, TemporaryCapacityReport } from './types';

@@ -1,7 +1,7 @@
 /**
  * Converts the collapse solver's result (mm, N, N·mm) into the report's collapse part (m, kN, kNm).
  */
-import type { CollapseResult } from '../collapse/types';
+import type { CollapseResult } from '../collapse/index';
 import { mmToM, nToKN, nmmToKNm } from '../units';
 import type { CollapseReport, LambdaScope } from './types';
 
