@@ -1,0 +1,164 @@
+/**
+ * Text for sharing a result: a short message (under about 600 characters) and a long form with
+ * every input and check. Plain text only (see plain-text.ts). The date comes in as text: the
+ * engine has no clock. Numbers arrive in output units (m, kN, kN/m, kNm, mm).
+ */
+import { toPlainText } from './plain-text';
+import type { VerdictKind } from './types';
+
+/** Longest short message, characters. */
+export const SHORT_SUMMARY_LIMIT = 600;
+
+/** A load line as shown: value in kN or kN/m, positions in m. */
+export interface SummaryLoad {
+	action: 'permanent' | 'imposed' | 'temporary';
+	kind: 'point' | 'uniform' | 'linear';
+	/** kN (point) or kN/m (peak for linear). */
+	value: number;
+	/** m: the point, or the loaded stretch. */
+	at?: number;
+	from?: number;
+	to?: number;
+	label?: string | null;
+}
+
+/** A check line. */
+export interface SummaryCheck {
+	label: string;
+	clause: string;
+	utilisation: number;
+	pass: boolean;
+	level: 'governing' | 'warning';
+	/** Key numbers already formatted with their units, e.g. `VEd 65.2 kN`. */
+	details: string[];
+}
+
+/** What the summary shows. */
+export interface SummaryInput {
+	title: string;
+	place?: string;
+	/** As the user should read it, e.g. `1 Dec 2026`. */
+	date?: string;
+	/** Spans in m and the support kinds left to right. */
+	spans: number[];
+	supports: string[];
+	section: string;
+	grade: string;
+	loads: SummaryLoad[];
+	/** Name of the factor set and its values. */
+	factorSet: string;
+	factors: Record<string, number>;
+	verdict: VerdictKind;
+	routeReasons: string[];
+	governing: { label: string; utilisation: number } | null;
+	loadFactor: number | null;
+	/** %. */
+	reserve: number | null;
+	/** Largest temporary loads, as entered: e.g. `{ text: 'T1', value: 65.3, unit: 'kN' }`. */
+	allowable: { name: string; value: number; unit: string }[];
+	checks: SummaryCheck[];
+	governingArrangement?: string;
+	notice: string;
+	notices: string[];
+	assumptions: string[];
+}
+
+const VERDICT_WORDS: Record<VerdictKind, string> = {
+	pass: 'PASS',
+	fail: 'FAIL',
+	'outside-scope': 'OUTSIDE SCOPE'
+};
+
+/** Rounds to 3 significant figures, plain notation. */
+export function formatNumber(v: number): string {
+	if (!Number.isFinite(v)) throw new Error('invariant: summary numbers are finite');
+	return Number(v.toPrecision(3)).toString();
+}
+
+function describeLoad(l: SummaryLoad): string {
+	const who = l.label ? `${l.label} ` : '';
+	const a = l.action === 'permanent' ? 'permanent' : l.action === 'imposed' ? 'imposed' : 'temporary';
+	if (l.kind === 'point') return `${who}${a} ${formatNumber(l.value)} kN at ${formatNumber(l.at ?? 0)} m`;
+	return `${who}${a} ${formatNumber(l.value)} kN/m from ${formatNumber(l.from ?? 0)} to ${formatNumber(l.to ?? 0)} m`;
+}
+
+function describeBeam(s: SummaryInput): string {
+	return `${s.spans.map((L) => `${formatNumber(L)} m`).join(' + ')} (${s.supports.join('-')}), ${s.section}, ${s.grade}`;
+}
+
+function describeResult(s: SummaryInput): string {
+	const parts = [VERDICT_WORDS[s.verdict]];
+	if (s.governing) parts.push(`governed by ${s.governing.label} at ${Math.round(s.governing.utilisation * 100)} %`);
+	if (s.loadFactor !== null) parts.push(`load factor ${formatNumber(s.loadFactor)}`);
+	if (s.reserve !== null) parts.push(`reserve ${Math.round(s.reserve)} %`);
+	if (s.verdict === 'outside-scope' && s.routeReasons[0]) parts.push(s.routeReasons[0]);
+	return parts.join(', ');
+}
+
+/**
+ * The short message; drops the load list, then the allowable loads, then the place, until it
+ * fits {@link SHORT_SUMMARY_LIMIT}.
+ * @example
+ * writeShortSummary(input).length <= 600 // true
+ */
+export function writeShortSummary(s: SummaryInput): string {
+	const head = [s.title || 'Beam check', [s.place, s.date].filter(Boolean).join(', ')];
+	const loads = `Loads: ${s.loads.map(describeLoad).join('; ')}`;
+	const allow = s.allowable.length
+		? `Largest temporary load: ${s.allowable.map((a) => `${a.name} ${formatNumber(a.value)} ${a.unit}`).join(', ')}`
+		: '';
+	const build = (withLoads: boolean, withAllow: boolean, withPlace: boolean) =>
+		toPlainText(
+			[
+				withPlace ? head.join(', ').replace(/, $/, '') : head[0],
+				`Beam: ${describeBeam(s)}`,
+				withLoads ? loads : '',
+				`Factors: ${s.factorSet}`,
+				`Result: ${describeResult(s)}`,
+				withAllow ? allow : '',
+				s.notice
+			]
+				.filter(Boolean)
+				.join('\n')
+		);
+	for (const [l, a, p] of [
+		[true, true, true],
+		[false, true, true],
+		[false, false, true],
+		[false, false, false]
+	] as const) {
+		const text = build(l, a, p);
+		if (text.length <= SHORT_SUMMARY_LIMIT) return text;
+	}
+	return build(false, false, false).slice(0, SHORT_SUMMARY_LIMIT - 1) + '…';
+}
+
+/** The long form: every input, factor, check, notice and assumption. */
+export function writeLongSummary(s: SummaryInput): string {
+	const lines = [
+		s.title || 'Beam check',
+		[s.place, s.date].filter(Boolean).join(', '),
+		'',
+		`Beam: ${describeBeam(s)}`,
+		'Loads (characteristic):',
+		...s.loads.map((l) => `  • ${describeLoad(l)}`),
+		`Factors: ${s.factorSet}; ${Object.entries(s.factors).map(([k, v]) => `${k} ${v}`).join(', ')}`,
+		s.governingArrangement ? `Governing load arrangement: ${s.governingArrangement}` : '',
+		'',
+		`Result: ${describeResult(s)}`,
+		...s.routeReasons.map((r) => `Route: ${r}`),
+		...s.allowable.map((a) => `Largest temporary load ${a.name}: ${formatNumber(a.value)} ${a.unit}`),
+		'',
+		'Checks:',
+		...s.checks.map(
+			(c) =>
+				`  • ${c.label} (${c.clause}): ${Math.round(c.utilisation * 100)} % ${c.pass ? 'ok' : c.level === 'warning' ? 'over the limit (warning only)' : 'NOT OK'}${c.details.length ? `; ${c.details.join(', ')}` : ''}`
+		),
+		'',
+		'Notices:',
+		...[s.notice, ...s.notices.filter((n) => n !== s.notice)].map((n) => `  • ${n}`),
+		'Assumptions:',
+		...s.assumptions.map((a) => `  • ${a}`)
+	];
+	return toPlainText(lines.filter((l, i) => l !== '' || lines[i - 1] !== '').join('\n'));
+}
