@@ -17,10 +17,11 @@ function makeSection(
 	dims: SectionDims,
 	nominalMass?: number
 ): LibrarySection {
-	const props = Object.freeze(computeSectionProperties(shape, dims));
-	// Frozen: every caller shares these objects, so none may change them for the others.
-	const section = { designation, family, standard, shape, dims: Object.freeze(dims), props };
-	return Object.freeze(nominalMass === undefined ? section : { ...section, nominalMass });
+	const props = computeSectionProperties(shape, dims);
+	// Shared by every caller and deliberately not frozen: Svelte's $state proxies cannot wrap
+	// frozen objects. Callers copy before changing anything (resolveSection does).
+	const section = { designation, family, standard, shape, dims, props };
+	return nominalMass === undefined ? section : { ...section, nominalMass };
 }
 
 /** Wall thickness as printed in hollow-section designations: always one decimal (5.0, 6.3). */
