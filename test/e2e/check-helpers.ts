@@ -1,0 +1,46 @@
+/**
+ * Helpers for driving the check form: fields are found by the case path they edit, the same path
+ * the engine names in its messages.
+ */
+import type { Page } from '@playwright/test';
+import { expect } from './fixtures';
+
+/** The DOM id the form gives the field at a case path (mirrors src/routes/check/field-id.ts). */
+export function fieldIdOf(path: string): string {
+	return `f-${path.replace(/[^a-zA-Z0-9]+/g, '-').replace(/-$/, '')}`;
+}
+
+/** Replaces the text of the numeric field at a case path. */
+export async function typeInto(page: Page, path: string, text: string): Promise<void> {
+	await page.getByTestId(`field-${fieldIdOf(path)}`).fill(text);
+}
+
+/** The text shown in the numeric field at a case path. */
+export function fieldAt(page: Page, path: string) {
+	return page.getByTestId(`field-${fieldIdOf(path)}`);
+}
+
+/** Waits for a computed result and returns λ as shown. */
+export async function readLoadFactor(page: Page): Promise<number> {
+	const shown = page.getByTestId('load-factor');
+	await expect(shown).toHaveText(/^\d/);
+	return Number.parseFloat((await shown.textContent()) ?? '');
+}
+
+/**
+ * Enters a simply supported beam of span L (m) with a known Mp (kNm), restrained along its
+ * length, and one proposed temporary point load P (kN) at x (m), starting from a blank form.
+ */
+export async function enterSimpleBeam(
+	page: Page,
+	o: { span: string; mp: string; x: string; load: string }
+): Promise<void> {
+	await page.getByTestId('start-blank').click();
+	await page.getByText('Known Mp', { exact: true }).click();
+	await typeInto(page, 'beam.spans[0]', o.span);
+	await typeInto(page, 'beam.section.mp', o.mp);
+	await page.getByRole('button', { name: '+ Point load' }).click();
+	await typeInto(page, 'loads[0].x', o.x);
+	await typeInto(page, 'loads[0].value', o.load);
+	await page.getByText('Along its whole length', { exact: false }).click();
+}
