@@ -3,9 +3,10 @@
  * and reactions, all scaled back to N, mm and N·mm.
  */
 import { assertFinite } from '../model/issue';
-import { combineLowerBound, computeEquilibriumResidual, computeUpperBound } from './certify';
+import { computeEquilibriumResidual, computeLowerBound, computeUpperBound } from './certify';
 import { sampleDiagram, scaleDiagram } from './diagram';
 import type { StaticSolution } from './lower-bound';
+import { consolidateHinges, makeCompatible } from './hinge-set';
 import { findMovingSpans, nameMechanism, readHinges } from './mechanism';
 import type { ProblemScale } from './normalise';
 import { evaluateMoment, type FieldModel } from './statics';
@@ -17,22 +18,6 @@ export const CERTIFY_GAP = 1e-6;
 /** Largest equilibrium or compatibility error accepted in a certificate (relative). */
 const RESIDUAL_LIMIT = 1e-9;
 
-/** Hinges closer than this (relative to the length) are one hinge found twice. */
-const SAME_HINGE = 1e-9;
-
-function mergeHinges(hinges: { x: number; side: number; rotation: number }[]) {
-	const out: { x: number; side: number; rotation: number }[] = [];
-	for (const h of hinges) {
-		const last = out[out.length - 1];
-		if (last && last.side === h.side && Math.sign(last.rotation) === Math.sign(h.rotation) && h.x - last.x <= SAME_HINGE) {
-			const r = last.rotation + h.rotation;
-			last.x = (last.x * last.rotation + h.x * h.rotation) / r;
-			last.rotation = r;
-		} else out.push({ ...h });
-	}
-	return out;
-}
-
 /** Assembles the certified result from the optimal field `sol`. */
 export function certifyField(options: {
 	model: FieldModel;
@@ -43,16 +28,17 @@ export function certifyField(options: {
 }): CollapseResult {
 	const { model, grid, sol, fixedField, scale } = options;
 	const lambdaN = Math.max(0, sol.z[model.lambdaIndex]);
-	const lower = combineLowerBound(lambdaN, Math.max(0, sol.violation), fixedField.slack);
-	const kinks = readHinges(sol.points, sol.duals);
+	const lower = computeLowerBound({ model, grid, z1: sol.z, lambda1: lambdaN, z0: fixedField.z });
+	const raw = readHinges(sol.points, sol.duals);
+	const merged = consolidateHinges({ model, z: sol.z, ...grid, raw });
+	const kinks = makeCompatible(model.beam, merged).filter((h) => h.rotation !== 0);
 	const { upperBound, displacement } = computeUpperBound({ model, hinges: kinks });
 	const gap = Number.isFinite(upperBound) ? Math.abs(upperBound - lower) / Math.max(Math.abs(upperBound), 1e-300) : 1;
 	const equilibriumResidual = computeEquilibriumResidual(model, sol.z);
 	const spans = findMovingSpans(model.beam, displacement);
 	const mechanism = nameMechanism(model.beam, kinks, spans);
-	const merged = mergeHinges(kinks);
-	const largest = Math.max(...merged.map((h) => Math.abs(h.rotation)));
-	const hinges: Hinge[] = merged.map((h) => ({
+	const largest = Math.max(...kinks.map((h) => Math.abs(h.rotation)));
+	const hinges: Hinge[] = kinks.map((h) => ({
 		x: assertFinite(h.x * scale.length, 'hinge x'),
 		moment: assertFinite(evaluateMoment(model, sol.z, h.x, h.side as 1 | -1) * scale.moment, 'hinge moment'),
 		rotation: assertFinite(h.rotation / largest, 'hinge rotation')

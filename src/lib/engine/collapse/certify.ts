@@ -6,7 +6,8 @@ import { computeLoadResultant } from './load-effects';
 import { findStationaryPoints } from './extremes';
 import { evaluateMoment, type FieldModel } from './statics';
 import type { Interval, Station } from './stations';
-import { buildDisplacement, computeExternalWork, type Displacement, type Kink } from './virtual-work';
+import type { HingeCandidate } from './hinge-set';
+import { buildDisplacement, computeExternalWork, type Displacement } from './virtual-work';
 
 /** Largest |M|/Mp of field z over the stations and the exact interior extremes. */
 export function measureMomentRatio(model: FieldModel, z: number[], stations: Station[], intervals: Interval[]): number {
@@ -21,25 +22,67 @@ export function measureMomentRatio(model: FieldModel, z: number[], stations: Sta
 	return worst;
 }
 
+/** Largest M/Ms and −M/Mh of a field on each interval (ends and exact interior peaks). */
+export function measureIntervalRatios(model: FieldModel, z: number[], intervals: Interval[]): { sag: number; hog: number }[] {
+	return intervals.map((iv) => {
+		const xs: [number, 1 | -1][] = [
+			[iv.from, 1],
+			[iv.to, -1]
+		];
+		for (const x of findStationaryPoints(model, z, iv)) xs.push([x, -1]);
+		let sag = -Infinity;
+		let hog = -Infinity;
+		for (const [x, side] of xs) {
+			const M = evaluateMoment(model, z, x, side);
+			sag = Math.max(sag, M / iv.sag);
+			hog = Math.max(hog, -M / iv.hog);
+		}
+		return { sag, hog };
+	});
+}
+
 /**
- * Static-theorem bound. Field 1 (λ₁) may exceed Mp by the relative amount ε; field 0 (λ = 0)
- * stays below Mp with relative slack s. Their blend t·field₁ + (1 − t)·field₀ is in equilibrium
- * with t·λ₁ and admissible when t·ε ≤ (1 − t)·s, so t = s / (s + ε).
+ * Static-theorem bound. Field 1 (λ₁) may exceed Mp slightly somewhere; field 0 (λ = 0) is
+ * admissible. Their blend t·field₁ + (1 − t)·field₀ is in equilibrium with t·λ₁, and on each
+ * interval its peak is at most t·a₁ + (1 − t)·a₀ (a = largest M/Mp of each field there), so the
+ * largest t with t·a₁ + (1 − t)·a₀ ≤ 1 on every interval and in both senses gives an admissible
+ * field: λ_lower = t·λ₁. A station's resistance can be the weaker side's, so stations are
+ * checked too, as intervals of zero length.
  */
-export function combineLowerBound(lambda1: number, excess: number, slack: number): number {
-	if (excess <= 0) return lambda1;
-	if (slack <= 0) return 0;
-	return (slack / (slack + excess)) * lambda1;
+export function combineLowerBound(options: {
+	lambda1: number;
+	field1: { sag: number; hog: number }[];
+	field0: { sag: number; hog: number }[];
+}): number {
+	const { lambda1, field1, field0 } = options;
+	let t = 1;
+	const limit = (a1: number, a0: number) => {
+		if (a1 <= 1) return;
+		t = a0 < 1 ? Math.min(t, (1 - a0) / (a1 - a0)) : 0;
+	};
+	field1.forEach((r, i) => {
+		limit(r.sag, field0[i].sag);
+		limit(r.hog, field0[i].hog);
+	});
+	return Math.max(0, t) * lambda1;
+}
+
+/** Station ratios as zero-length intervals, for `combineLowerBound`. */
+export function measureStationRatios(model: FieldModel, z: number[], stations: Station[]): { sag: number; hog: number }[] {
+	return stations.map((s) => {
+		const M = evaluateMoment(model, z, s.x, s.side);
+		return { sag: M / s.sag, hog: -M / s.hog };
+	});
 }
 
 /** Kinematic-theorem bound: λ = (Σ Mp·|θ| − W_fixed) / W_variable, from the hinges alone. */
 export function computeUpperBound(options: {
 	model: FieldModel;
-	hinges: (Kink & { capacity: number })[];
+	hinges: HingeCandidate[];
 }): { upperBound: number; displacement: Displacement } {
 	const { model, hinges } = options;
 	const displacement = buildDisplacement(model.beam, hinges);
-	const internal = hinges.reduce((s, h) => s + h.capacity * Math.abs(h.rotation), 0);
+	const internal = hinges.reduce((s, h) => s + (h.rotation > 0 ? h.sag : h.hog) * Math.abs(h.rotation), 0);
 	const fixedWork = computeExternalWork(displacement, model.fixedLoads);
 	const variableWork = computeExternalWork(displacement, model.variableLoads);
 	const upperBound = variableWork > 0 ? (internal - fixedWork) / variableWork : Number.POSITIVE_INFINITY;
@@ -75,4 +118,18 @@ export function computeEquilibriumResidual(model: FieldModel, z: number[]): numb
 		}
 	}
 	return residual;
+}
+
+/** λ of an admissible field built from the optimum z1 (λ₁) and the fixed-load field z0. */
+export function computeLowerBound(options: {
+	model: FieldModel;
+	grid: { stations: Station[]; intervals: Interval[] };
+	z1: number[];
+	lambda1: number;
+	z0: number[];
+}): number {
+	const { model, grid, z1, lambda1, z0 } = options;
+	const field1 = [...measureIntervalRatios(model, z1, grid.intervals), ...measureStationRatios(model, z1, grid.stations)];
+	const field0 = [...measureIntervalRatios(model, z0, grid.intervals), ...measureStationRatios(model, z0, grid.stations)];
+	return combineLowerBound({ lambda1, field1, field0 });
 }

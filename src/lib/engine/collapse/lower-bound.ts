@@ -93,37 +93,50 @@ export function solveStaticProgram(options: {
 		addRow(lp, margin ? [...p.rowHog, 1] : p.rowHog, p.hHog);
 	};
 	points.forEach(addPoint);
-	for (let round = 0; round < 60; round++) {
+	let previous = NaN;
+	let still = 0;
+	let lastGood: StaticSolution | null = null;
+	for (let round = 0; round < MAX_ROUNDS; round++) {
 		const result = solveProgram(lp);
-		if (result.status !== 'optimal') return { status: result.status };
+		// A later round can only fail by rounding (it adds rows to a solved program): keep the last answer.
+		if (result.status !== 'optimal') return lastGood ?? { status: result.status };
+		if (result.residual > 1e-9 && lastGood) return lastGood;
 		const y = result.y;
 		const z = space.particular.slice();
 		for (let k = 0; k < d; k++) for (let i = 0; i < z.length; i++) z[i] += y[k] * space.basis[k][i];
 		const limit = margin ? 1 - y[d] : 1;
 		const peaks = findPeaks(model, z, intervals, limit);
-		const before = points.length;
-		addNewPoints(points, peaks.near, (s) => makePoint(model, space, s));
-		for (let i = before; i < points.length; i++) addPoint(points[i]);
-		if (points.length === before || round === 59) {
-			const duals = points.map((_, i) => [result.w[2 * i], result.w[2 * i + 1]] as [number, number]);
-			const violation = Math.max(peaks.worst, measureStations(model, z, stations, limit));
-			const objectiveValue = margin ? y[d] : z[model.lambdaIndex];
-			return { status: 'optimal', z, objective: objectiveValue, points, duals, violation };
-		}
+		const objective = margin ? y[d] : z[model.lambdaIndex];
+		const count = points.length;
+		const duals = points.map((_, i) => [result.w[2 * i], result.w[2 * i + 1]] as [number, number]);
+		const violation = Math.max(peaks.worst, measureStations(model, z, stations, limit));
+		lastGood = { status: 'optimal', z, objective, points: points.slice(), duals, violation };
+		// Where the optimum leaves part of the field free, its peaks can wander from round to round
+		// with λ unchanged; stop then and let the certificate account for what is left.
+		still = Math.abs(objective - previous) <= 1e-15 * Math.max(1, Math.abs(objective)) ? still + 1 : 0;
+		previous = objective;
+		if ((still >= 2 && violation <= 1e-12) || still >= 40) return lastGood;
+		addNewPoints(points, peaks.near, limit, (s) => makePoint(model, space, s));
+		if (points.length === count) return lastGood;
+		for (let i = count; i < points.length; i++) addPoint(points[i]);
 	}
-	throw new Error('invariant: unreachable');
+	return lastGood ?? { status: 'infeasible' };
 }
+
+/** Refinement rounds before the last answer is returned as it stands. */
+const MAX_ROUNDS = 60;
+
 
 /** Interior peaks of the field that come within 1e-9 of the limit, and the worst excess. */
 function findPeaks(model: FieldModel, z: number[], intervals: Interval[], limit: number) {
-	const near: Station[] = [];
+	const near: (Station & { ratio: number })[] = [];
 	let worst = -Infinity;
 	for (const iv of intervals) {
 		for (const x of findStationaryPoints(model, z, iv)) {
 			const M = evaluateMoment(model, z, x, -1);
 			const ratio = M >= 0 ? M / iv.sag : -M / iv.hog;
 			worst = Math.max(worst, ratio - limit);
-			if (ratio > limit - 1e-9) near.push({ x, side: -1, sag: iv.sag, hog: iv.hog });
+			if (ratio > limit - 1e-9) near.push({ x, side: -1, sag: iv.sag, hog: iv.hog, ratio });
 		}
 	}
 	return { near, worst };
@@ -139,14 +152,23 @@ export function measureStations(model: FieldModel, z: number[], stations: Statio
 	return worst;
 }
 
-function addNewPoints(points: CheckPoint[], candidates: Station[], make: (s: Station) => CheckPoint): number {
-	let added = 0;
+/**
+ * Adds peaks as new points: a violating peak unless it repeats a point (1e-13), a peak that only
+ * touches the limit when it is at least 1e-9 from every point. Touching peaks sharpen hinge
+ * positions (λ is stationary there, so 1e-9 in x is far below rounding in λ); spacing them out
+ * keeps the basis of the program well conditioned.
+ */
+function addNewPoints(
+	points: CheckPoint[],
+	candidates: (Station & { ratio: number })[],
+	limit: number,
+	make: (s: Station) => CheckPoint
+): void {
 	for (const s of candidates) {
-		if (points.some((p) => Math.abs(p.x - s.x) <= 1e-13)) continue;
-		points.push(make(s));
-		added++;
+		const spacing = s.ratio > limit + 1e-15 ? 1e-13 : 1e-9;
+		if (points.some((p) => Math.abs(p.x - s.x) <= spacing)) continue;
+		points.push(make({ x: s.x, side: s.side, sag: s.sag, hog: s.hog }));
 	}
-	return added;
 }
 
 export type { Side };

@@ -5,20 +5,21 @@
  */
 import type { BeamLine } from '../model/types';
 import type { CheckPoint } from './lower-bound';
+import type { HingeCandidate } from './hinge-set';
 import type { MechanismSummary } from './types';
 import { computeNodePositions } from './statics';
 import { evaluateDisplacement, type Displacement, type Kink } from './virtual-work';
 
 /** Hinge rotations from the dual values; rows were divided by Mp, so θ = w / Mp. */
-export function readHinges(points: CheckPoint[], duals: [number, number][]): (Kink & { capacity: number })[] {
+export function readHinges(points: CheckPoint[], duals: [number, number][]): HingeCandidate[] {
 	const largest = Math.max(0, ...duals.flat());
-	const hinges: (Kink & { capacity: number })[] = [];
+	const hinges: HingeCandidate[] = [];
 	points.forEach((p, i) => {
 		const [sag, hog] = duals[i];
 		const theta = sag / p.sag - hog / p.hog;
 		// Dual values below rounding level of the largest are not hinges.
 		if (Math.max(sag, hog) <= 1e-10 * largest || theta === 0) return;
-		hinges.push({ x: p.x, side: p.side, rotation: theta, capacity: theta > 0 ? p.sag : p.hog });
+		hinges.push({ x: p.x, side: p.side, rotation: theta, sag: p.sag, hog: p.hog });
 	});
 	return hinges.sort((a, b) => a.x - b.x || a.side - b.side);
 }

@@ -10,7 +10,14 @@ import { solveSquare } from './nullspace';
 
 /** Outcome of `solveProgram`. */
 export type LinearProgramResult =
-	| { status: 'optimal'; y: number[]; w: number[]; objective: number }
+	| {
+			status: 'optimal';
+			y: number[];
+			w: number[];
+			objective: number;
+			/** Largest G y − h over the rows (≤ 0 up to rounding when all is well). */
+			residual: number;
+	  }
 	| { status: 'unbounded' } /* cᵀy grows without limit (the dual has no solution) */
 	| { status: 'infeasible' }; /* no y satisfies G y ≤ h (the dual is unbounded) */
 
@@ -90,6 +97,8 @@ function iterate(lp: LinearProgram, phase: 1 | 2): boolean {
 	const { T, rhs, basis, inBasis, d, h } = lp;
 	const cols = T[0].length;
 	const cb = new Array<number>(d);
+	// Columns priced just below zero by rounding with no pivot entry: skipped, not "unbounded".
+	const skip = new Set<number>();
 	let degenerate = 0;
 	for (let iter = 0; iter < 50 * cols + 100; iter++) {
 		for (let i = 0; i < d; i++) cb[i] = phase === 1 ? (basis[i] < d ? 1 : 0) : basis[i] < d ? 0 : h[basis[i] - d];
@@ -97,7 +106,7 @@ function iterate(lp: LinearProgram, phase: 1 | 2): boolean {
 		let enter = -1;
 		let best = -PRICE_TOL;
 		for (let j = phase === 1 ? 0 : d; j < cols; j++) {
-			if (inBasis[j]) continue;
+			if (inBasis[j] || skip.has(j)) continue;
 			let r = phase === 1 ? (j < d ? 1 : 0) : h[j - d];
 			for (let i = 0; i < d; i++) r -= cb[i] * T[i][j];
 			if (r < best) {
@@ -118,17 +127,76 @@ function iterate(lp: LinearProgram, phase: 1 | 2): boolean {
 				leave = i;
 			}
 		}
-		if (leave < 0) return false;
+		if (leave < 0) {
+			if (best > -1e-9) {
+				skip.add(enter);
+				continue;
+			}
+			return false;
+		}
 		degenerate = ratio <= 1e-15 ? degenerate + 1 : 0;
 		pivot(lp, leave, enter);
 	}
 	throw new Error('invariant: simplex did not terminate');
 }
 
+/**
+ * Rebuilds the tableau from the original data for the current basis: rounding in B⁻¹ grows with
+ * each pivot, and near-duplicate points make it grow fast.
+ */
+function reinvert(lp: LinearProgram): boolean {
+	const { d, sign, G, basis, c } = lp;
+	const column = (j: number) => (j < d ? c.map((_, i) => (i === j ? 1 : 0)) : c.map((_, i) => sign[i] * G[j - d][i]));
+	const B = c.map((_, i) => basis.map((b) => column(b)[i]));
+	const inverse: number[][] = [];
+	for (let k = 0; k < d; k++) {
+		const e = c.map((_, i) => (i === k ? 1 : 0));
+		const col = solveSquare(B, e);
+		if (!col) return false;
+		inverse.push(col);
+	}
+	// inverse[k] is column k of B⁻¹.
+	const width = d + G.length;
+	for (let i = 0; i < d; i++) {
+		const row = lp.T[i];
+		for (let j = 0; j < width; j++) {
+			const a = column(j);
+			let s = 0;
+			for (let k = 0; k < d; k++) s += inverse[k][i] * a[k];
+			row[j] = s;
+		}
+		let r = 0;
+		for (let k = 0; k < d; k++) r += inverse[k][i] * sign[k] * c[k];
+		lp.rhs[i] = r;
+	}
+	return true;
+}
+
+/** Most negative reduced cost h_j − G_j·y over all rows, computed from the data. */
+function findWorstRow(lp: LinearProgram, y: number[]): number {
+	let worst = 0;
+	for (let j = 0; j < lp.G.length; j++) {
+		const g = lp.G[j];
+		let r = lp.h[j];
+		for (let i = 0; i < y.length; i++) r -= g[i] * y[i];
+		worst = Math.min(worst, r);
+	}
+	return worst;
+}
+
 /** Solves (or re-solves after `addRow`) the program. */
 export function solveProgram(lp: LinearProgram): LinearProgramResult {
 	const { d, T, basis } = lp;
-	if (!lp.warm) {
+	if (lp.warm) {
+		let result = solvePhaseTwo(lp);
+		// Verify against the data; if rounding in the tableau hid a violated row, rebuild and go on.
+		for (let k = 0; k < 3 && result.status === 'optimal' && result.residual > PRICE_TOL; k++) {
+			if (!reinvert(lp)) break;
+			result = solvePhaseTwo(lp);
+		}
+		return result;
+	}
+	{
 		iterate(lp, 1);
 		let infeasibility = 0;
 		for (let i = 0; i < d; i++) if (basis[i] < d) infeasibility += lp.rhs[i];
@@ -145,6 +213,10 @@ export function solveProgram(lp: LinearProgram): LinearProgramResult {
 		}
 		lp.warm = true;
 	}
+	return solveProgram(lp);
+}
+
+function solvePhaseTwo(lp: LinearProgram): LinearProgramResult {
 	if (!iterate(lp, 2)) return { status: 'infeasible' };
 	return readSolution(lp);
 }
@@ -172,7 +244,7 @@ function readSolution(lp: LinearProgram): LinearProgramResult {
 	}
 	let objective = 0;
 	for (let i = 0; i < d; i++) objective += c[i] * y[i];
-	return { status: 'optimal', y, w, objective };
+	return { status: 'optimal', y, w, objective, residual: -findWorstRow(lp, y) };
 }
 
 /** Maximises cᵀy subject to G y ≤ h with y free, in one call. */

@@ -5,7 +5,7 @@
  */
 import { assertFinite } from '../model/issue';
 import { certifyField } from './certified-field';
-import { combineLowerBound, measureMomentRatio } from './certify';
+import { computeLowerBound } from './certify';
 import { measureLoadSize, normaliseProblem, type ProblemScale } from './normalise';
 import { solveEquilibrium } from './nullspace';
 import { solveStaticProgram } from './lower-bound';
@@ -14,10 +14,13 @@ import { buildStations } from './stations';
 import type { CollapseProblem, CollapseResult } from './types';
 import { validateCollapseProblem } from './validate-problem';
 
-/** A field in equilibrium with the fixed loads alone (λ = 0) and its exact relative slack. */
+/** A field in equilibrium with the fixed loads alone (λ = 0) and its margin. */
 export interface FixedLoadField {
 	z: number[];
-	/** 1 − max |M|/Mp; negative when the fixed loads alone exceed the collapse load. */
+	/**
+	 * Largest uniform margin δ (|M| ≤ (1 − δ)·Mp) of any such field, from the static program;
+	 * negative when the fixed loads alone exceed the collapse load.
+	 */
 	slack: number;
 }
 
@@ -31,7 +34,8 @@ export function findFixedLoadField(p: CollapseProblem): FixedLoadField {
 	const space = solveEquilibrium([...model.E, lambdaRow], [...model.f, 0]);
 	const sol = solveStaticProgram({ model, space, ...grid, objective: 'margin' });
 	if (sol.status !== 'optimal') throw new Error(`invariant: margin program ${sol.status}`);
-	return { z: sol.z, slack: 1 - measureMomentRatio(model, sol.z, grid.stations, grid.intervals) };
+	// The program's margin is exact once converged; the field's own slack is measured where used.
+	return { z: sol.z, slack: sol.objective };
 }
 
 /** Throws when the problem has input errors (callers validate at the door). */
@@ -65,10 +69,10 @@ function solveLambdaProgram(p: CollapseProblem) {
  * is admissible: the static program's optimum, exact to rounding; null when unbounded.
  */
 export function solveLoadFactorOnly(p: CollapseProblem, scale: ProblemScale, fixedField: FixedLoadField): number | null {
-	const { model, sol } = solveLambdaProgram(p);
+	const { model, grid, sol } = solveLambdaProgram(p);
 	if (sol.status !== 'optimal') return null;
-	const lambda = Math.max(0, sol.z[model.lambdaIndex]);
-	return combineLowerBound(lambda, Math.max(0, sol.violation), fixedField.slack) * scale.lambda;
+	const lambda1 = Math.max(0, sol.z[model.lambdaIndex]);
+	return computeLowerBound({ model, grid, z1: sol.z, lambda1, z0: fixedField.z }) * scale.lambda;
 }
 
 /** Solves a normalised problem whose fixed-load field is already known and admissible. */

@@ -27,11 +27,11 @@ export interface Interval {
 }
 
 /** Resistance at x: the weaker of the segments that touch x. */
-export function findCapacityAt(capacity: CapacitySegment[], x: number): { sag: number; hog: number } {
+export function findCapacityAt(capacity: CapacitySegment[], x: number, tol = 0): { sag: number; hog: number } {
 	let sag = Infinity;
 	let hog = Infinity;
 	for (const c of capacity) {
-		if (x < c.from || x > c.to) continue;
+		if (x < c.from - tol || x > c.to + tol) continue;
 		sag = Math.min(sag, c.sagging);
 		hog = Math.min(hog, c.hogging);
 	}
@@ -71,11 +71,13 @@ export function buildStations(
 ): { stations: Station[]; intervals: Interval[] } {
 	const xs = collectBreaks(model, capacity);
 	const n = model.beam.spans.length;
+	// Segment ends given in other units may miss the beam ends by rounding.
+	const tol = 1e-9 * model.nodeX[n];
 	const jumpAt = new Set<number>();
 	for (let k = 1; k < n; k++) if (model.beam.supports[k] === 'fixed') jumpAt.add(model.nodeX[k]);
 	const stations: Station[] = [];
 	for (const x of xs) {
-		const cap = findCapacityAt(capacity, x);
+		const cap = findCapacityAt(capacity, x, tol);
 		if (jumpAt.has(x)) {
 			stations.push({ x, side: -1, ...cap }, { x, side: 1, ...cap });
 		} else stations.push({ x, side: -1, ...cap });
@@ -86,7 +88,7 @@ export function buildStations(
 		const from = xs[i];
 		const to = xs[i + 1];
 		const mid = (from + to) / 2;
-		const cap = findCapacityAt(capacity, mid);
+		const cap = findCapacityAt(capacity, mid, tol);
 		const loaded = loads.some(
 			(l) => l.kind !== 'point' && l.from < mid && l.to > mid && (l.kind === 'uniform' ? l.value !== 0 : l.start !== 0 || l.end !== 0)
 		);
