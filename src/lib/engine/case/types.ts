@@ -38,7 +38,10 @@ export interface CaseRestraint {
 
 /** Partial factors (defaults: EN 1990 6.10 recommended values, γM0 = γM1 = 1.0). */
 export interface CaseFactors {
+	/** γG,sup: permanent load where unfavourable. */
 	permanent?: number;
+	/** γG,inf: permanent load where favourable (default 1.0; read by the checks). */
+	permanentFavourable?: number;
 	imposed?: number;
 	temporary?: number;
 	gammaM0?: number;
@@ -47,7 +50,7 @@ export interface CaseFactors {
 	xi?: number;
 	/** ψ0, combination value of accompanying imposed load (read by the checks). */
 	psi0?: number;
-	/** Identifier of a factor set defined by the design checks, e.g. `en1990-6.10`. */
+	/** `en1990-6.10` (default), `en1990-6.10ab` (the worse of 6.10a and 6.10b) or `custom`. */
 	set?: string;
 }
 
@@ -69,6 +72,10 @@ export interface CaseBeam {
 	restraint?: CaseRestraint;
 	/** Stiff bearing length at each support, mm (one per support; read by the web checks). */
 	bearing?: number[];
+	/** Stiff bearing length under point loads, mm (read by the web checks; default 0). */
+	bearingLoads?: number;
+	/** The user confirms the strength of an unknown or historic grade (default false). */
+	gradeConfirmed?: boolean;
 }
 
 /** A case file (`format: 'hingepoint.case'`, version 1). Plain JSON data. */
@@ -81,6 +88,14 @@ export interface CaseFile {
 	factors?: CaseFactors;
 	/** Deflection limit as a span ratio: the limit is span / deflectionLimit (e.g. 200). */
 	deflectionLimit?: number;
+	/** Limit for the deflection under all loads, span / n (default 200). */
+	deflectionLimitTotal?: number;
+	/** Count the deflection checks in the verdict (default false: reported as warnings). */
+	deflectionGoverns?: boolean;
+	/** η of EN 1993-1-5 5.1(2) for the shear area and web slenderness (default 1.0). */
+	eta?: number;
+	/** Where the beam is, for the shared summary. */
+	place?: string;
 }
 
 /** Partial factors after defaults. */
@@ -92,6 +107,7 @@ export interface ResolvedFactors {
 	gammaM1: number;
 	xi?: number;
 	psi0?: number;
+	permanentFavourable?: number;
 	set?: string;
 }
 
@@ -119,7 +135,14 @@ export interface CaseModel {
 	restraint?: { lateral: 'continuous' | 'ends-only' | number[]; loadHeight?: CaseRestraint['loadHeight'] };
 	/** Stiff bearing length per support, mm. */
 	bearing?: number[];
+	/** Stiff bearing length under point loads, mm. */
+	bearingLoads?: number;
 	deflectionLimit?: number;
+	deflectionLimitTotal?: number;
+	deflectionGoverns?: boolean;
+	eta?: number;
+	gradeConfirmed?: boolean;
+	place?: string;
 	/** The case as read (file units), for echoing and storing. */
 	file: CaseFile;
 }
