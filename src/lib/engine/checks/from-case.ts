@@ -1,0 +1,50 @@
+/**
+ * Builds the design-check input from a validated case model (internal units already).
+ */
+import type { CaseModel } from '../case/types';
+import type { FactorSetName } from './en1993/factors';
+import type { DesignCheckInput } from './inputs';
+import type { LateralRestraint } from './restraint';
+
+/**
+ * Design-check input of a case. Without a restraint entry the flange is taken as restrained
+ * throughout (listed among the assumptions); the load height defaults to the top flange, the
+ * destabilising (conservative) choice.
+ */
+export function buildDesignCheckInput(model: CaseModel): DesignCheckInput {
+	const f = model.factors;
+	const r = model.restraint;
+	const restraint: LateralRestraint | null = !r
+		? null
+		: r.lateral === 'continuous'
+			? { kind: 'continuous' }
+			: r.lateral === 'ends-only'
+				? { kind: 'ends-only' }
+				: { kind: 'points', at: r.lateral };
+	const given = model.bearing !== undefined || model.bearingLoads !== undefined;
+	return {
+		beam: model.beam,
+		sections: model.sections,
+		grades: model.grades,
+		loads: [...model.loads, ...model.selfWeightLoads],
+		factors: {
+			set: (f.set as FactorSetName | undefined) ?? 'en1990-6.10',
+			gammaGsup: f.permanent,
+			gammaGinf: f.permanentFavourable,
+			gammaQ: f.imposed,
+			gammaT: f.temporary,
+			xi: f.xi,
+			psi0: f.psi0,
+			gammaM0: f.gammaM0,
+			gammaM1: f.gammaM1
+		},
+		restraint,
+		loadHeight: r?.loadHeight ?? 'top-flange',
+		bearing: given ? { supports: model.bearing ?? [], loads: model.bearingLoads ?? 0 } : null,
+		deflectionLimit: model.deflectionLimit,
+		deflectionLimitTotal: model.deflectionLimitTotal,
+		deflectionGoverning: model.deflectionGoverns,
+		eta: model.eta,
+		gradeConfirmed: model.gradeConfirmed || undefined
+	};
+}
