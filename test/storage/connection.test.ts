@@ -5,7 +5,7 @@ import { openDB } from 'idb';
 import { applyStoreMigrations } from '../../src/lib/storage/migrations';
 import type { HingepointDB } from '../../src/lib/storage/schema';
 import { getCheck, listChecks, openStore, saveCheck, saveDraft } from '../../src/lib/storage';
-import { demoCase, openFreshStore, uniqueDbName } from './support';
+import { demoCase, openFreshStore, plainCheck, uniqueDbName } from './support';
 
 describe('store connection', () => {
 	it('tells the UI when an older open tab blocks the upgrade, then opens once it closes', async () => {
@@ -37,7 +37,7 @@ describe('store connection', () => {
 
 	it('gives a clear "closed" failure, and keeps stored data, when the connection goes away', async () => {
 		const store = await openFreshStore('evicted');
-		const saved = await saveCheck(store, { title: 'Kept', input: demoCase(), result: null, engineVersion: '0' });
+		const saved = await saveCheck(store, plainCheck('Kept'));
 		if (!saved.ok) throw new Error(saved.message);
 		// Close the raw connection behind the store's back, as an eviction does.
 		store.db?.close();
@@ -49,7 +49,8 @@ describe('store connection', () => {
 		}
 		const reopened = await openStore(store.name);
 		if (!reopened.ok) throw new Error(reopened.message);
-		expect(await getCheck(reopened.store, saved.value.record.id)).toEqual({ ok: true, value: saved.value.record });
+		const { record } = saved.value;
+		expect(await getCheck(reopened.store, record.id)).toEqual({ ok: true, value: record });
 		reopened.store.close();
 	});
 

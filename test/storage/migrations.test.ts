@@ -13,7 +13,7 @@ import {
 	updateCheck,
 	DB_VERSION
 } from '../../src/lib/storage';
-import { demoCase, uniqueDbName } from './support';
+import { demoCase, plainCheck, uniqueDbName } from './support';
 
 async function writeV1Fixture(name: string, extra: unknown[] = []): Promise<void> {
 	const db = await openDB<HingepointDBv1>(name, 1, {
@@ -56,7 +56,8 @@ describe('v1 → v2 migration', () => {
 		const opened = await openStore(name);
 		if (!opened.ok) throw new Error(opened.message);
 		const all = await listChecks(opened.store);
-		expect(all.ok && all.value.map((r) => r.title)).toEqual(['Scaffold landing beam', 'Plant room trimmer']);
+		const titles = all.ok ? all.value.map((r) => r.title) : [];
+		expect(titles).toEqual(['Scaffold landing beam', 'Plant room trimmer']);
 		const found = await listChecks(opened.store, { search: 'block a grid c/4' });
 		expect(found.ok && found.value.map((r) => r.id)).toEqual([fixture.records[0].id]);
 		opened.store.close();
@@ -74,14 +75,20 @@ describe('v1 → v2 migration', () => {
 			engineVersion: '0.2.0'
 		});
 		expect(saved.ok).toBe(true);
-		const edited = await updateCheck(opened.store, fixture.records[1].id, { place: { level: 'L3' } });
+		const id = fixture.records[1].id;
+		const edited = await updateCheck(opened.store, id, { place: { level: 'L3' } });
 		expect(edited.ok && edited.value.place).toEqual({ building: '', level: 'L3', grid: '' });
 		opened.store.close();
 	});
 
 	it('never rewrites a record written by a newer app version', async () => {
 		const name = uniqueDbName('v1v2-newer-record');
-		const future = { ...fixture.records[1], id: 'future-1', schemaVersion: 3, place: { site: 'X' } };
+		const future = {
+			...fixture.records[1],
+			id: 'future-1',
+			schemaVersion: 3,
+			place: { site: 'X' }
+		};
 		await writeV1Fixture(name, [future]);
 		const opened = await openStore(name);
 		if (!opened.ok) throw new Error(opened.message);
@@ -99,9 +106,11 @@ describe('data written by a newer app version', () => {
 	it('opens read-only with an "update the app" notice, and is never rewritten', async () => {
 		const name = uniqueDbName('newer-db');
 		const newer = await openDB<HingepointDB>(name, DB_VERSION + 1, {
-			upgrade: (database, oldVersion, _v, tx) => applyStoreMigrations(database, tx, oldVersion, DB_VERSION)
+			upgrade: (database, oldVersion, _v, tx) =>
+				applyStoreMigrations(database, tx, oldVersion, DB_VERSION)
 		});
-		const record = { ...fixture.records[1], schemaVersion: 2, place: { building: 'B', level: '', grid: '' } };
+		const place = { building: 'B', level: '', grid: '' };
+		const record = { ...fixture.records[1], schemaVersion: 2, place };
 		await newer.put('checks', record as never);
 		newer.close();
 
@@ -112,7 +121,7 @@ describe('data written by a newer app version', () => {
 		expect(store.notice).toMatch(/update the app/i);
 		const list = await listChecks(store);
 		expect(list.ok && list.value.length).toBe(1);
-		const save = await saveCheck(store, { title: 'x', input: demoCase(), result: null, engineVersion: '0' });
+		const save = await saveCheck(store, plainCheck('x'));
 		expect(save.ok).toBe(false);
 		if (!save.ok) expect(save.reason).toBe('read-only');
 		expect(store.db?.version).toBe(DB_VERSION + 1);

@@ -1,5 +1,5 @@
 import 'fake-indexeddb/auto';
-import { openStore, type CaseFile, type CheckStore } from '../../src/lib/storage';
+import { openStore, type CaseFile, type CheckStore, type NewCheck } from '../../src/lib/storage';
 
 let counter = 0;
 
@@ -26,6 +26,11 @@ export function demoCase(designation = '305x165x40 UB', span = 6): CaseFile {
 	};
 }
 
+/** A new check with no result, for tests that only need something to store. */
+export function plainCheck(title: string): NewCheck {
+	return { title, input: demoCase(), result: null, engineVersion: '0' };
+}
+
 /**
  * Makes every object-store `put` and `add` after the first `okWrites` throw QuotaExceededError,
  * as a full disk does. Returns the function that removes the stub.
@@ -37,7 +42,9 @@ export function stubWritesQuota(okWrites = 0): () => void {
 	const failing = (method: 'put' | 'add') =>
 		function (this: IDBObjectStore, value: unknown, key?: IDBValidKey) {
 			calls += 1;
-			if (calls > okWrites) throw new DOMException('The quota has been exceeded.', 'QuotaExceededError');
+			if (calls > okWrites) {
+				throw new DOMException('The quota has been exceeded.', 'QuotaExceededError');
+			}
 			return original[method].call(this, value, key);
 		};
 	proto.put = failing('put');

@@ -75,7 +75,9 @@ function makeCodebook(codes: Readonly<Record<string, string>>): Codebook {
 }
 
 const KEYS = makeCodebook(KEY_CODES);
-const VALUES = new Map(Object.entries(VALUE_CODES).map(([key, codes]) => [key, makeCodebook(codes)]));
+const VALUES = new Map(
+	Object.entries(VALUE_CODES).map(([key, codes]) => [key, makeCodebook(codes)])
+);
 
 /**
  * Replaces known keys and enumerated values by their codes, everywhere in a JSON value. Anything

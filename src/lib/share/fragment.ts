@@ -52,7 +52,9 @@ export function decodeCaseFromFragment(hash: string): Checked<CaseFile> {
 	} catch {
 		return refuse('link-damaged', DAMAGED);
 	}
-	const caseFile = isPlainObject(data) ? { format: CASE_FORMAT, ...(expandCase(data) as object) } : null;
+	const caseFile = isPlainObject(data)
+		? { format: CASE_FORMAT, ...(expandCase(data) as object) }
+		: null;
 	if (!isCaseLike(caseFile)) return refuse('link-damaged', DAMAGED);
 	if (caseFile.version > CASE_VERSION_READ) return refuse('link-newer', NEWER);
 	return { ok: true, value: caseFile, warnings: [] };
@@ -60,7 +62,8 @@ export function decodeCaseFromFragment(hash: string): Checked<CaseFile> {
 
 const DAMAGED =
 	'This link is damaged or cut short, so the check cannot be opened. Ask for the link again, or copy all of it.';
-const NEWER = 'This link was made by a newer version of Hingepoint. Update the app, then open it again.';
+const NEWER =
+	'This link was made by a newer version of Hingepoint. Update the app, then open it again.';
 
 function refuse(code: string, message: string): Checked<CaseFile> {
 	const issue: InputIssue = { path: 'link', message, code, severity: 'error' };

@@ -20,7 +20,10 @@ export function parseBackup(text: string): ParsedBackup {
 	try {
 		data = JSON.parse(text);
 	} catch {
-		return refuse('damaged', 'This file is damaged or cut short: it is not readable JSON. Nothing was imported.');
+		return refuse(
+			'damaged',
+			'This file is damaged or cut short: it is not readable JSON. Nothing was imported.'
+		);
 	}
 	if (!isPlainObject(data) || data.format !== BACKUP_FORMAT) {
 		const isCase = isPlainObject(data) && data.format === 'hingepoint.case';
@@ -35,9 +38,14 @@ export function parseBackup(text: string): ParsedBackup {
 		return refuse('damaged', 'This backup has no valid version number. Nothing was imported.');
 	}
 	if ((data.version as number) > BACKUP_VERSION) {
-		return refuse('newer', 'This backup was made by a newer version of Hingepoint. Update the app, then import it again.');
+		return refuse(
+			'newer',
+			'This backup was made by a newer version of Hingepoint. Update the app, then import it again.'
+		);
 	}
-	if (!Array.isArray(data.records)) return refuse('damaged', 'This backup has no list of checks. Nothing was imported.');
+	if (!Array.isArray(data.records)) {
+		return refuse('damaged', 'This backup has no list of checks. Nothing was imported.');
+	}
 	return readRecords(data.records);
 }
 
@@ -47,11 +55,18 @@ function readRecords(raw: unknown[]): ParsedBackup {
 	for (let i = 0; i < raw.length; i++) {
 		const upgraded = upgradeRecord(raw[i]);
 		if (!upgraded.ok && upgraded.reason === 'newer') {
-			return refuse('newer', `Check ${i + 1} in this backup was saved by a newer version of Hingepoint. Update the app, then import again.`);
+			return refuse(
+				'newer',
+				`Check ${i + 1} in this backup was saved by a newer version of Hingepoint. Update the app, then import again.`
+			);
 		}
 		const problem = findRecordProblem(raw[i], `records[${i}]`);
 		if (!upgraded.ok || problem) {
-			return refuse('damaged', `This backup is damaged at check ${i + 1} (${problem ?? 'no schema version'}). Nothing was imported.`);
+			const where = problem ?? 'no schema version';
+			return refuse(
+				'damaged',
+				`This backup is damaged at check ${i + 1} (${where}). Nothing was imported.`
+			);
 		}
 		if (seen.has(upgraded.record.id)) {
 			return refuse('damaged', `This backup lists check ${i + 1} twice. Nothing was imported.`);

@@ -29,7 +29,10 @@ export type ImportResult =
 	| { ok: false; reason: 'damaged' | 'foreign' | 'newer' | 'storage'; message: string };
 
 /** Writes every saved check (deleted ones left out) as one JSON text, oldest first. */
-export async function exportBackup(store: CheckStore, options: ExportOptions): Promise<StoreResult<string>> {
+export async function exportBackup(
+	store: CheckStore,
+	options: ExportOptions
+): Promise<StoreResult<string>> {
 	const exportedAt = stampNow(options.now);
 	return readFrom(store, async (db) => {
 		const records = (await db.getAll('checks'))
@@ -70,9 +73,8 @@ export async function importBackup(store: CheckStore, text: string): Promise<Imp
 		return { ok: true, value: counts };
 	});
 	if (outcome.ok) return { ok: true, ...outcome.value };
-	const message = outcome.reason === 'read-only' || outcome.reason === 'quota' || outcome.reason === 'closed'
-		? `${outcome.message} Nothing was imported.`
-		: `${FAILURE_MESSAGES.storage}`;
+	const known = ['read-only', 'quota', 'closed'].includes(outcome.reason);
+	const message = known ? `${outcome.message} Nothing was imported.` : FAILURE_MESSAGES.storage;
 	return { ok: false, reason: 'storage', message };
 }
 
@@ -81,7 +83,10 @@ export async function importBackup(store: CheckStore, text: string): Promise<Imp
  * @example
  * decideMerge(undefined, record) // 'add'
  */
-export function decideMerge(existing: CheckRecord | undefined, incoming: CheckRecord): 'add' | 'update' | 'skip' {
+export function decideMerge(
+	existing: CheckRecord | undefined,
+	incoming: CheckRecord
+): 'add' | 'update' | 'skip' {
 	if (!existing) return 'add';
 	// A record written by a newer app version is never rewritten.
 	if (existing.schemaVersion > RECORD_SCHEMA_VERSION) return 'skip';

@@ -93,8 +93,7 @@ export async function openStore(
 		});
 		store = new CheckStore({ name, db, readOnly: false });
 	} catch (error) {
-		if (!isVersionError(error)) return { ok: false, reason: 'storage', message: FAILURE_MESSAGES.storage };
-		const opened = await openNewerReadOnly(name);
+		const opened = isVersionError(error) ? await openNewerReadOnly(name) : null;
 		if (!opened) return { ok: false, reason: 'storage', message: FAILURE_MESSAGES.storage };
 		store = opened;
 	}
@@ -118,5 +117,7 @@ async function openNewerReadOnly(name: string): Promise<CheckStore | null> {
 }
 
 function isVersionError(error: unknown): boolean {
-	return typeof error === 'object' && error !== null && 'name' in error && error.name === 'VersionError';
+	return (
+		typeof error === 'object' && error !== null && 'name' in error && error.name === 'VersionError'
+	);
 }

@@ -16,7 +16,10 @@ export interface DraftInput extends ClockOptions {
 }
 
 /** Saves the one current draft, replacing the previous one. */
-export async function saveDraft(store: CheckStore, draft: DraftInput): Promise<StoreResult<DraftRecord>> {
+export async function saveDraft(
+	store: CheckStore,
+	draft: DraftInput
+): Promise<StoreResult<DraftRecord>> {
 	const record: DraftRecord = {
 		slot: DRAFT_SLOT,
 		savedAt: stampNow(draft.now),
@@ -31,7 +34,10 @@ export async function saveDraft(store: CheckStore, draft: DraftInput): Promise<S
 
 /** The current draft, or null when there is none (after a reload, a crash or an update). */
 export async function loadDraft(store: CheckStore): Promise<StoreResult<DraftRecord | null>> {
-	return readFrom(store, async (db) => ({ ok: true, value: (await db.get('drafts', DRAFT_SLOT)) ?? null }));
+	return readFrom(store, async (db) => ({
+		ok: true,
+		value: (await db.get('drafts', DRAFT_SLOT)) ?? null
+	}));
 }
 
 /** Forgets the current draft (after the check is saved or discarded). */

@@ -32,7 +32,10 @@ export function toFailure<T>(error: unknown): StoreResult<T> {
 	if (name === 'QuotaExceededError') return fail('quota');
 	if (name === 'InvalidStateError' || name === 'TransactionInactiveError') return fail('closed');
 	if (name === 'DataCloneError') {
-		return fail('storage', 'This check holds data that cannot be stored, so nothing was changed. Please report it.');
+		return fail(
+			'storage',
+			'This check holds data that cannot be stored, so nothing was changed. Please report it.'
+		);
 	}
 	return fail('storage');
 }

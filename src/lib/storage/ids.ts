@@ -9,7 +9,12 @@ export function createId(): string {
 	bytes[6] = (bytes[6] & 0x0f) | 0x40;
 	bytes[8] = (bytes[8] & 0x3f) | 0x80;
 	const hex = Array.from(bytes, (b) => b.toString(16).padStart(2, '0')).join('');
-	return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-${hex.slice(12, 16)}-${hex.slice(16, 20)}-${hex.slice(20)}`;
+	const cuts = [0, 8, 12, 16, 20, 32];
+	// 8-4-4-4-12 hex digits.
+	return cuts
+		.slice(1)
+		.map((end, i) => hex.slice(cuts[i], end))
+		.join('-');
 }
 
 /** The current time as ISO 8601 (UTC), from the caller's clock when given. */

@@ -5,10 +5,23 @@
  */
 export type { CaseFile } from './case-file';
 export { CASE_FORMAT, isCaseLike, readSectionDesignation } from './case-file';
-export { BACKUP_FORMAT, BACKUP_VERSION, DB_NAME, DB_VERSION, RECORD_SCHEMA_VERSION } from './constants';
+export {
+	BACKUP_FORMAT,
+	BACKUP_VERSION,
+	DB_NAME,
+	DB_VERSION,
+	RECORD_SCHEMA_VERSION
+} from './constants';
 export type { OpenStoreOptions, OpenStoreResult, StoreStatus } from './db';
 export { CheckStore, openStore } from './db';
-export type { CheckRecord, ClockOptions, Place, Revision, StoreFailureReason, StoreResult } from './types';
+export type {
+	CheckRecord,
+	ClockOptions,
+	Place,
+	Revision,
+	StoreFailureReason,
+	StoreResult
+} from './types';
 export type { CheckChanges, ListOptions, NewCheck, SavedCheck } from './records';
 export { duplicateCheck, getCheck, listChecks, saveCheck, updateCheck } from './records';
 export type { DeletedCheck } from './deletion';

@@ -18,7 +18,8 @@ export const RECORD_UPGRADERS: readonly RecordUpgrader[] = [
 	{
 		from: 1,
 		reason: 'place split into building, level and grid so each can be filled and searched',
-		up: (record) => upgradeRecordV1(record as unknown as CheckRecordV1) as unknown as Record<string, unknown>
+		up: (record) =>
+			upgradeRecordV1(record as unknown as CheckRecordV1) as unknown as Record<string, unknown>
 	}
 ];
 
@@ -35,10 +36,11 @@ export type RecordUpgrade =
  * // { building: 'Block A', level: '', grid: '' }
  */
 export function upgradeRecord(raw: unknown): RecordUpgrade {
-	if (!isPlainObject(raw) || !Number.isInteger(raw.schemaVersion) || (raw.schemaVersion as number) < 1) {
+	const stated = isPlainObject(raw) ? raw.schemaVersion : undefined;
+	if (!isPlainObject(raw) || !Number.isInteger(stated) || (stated as number) < 1) {
 		return { ok: false, reason: 'damaged', message: 'A saved check has no valid schema version.' };
 	}
-	let version = raw.schemaVersion as number;
+	let version = stated as number;
 	if (version > RECORD_SCHEMA_VERSION) {
 		return {
 			ok: false,
@@ -52,7 +54,9 @@ export function upgradeRecord(raw: unknown): RecordUpgrade {
 		record = { ...step.up(record), schemaVersion: version + 1 };
 		version += 1;
 	}
-	if (version !== RECORD_SCHEMA_VERSION) throw new Error(`invariant: no upgrader from schema ${version}`);
+	if (version !== RECORD_SCHEMA_VERSION) {
+		throw new Error(`invariant: no upgrader from schema ${version}`);
+	}
 	return { ok: true, record: record as unknown as CheckRecord, upgraded: record !== raw };
 }
 

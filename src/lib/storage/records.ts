@@ -31,7 +31,10 @@ export interface SavedCheck {
  * Saves a new check. On the first save ever it also asks the browser to keep the data
  * (`navigator.storage.persist()`), and says whether that was granted.
  */
-export async function saveCheck(store: CheckStore, check: NewCheck): Promise<StoreResult<SavedCheck>> {
+export async function saveCheck(
+	store: CheckStore,
+	check: NewCheck
+): Promise<StoreResult<SavedCheck>> {
 	const at = stampNow(check.now);
 	const record: CheckRecord = {
 		id: createId(),
@@ -108,8 +111,10 @@ export async function duplicateCheck(
 	});
 }
 
-/** Fields an edit may change. Changing `input` or `result` keeps the previous ones as a revision. */
-export type CheckChanges = Partial<Pick<CheckRecord, 'title' | 'notes' | 'input' | 'result' | 'engineVersion'>> & {
+/** Fields an edit may change. A new `input` or `result` keeps the previous pair as a revision. */
+export type CheckChanges = Partial<
+	Pick<CheckRecord, 'title' | 'notes' | 'input' | 'result' | 'engineVersion'>
+> & {
 	place?: Partial<Place>;
 };
 
@@ -141,7 +146,9 @@ function applyChanges(current: CheckRecord, changes: CheckChanges, at: string): 
 		result: current.result,
 		engineVersion: current.engineVersion
 	};
-	const revisions = contentChanged ? [...current.revisions, previous].slice(-MAX_REVISIONS) : current.revisions;
+	const revisions = contentChanged
+		? [...current.revisions, previous].slice(-MAX_REVISIONS)
+		: current.revisions;
 	return {
 		...current,
 		title: (changes.title ?? current.title).trim(),

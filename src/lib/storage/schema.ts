@@ -18,7 +18,7 @@ export interface CheckRecordV1 {
 	deletedAt: string | null;
 }
 
-/** The one current draft of the check form; `form` is whatever the form holds, possibly half-filled. */
+/** The one current draft of the check form; `form` is what the form holds, possibly half-filled. */
 export interface DraftRecord {
 	slot: string;
 	savedAt: string;

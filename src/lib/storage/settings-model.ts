@@ -59,8 +59,18 @@ const EN1990_RECOMMENDED = {
 
 /** Factor sets that ship with the app; they cannot be edited or deleted. */
 export const BUILT_IN_FACTOR_SETS: readonly FactorSet[] = [
-	{ id: 'en1990-6.10', name: 'EN 1990 (6.10), recommended', combination: '6.10', ...EN1990_RECOMMENDED },
-	{ id: 'en1990-6.10ab', name: 'EN 1990 (6.10a/b), recommended', combination: '6.10a/b', ...EN1990_RECOMMENDED }
+	{
+		id: 'en1990-6.10',
+		name: 'EN 1990 (6.10), recommended',
+		combination: '6.10',
+		...EN1990_RECOMMENDED
+	},
+	{
+		id: 'en1990-6.10ab',
+		name: 'EN 1990 (6.10a/b), recommended',
+		combination: '6.10a/b',
+		...EN1990_RECOMMENDED
+	}
 ];
 
 /** Settings on first run. span/200 is common practice for beams under variable load. */
@@ -92,9 +102,13 @@ export function sanitizeSettings(raw: unknown): Settings {
 			typeof s.activeFactorSetId === 'string' && ids.has(s.activeFactorSetId)
 				? s.activeFactorSetId
 				: d.activeFactorSetId,
-		deflectionLimit: isPositive(s.deflectionLimit) ? (s.deflectionLimit as number) : d.deflectionLimit,
+		deflectionLimit: isPositive(s.deflectionLimit)
+			? (s.deflectionLimit as number)
+			: d.deflectionLimit,
 		defaultRestraint:
-			s.defaultRestraint === 'continuous' || s.defaultRestraint === 'ends-only' ? s.defaultRestraint : d.defaultRestraint,
+			s.defaultRestraint === 'continuous' || s.defaultRestraint === 'ends-only'
+				? s.defaultRestraint
+				: d.defaultRestraint,
 		userName: typeof s.userName === 'string' ? s.userName : d.userName,
 		company: typeof s.company === 'string' ? s.company : d.company,
 		theme: s.theme === 'light' || s.theme === 'dark' || s.theme === 'contrast' ? s.theme : d.theme
@@ -130,13 +144,17 @@ export function withFactorSet(
 	return { ok: true, value: { ...settings, factorSets: [...others, { ...set }] } };
 }
 
-/** Settings without an own factor set; the active set falls back to the default if it went. Pure. */
+/** Settings without an own factor set; an active set that goes falls back to the default. Pure. */
 export function withoutFactorSet(settings: Settings, id: string): Settings {
 	const factorSets = settings.factorSets.filter((f) => f.id !== id);
 	const activeFactorSetId =
-		settings.activeFactorSetId === id ? DEFAULT_SETTINGS.activeFactorSetId : settings.activeFactorSetId;
+		settings.activeFactorSetId === id
+			? DEFAULT_SETTINGS.activeFactorSetId
+			: settings.activeFactorSetId;
 	return { ...settings, factorSets, activeFactorSetId };
 }
+
+const FACTOR_KEYS = ['gammaG', 'gammaGinf', 'gammaQ', 'gammaTemp', 'gammaM0', 'gammaM1'];
 
 /** Whether a value is a usable factor set: positive factors, 0 < ξ ≤ 1, 0 ≤ ψ0 ≤ 1. */
 export function isFactorSet(value: unknown): value is FactorSet {
@@ -148,7 +166,7 @@ export function isFactorSet(value: unknown): value is FactorSet {
 		!BUILT_IN_FACTOR_SETS.some((b) => b.id === v.id) &&
 		typeof v.name === 'string' &&
 		(v.combination === '6.10' || v.combination === '6.10a/b') &&
-		['gammaG', 'gammaGinf', 'gammaQ', 'gammaTemp', 'gammaM0', 'gammaM1'].every((k) => isPositive(v[k])) &&
+		FACTOR_KEYS.every((k) => isPositive(v[k])) &&
 		isPositive(v.xi) &&
 		(v.xi as number) <= 1 &&
 		typeof v.psi0 === 'number' &&

@@ -5,7 +5,10 @@ import { sanitizeSettings, type Settings } from './settings-model';
 import type { StoreResult } from './types';
 
 /** Stores the settings (one entry in `meta`), sanitised first so only valid data is written. */
-export async function saveSettings(store: CheckStore, settings: Settings): Promise<StoreResult<Settings>> {
+export async function saveSettings(
+	store: CheckStore,
+	settings: Settings
+): Promise<StoreResult<Settings>> {
 	const clean = sanitizeSettings(settings);
 	return writeTo(store, ['meta'], async (tx) => {
 		await tx.objectStore('meta').put({ key: META_KEYS.settings, value: clean });

@@ -14,7 +14,9 @@ export function findRecordProblem(raw: unknown, path: string): string | null {
 	if (typeof r.id !== 'string' || r.id === '') return `${path}.id is missing.`;
 	const strings = ['title', 'notes', 'engineVersion'];
 	for (const key of strings) if (typeof r[key] !== 'string') return `${path}.${key} is not text.`;
-	for (const key of ['createdAt', 'updatedAt']) if (!isIsoDate(r[key])) return `${path}.${key} is not a date.`;
+	for (const key of ['createdAt', 'updatedAt']) {
+		if (!isIsoDate(r[key])) return `${path}.${key} is not a date.`;
+	}
 	if (r.deletedAt !== null && !isIsoDate(r.deletedAt)) return `${path}.deletedAt is not a date.`;
 	if (!isCaseLike(r.input)) return `${path}.input is not a Hingepoint case.`;
 	if (r.schemaVersion === 1 ? typeof r.place !== 'string' : !isPlace(r.place)) {

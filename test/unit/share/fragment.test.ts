@@ -54,13 +54,19 @@ describe('share links', () => {
 	});
 
 	it('restore any key and value exactly, even ones that look like codes or __proto__ (property)', () => {
-		const codes = Object.values(VALUE_CODES).flatMap((table) => [...Object.keys(table), ...Object.values(table)]);
-		const tricky = fc.constantFrom(...Object.values(KEY_CODES), ...codes, '~', '~p', '__proto__', 'beam');
+		const codes = Object.values(VALUE_CODES).flatMap((t) => [
+			...Object.keys(t),
+			...Object.values(t)
+		]);
+		const special = ['~', '~p', '__proto__', 'beam'];
+		const tricky = fc.constantFrom(...Object.values(KEY_CODES), ...codes, ...special);
 		const enumKey = fc.constantFrom(...Object.keys(VALUE_CODES));
 		const leaf = fc.oneof(fc.jsonValue(), tricky, fc.array(tricky));
 		const entry = fc.tuple(fc.oneof(fc.string(), tricky, enumKey), leaf);
 		const obj = fc.letrec((tie) => ({
-			node: fc.array(fc.oneof(entry, fc.tuple(enumKey, tie('node'))), { maxLength: 6 }).map(Object.fromEntries)
+			node: fc
+				.array(fc.oneof(entry, fc.tuple(enumKey, tie('node'))), { maxLength: 6 })
+				.map(Object.fromEntries)
 		})).node;
 		fc.assert(
 			fc.property(obj, (value) => {
@@ -80,7 +86,8 @@ describe('share links', () => {
 
 	it('leave the short keys of a custom section as they are', () => {
 		const section = { shape: 'I', h: 300, b: 150, tw: 7.1, tf: 10.7, r: 15 };
-		expect(compactCase({ section })).toEqual({ n: { y: 'i', h: 300, b: 150, tw: 7.1, tf: 10.7, r: 15 } });
+		const compacted = { n: { y: 'i', h: 300, b: 150, tw: 7.1, tf: 10.7, r: 15 } };
+		expect(compactCase({ section })).toEqual(compacted);
 	});
 
 	it('is shorter than the plain base64url of the JSON', () => {
@@ -111,7 +118,8 @@ describe('share links', () => {
 			const decoded = decodeCaseFromFragment(hash);
 			return decoded.ok ? 'ok' : decoded.issues.map((i) => `${i.path}:${i.code}`).join();
 		};
-		const b64 = (value: unknown) => Buffer.from(JSON.stringify(value), 'utf8').toString('base64url');
+		const b64 = (value: unknown) =>
+			Buffer.from(JSON.stringify(value), 'utf8').toString('base64url');
 		expect(code('')).toBe('link:link-missing-case');
 		expect(code('#x=1')).toBe('link:link-missing-case');
 		expect(code('#c=abc')).toBe('link:link-damaged');

@@ -14,6 +14,12 @@ import fixture from '../../fixtures/db/checks-v1.json';
 import { demoCase, openFreshStore, stubWritesQuota } from '../../storage/support';
 
 const versions = { appVersion: '0.1.0', engineVersion: '0.1.0' };
+const counts = (added: number, updated: number, skipped: number) => ({
+	ok: true,
+	added,
+	updated,
+	skipped
+});
 
 async function fill(store: CheckStore, titles: string[]): Promise<CheckRecord[]> {
 	const records: CheckRecord[] = [];
@@ -47,7 +53,8 @@ describe('exportBackup', () => {
 	it('writes our format with version, date, app and engine versions, and every live check', async () => {
 		const store = await openFreshStore('export');
 		const records = await fill(store, ['One', 'Two']);
-		const text = await exportBackup(store, { ...versions, now: new Date('2026-07-01T00:00:00.000Z') });
+		const now = new Date('2026-07-01T00:00:00.000Z');
+		const text = await exportBackup(store, { ...versions, now });
 		expect(text.ok).toBe(true);
 		const file = JSON.parse(text.ok ? text.value : '{}');
 		expect(file.format).toBe(BACKUP_FORMAT);
@@ -65,9 +72,10 @@ describe('importBackup', () => {
 		const records = await fill(source, ['A', 'B', 'C']);
 		const text = await exportText(source);
 		const target = await openFreshStore('import-dst');
-		expect(await importBackup(target, text)).toEqual({ ok: true, added: 3, updated: 0, skipped: 0 });
-		expect(await importBackup(target, text)).toEqual({ ok: true, added: 0, updated: 0, skipped: 3 });
-		expect((await snapshot(target)).map((r) => r.id).sort()).toEqual(records.map((r) => r.id).sort());
+		expect(await importBackup(target, text)).toEqual(counts(3, 0, 0));
+		expect(await importBackup(target, text)).toEqual(counts(0, 0, 3));
+		const ids = (list: CheckRecord[]) => list.map((r) => r.id).sort();
+		expect(ids(await snapshot(target))).toEqual(ids(records));
 		source.close();
 		target.close();
 	});
@@ -76,12 +84,13 @@ describe('importBackup', () => {
 		const store = await openFreshStore('merge');
 		const [a, b] = await fill(store, ['A', 'B']);
 		const before = await exportText(store);
-		await updateCheck(store, a.id, { title: 'A edited here' }, { now: new Date('2027-01-01T00:00:00.000Z') });
+		const later = new Date('2027-01-01T00:00:00.000Z');
+		await updateCheck(store, a.id, { title: 'A edited here' }, { now: later });
 		// Backup holds an older A (skipped) and B; B is then edited elsewhere and re-imported.
-		expect(await importBackup(store, before)).toEqual({ ok: true, added: 0, updated: 0, skipped: 2 });
+		expect(await importBackup(store, before)).toEqual(counts(0, 0, 2));
 		const file = JSON.parse(before);
 		file.records[1] = { ...b, title: 'B edited elsewhere', updatedAt: '2027-02-01T00:00:00.000Z' };
-		expect(await importBackup(store, JSON.stringify(file))).toEqual({ ok: true, added: 0, updated: 1, skipped: 1 });
+		expect(await importBackup(store, JSON.stringify(file))).toEqual(counts(0, 1, 1));
 		const titles = (await snapshot(store)).map((r) => r.title).sort();
 		expect(titles).toEqual(['A edited here', 'B edited elsewhere']);
 		store.close();
@@ -90,7 +99,7 @@ describe('importBackup', () => {
 	it('upgrades version-1 records found in a backup', async () => {
 		const store = await openFreshStore('import-v1');
 		const text = JSON.stringify({ format: BACKUP_FORMAT, version: 1, records: fixture.records });
-		expect(await importBackup(store, text)).toEqual({ ok: true, added: 3, updated: 0, skipped: 0 });
+		expect(await importBackup(store, text)).toEqual(counts(3, 0, 0));
 		const list = await snapshot(store);
 		expect(list.map((r) => r.place.building)).toEqual(['', 'Demo Block A, level 2, grid C/4']);
 		store.close();
@@ -102,18 +111,19 @@ describe('importBackup', () => {
 		const good = await exportText(store);
 		const before = await snapshot(store);
 		const parsed = JSON.parse(good);
+		const withRecord = (record: unknown) => JSON.stringify({ ...parsed, records: [record] });
 		const cases: [string, string][] = [
 			['not json at all', 'damaged'],
 			[good.slice(0, Math.floor(good.length / 2)), 'damaged'],
 			['', 'damaged'],
-			[JSON.stringify({ ...parsed, records: [{ ...parsed.records[0], updatedAt: 'yesterday' }] }), 'damaged'],
+			[withRecord({ ...parsed.records[0], updatedAt: 'yesterday' }), 'damaged'],
 			[JSON.stringify({ ...parsed, records: [parsed.records[0], parsed.records[0]] }), 'damaged'],
 			[JSON.stringify({ ...parsed, records: 'none' }), 'damaged'],
 			[JSON.stringify({ format: 'some-other-app', version: 1, records: [] }), 'foreign'],
 			[JSON.stringify(demoCase()), 'foreign'],
 			[JSON.stringify([1, 2, 3]), 'foreign'],
 			[JSON.stringify({ ...parsed, version: 2 }), 'newer'],
-			[JSON.stringify({ ...parsed, records: [{ ...parsed.records[0], id: 'n', schemaVersion: 9 }] }), 'newer']
+			[withRecord({ ...parsed.records[0], id: 'n', schemaVersion: 9 }), 'newer']
 		];
 		for (const [text, reason] of cases) {
 			const result = await importBackup(store, text);
@@ -150,16 +160,22 @@ describe('importBackup', () => {
 
 	it('round-trips any set of checks through a backup into an empty store (property)', async () => {
 		const place = fc.record({ building: fc.string(), level: fc.string(), grid: fc.string() });
-		const check = fc.record({ title: fc.string(), notes: fc.string(), place, span: fc.double({ min: 0.1, max: 50, noNaN: true }) });
+		const span = fc.double({ min: 0.1, max: 50, noNaN: true });
+		const check = fc.record({ title: fc.string(), notes: fc.string(), place, span });
 		await fc.assert(
 			fc.asyncProperty(fc.array(check, { maxLength: 5 }), async (checks) => {
 				const source = await openFreshStore('prop-src');
 				for (const c of checks) {
-					await saveCheck(source, { title: c.title, notes: c.notes, place: c.place, input: demoCase('UB', c.span), result: null, engineVersion: '1' });
+					await saveCheck(source, {
+						...c,
+						input: demoCase('UB', c.span),
+						result: null,
+						engineVersion: '1'
+					});
 				}
 				const target = await openFreshStore('prop-dst');
 				const result = await importBackup(target, await exportText(source));
-				expect(result).toEqual({ ok: true, added: checks.length, updated: 0, skipped: 0 });
+				expect(result).toEqual(counts(checks.length, 0, 0));
 				const byId = (list: CheckRecord[]) => [...list].sort((x, y) => (x.id < y.id ? -1 : 1));
 				expect(byId(await snapshot(target))).toEqual(byId(await snapshot(source)));
 				source.close();

@@ -17,18 +17,24 @@ import {
 	DEFAULT_SETTINGS,
 	type FactorSet
 } from '../../../src/lib/storage';
-import { demoCase, openFreshStore, stubWritesQuota } from '../../storage/support';
+import { openFreshStore, plainCheck, stubWritesQuota } from '../../storage/support';
 
 describe('the current draft', () => {
 	it('keeps one draft, replaced on every save, and is gone after clearing', async () => {
 		const store = await openFreshStore('draft');
 		expect(await loadDraft(store)).toEqual({ ok: true, value: null });
 		await saveDraft(store, { form: { span: '6,0' }, now: new Date('2026-05-01T00:00:00.000Z') });
-		await saveDraft(store, { form: { span: '6,5' }, recordId: 'r1', now: new Date('2026-05-01T00:01:00.000Z') });
+		const later = new Date('2026-05-01T00:01:00.000Z');
+		await saveDraft(store, { form: { span: '6,5' }, recordId: 'r1', now: later });
 		const loaded = await loadDraft(store);
 		expect(loaded).toEqual({
 			ok: true,
-			value: { slot: 'current', savedAt: '2026-05-01T00:01:00.000Z', recordId: 'r1', form: { span: '6,5' } }
+			value: {
+				slot: 'current',
+				savedAt: '2026-05-01T00:01:00.000Z',
+				recordId: 'r1',
+				form: { span: '6,5' }
+			}
 		});
 		expect(await clearDraft(store)).toEqual({ ok: true, value: null });
 		expect(await loadDraft(store)).toEqual({ ok: true, value: null });
@@ -63,7 +69,13 @@ describe('settings', () => {
 		const store = await openFreshStore('settings');
 		expect(await loadSettings(store)).toEqual({ ok: true, value: DEFAULT_SETTINGS });
 		const own: FactorSet = { ...BUILT_IN_FACTOR_SETS[1], id: 'own-uk', name: 'UK NA', xi: 0.925 };
-		const changed = { ...DEFAULT_SETTINGS, units: 'US' as const, factorSets: [own], activeFactorSetId: 'own-uk', theme: 'contrast' as const };
+		const changed = {
+			...DEFAULT_SETTINGS,
+			units: 'US' as const,
+			factorSets: [own],
+			activeFactorSetId: 'own-uk',
+			theme: 'contrast' as const
+		};
 		expect((await saveSettings(store, changed)).ok).toBe(true);
 		expect(await loadSettings(store)).toEqual({ ok: true, value: changed });
 		store.close();
@@ -72,7 +84,13 @@ describe('settings', () => {
 	it('defaults to EN 1990 eq. 6.10 with the recommended factors and span/200', () => {
 		const active = BUILT_IN_FACTOR_SETS.find((f) => f.id === DEFAULT_SETTINGS.activeFactorSetId);
 		// EN 1990 Table A1.2(B) recommended: γG,sup = 1.35, γG,inf = 1.00, γQ = 1.50, ξ = 0.85.
-		expect(active).toMatchObject({ combination: '6.10', gammaG: 1.35, gammaGinf: 1.0, gammaQ: 1.5, xi: 0.85 });
+		expect(active).toMatchObject({
+			combination: '6.10',
+			gammaG: 1.35,
+			gammaGinf: 1.0,
+			gammaQ: 1.5,
+			xi: 0.85
+		});
 		// EN 1993-1-1 6.1 Note 2B recommended γM0 = γM1 = 1.00 (from memory).
 		expect(active).toMatchObject({ gammaM0: 1.0, gammaM1: 1.0 });
 		// EN 1990 Table A1.1, ψ0 = 0.7 for imposed loads, categories A–D (from memory).
@@ -100,7 +118,8 @@ describe('settings', () => {
 				const s = sanitizeSettings(raw);
 				expect(['SI', 'US']).toContain(s.units);
 				expect(s.deflectionLimit).toBeGreaterThan(0);
-				expect([...BUILT_IN_FACTOR_SETS, ...s.factorSets].some((f) => f.id === s.activeFactorSetId)).toBe(true);
+				const ids = [...BUILT_IN_FACTOR_SETS, ...s.factorSets].map((f) => f.id);
+				expect(ids).toContain(s.activeFactorSetId);
 				expect(sanitizeSettings(s)).toEqual(s);
 			})
 		);
@@ -111,7 +130,8 @@ describe('persistent storage and the install explanation', () => {
 	it('wraps navigator.storage.persist without throwing', async () => {
 		expect(await requestPersistence({ persist: async () => true })).toBe('granted');
 		expect(await requestPersistence({ persist: async () => false })).toBe('denied');
-		expect(await requestPersistence({ persist: () => Promise.reject(new Error('no')) })).toBe('denied');
+		const refusing = { persist: () => Promise.reject(new Error('no')) };
+		expect(await requestPersistence(refusing)).toBe('denied');
 		expect(await requestPersistence({})).toBe('unsupported');
 	});
 
@@ -119,14 +139,14 @@ describe('persistent storage and the install explanation', () => {
 		const store = await openFreshStore('persist');
 		expect(await requestPersistenceOnce(store, { persist: async () => true })).toBe('granted');
 		expect(await requestPersistenceOnce(store, { persist: async () => true })).toBeNull();
-		const saved = await saveCheck(store, { title: 't', input: demoCase(), result: null, engineVersion: '0' });
+		const saved = await saveCheck(store, plainCheck('t'));
 		expect(saved.ok && saved.value.persistence).toBeNull();
 		store.close();
 	});
 
 	it('reports the answer on the very first save', async () => {
 		const store = await openFreshStore('persist-first');
-		const saved = await saveCheck(store, { title: 't', input: demoCase(), result: null, engineVersion: '0' });
+		const saved = await saveCheck(store, plainCheck('t'));
 		// Node has no navigator.storage.persist, so the wrapped answer is 'unsupported'.
 		expect(saved.ok && saved.value.persistence).toBe('unsupported');
 		store.close();

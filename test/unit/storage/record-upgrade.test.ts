@@ -6,6 +6,10 @@ import { STORE_MIGRATIONS } from '../../../src/lib/storage/migrations';
 import { findRecordProblem } from '../../../src/lib/storage/validate-record';
 import fixture from '../../fixtures/db/checks-v1.json';
 
+function lacksSchemaVersion(value: unknown): boolean {
+	return !(typeof value === 'object' && value !== null && 'schemaVersion' in value);
+}
+
 describe('record upgraders', () => {
 	it('number store migrations and record upgraders by exactly one, never reused', () => {
 		expect(STORE_MIGRATIONS.map((m) => m.version)).toEqual(STORE_MIGRATIONS.map((_, i) => i + 1));
@@ -34,12 +38,10 @@ describe('record upgraders', () => {
 	});
 
 	it('refuses a newer record and a record without a schema version', () => {
-		expect(upgradeRecord({ ...fixture.records[0], schemaVersion: RECORD_SCHEMA_VERSION + 1 })).toMatchObject({
-			ok: false,
-			reason: 'newer'
-		});
+		const future = { ...fixture.records[0], schemaVersion: RECORD_SCHEMA_VERSION + 1 };
+		expect(upgradeRecord(future)).toMatchObject({ ok: false, reason: 'newer' });
 		fc.assert(
-			fc.property(fc.anything().filter((v) => !(typeof v === 'object' && v !== null && 'schemaVersion' in v)), (raw) => {
+			fc.property(fc.anything().filter(lacksSchemaVersion), (raw) => {
 				expect(upgradeRecord(raw)).toMatchObject({ ok: false, reason: 'damaged' });
 			})
 		);

@@ -11,7 +11,8 @@ import {
 	type CheckStore
 } from '../../../src/lib/storage';
 import { MAX_REVISIONS } from '../../../src/lib/storage/constants';
-import { demoCase, openFreshStore, stubWritesQuota } from '../../storage/support';
+import { createId } from '../../../src/lib/storage/ids';
+import { demoCase, openFreshStore, plainCheck, stubWritesQuota } from '../../storage/support';
 
 const at = (iso: string) => new Date(iso);
 
@@ -52,10 +53,11 @@ describe('saving and reading checks', () => {
 
 	it('lists newest change first and searches title, place, notes and section designation', async () => {
 		const store = await openFreshStore('list');
-		await saveDemo(store, 'Alpha', '2026-05-01T10:00:00.000Z', { place: { building: 'North Wing' } });
-		const b = await saveDemo(store, 'Beta', '2026-05-02T10:00:00.000Z', { notes: 'over the café' });
-		const c = await saveDemo(store, 'Gamma', '2026-05-03T10:00:00.000Z', { input: demoCase('IPE 300') });
-		await updateCheck(store, b.id, { notes: 'over the café, moved' }, { now: at('2026-05-04T10:00:00.000Z') });
+		const day = (d: number) => `2026-05-0${d}T10:00:00.000Z`;
+		await saveDemo(store, 'Alpha', day(1), { place: { building: 'North Wing' } });
+		const b = await saveDemo(store, 'Beta', day(2), { notes: 'over the café' });
+		const c = await saveDemo(store, 'Gamma', day(3), { input: demoCase('IPE 300') });
+		await updateCheck(store, b.id, { notes: 'over the café, moved' }, { now: at(day(4)) });
 		const titles = async (search?: string) => {
 			const list = await listChecks(store, { search });
 			return list.ok ? list.value.map((r) => r.title) : [];
@@ -161,7 +163,7 @@ describe('a full disk', () => {
 		const kept = await saveDemo(store, 'Kept', '2026-05-01T10:00:00.000Z');
 		const restore = stubWritesQuota(0);
 		try {
-			const save = await saveCheck(store, { title: 'New', input: demoCase(), result: null, engineVersion: '0' });
+			const save = await saveCheck(store, plainCheck('New'));
 			const edit = await updateCheck(store, kept.id, { title: 'Changed' });
 			for (const outcome of [save, edit]) {
 				expect(outcome.ok).toBe(false);
@@ -176,5 +178,14 @@ describe('a full disk', () => {
 		const list = await listChecks(store);
 		expect(list).toEqual({ ok: true, value: [kept] });
 		store.close();
+	});
+});
+
+describe('record ids', () => {
+	it('have the version-4 UUID layout of RFC 4122 §4.4 and do not repeat', () => {
+		const ids = Array.from({ length: 500 }, createId);
+		const layout = /^[0-9a-f]{8}-[0-9a-f]{4}-4[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/;
+		for (const id of ids) expect(id).toMatch(layout);
+		expect(new Set(ids).size).toBe(ids.length);
 	});
 });

@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { SettingsState, DEFAULT_SETTINGS, BUILT_IN_FACTOR_SETS } from '../../../src/lib/ui/state/settings.svelte';
+import {
+	SettingsState,
+	DEFAULT_SETTINGS,
+	BUILT_IN_FACTOR_SETS
+} from '../../../src/lib/ui/state/settings.svelte';
 import { loadSettings, openStore } from '../../../src/lib/storage';
 import { openFreshStore, stubWritesQuota } from '../../storage/support';
 
@@ -17,7 +21,11 @@ describe('SettingsState', () => {
 		if (!reopened.ok) throw new Error(reopened.message);
 		const again = new SettingsState();
 		await again.load(reopened.store);
-		expect(again.current).toMatchObject({ units: 'US', userName: 'A. Engineer', deflectionLimit: 250 });
+		expect(again.current).toMatchObject({
+			units: 'US',
+			userName: 'A. Engineer',
+			deflectionLimit: 250
+		});
 		reopened.store.close();
 	});
 

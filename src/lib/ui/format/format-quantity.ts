@@ -20,7 +20,8 @@ export function formatQuantity(
 	digits?: number
 ): string {
 	const unit = findDisplayUnit(quantity, units);
-	return `${formatNumber(toDisplay(valueSI, quantity, units), digits ?? unit.digits)}\u00a0${unit.symbol}`;
+	const number = formatNumber(toDisplay(valueSI, quantity, units), digits ?? unit.digits);
+	return `${number}\u00a0${unit.symbol}`;
 }
 
 /**
