@@ -56,7 +56,7 @@ export function arbitraryBeamSpec(options: BeamArbitraryOptions = {}): fc.Arbitr
 			});
 			Mp[Mp.length - 1].to = L;
 			return fc.record({
-				fixed: fixedLoads ? fc.array(arbitraryLoad(L, upward), { maxLength: 3 }) : fc.constant([]),
+				fixed: fixedLoads ? fc.array(arbitraryLoad(L, upward), { maxLength: 3 }) : fc.constant<LoadSpec[]>([]),
 				variable: fc.array(arbitraryLoad(L, upward), { minLength: 1, maxLength: 4 })
 			}).map(
 				(loads): ProblemSpec => ({
