@@ -41,6 +41,16 @@ describe('scaling every dimension by k', () => {
 		expect(doubled.Iy / base.Iy).toBeCloseTo(16, 12);
 	});
 
+	it('welded I obeys the same laws', () => {
+		fc.assert(
+			fc.property(iDims, fc.double({ min: 0.25, max: 4, noNaN: true }), (dims, k) => {
+				const plate = { ...dims, r: 0 };
+				const scaled = computeSectionProperties('welded-I', scale(plate, k));
+				expectScaled(scaled, computeSectionProperties('welded-I', plate), k);
+			})
+		);
+	});
+
 	it('RHS, CHS and flat bar obey the same laws', () => {
 		fc.assert(
 			fc.property(

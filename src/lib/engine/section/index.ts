@@ -10,7 +10,11 @@ export {
 	type SectionMeasurements
 } from './identify';
 export { computeSectionProperties } from './properties';
-export { computeISectionProperties, computeRolledTorsionConstant } from './i-section';
+export {
+	computeISectionProperties,
+	computeRolledTorsionConstant,
+	type ISectionOptions
+} from './i-section';
 export { computeRhsProperties, computeRhsCornerRadii } from './rhs';
 export { computeChsProperties } from './chs';
 export { computeFlatProperties } from './flat';

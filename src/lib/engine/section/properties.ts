@@ -26,7 +26,7 @@ export function computeSectionProperties(
 		shape === 'I'
 			? computeISectionProperties(dims as IDims)
 			: shape === 'welded-I'
-				? computeISectionProperties({ ...(dims as IDims), r: 0 })
+				? computeISectionProperties({ ...(dims as IDims), r: 0 }, { welded: true })
 				: shape === 'RHS'
 					? computeRhsProperties(dims as RhsDims)
 					: shape === 'CHS'
