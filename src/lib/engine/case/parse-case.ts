@@ -13,7 +13,17 @@ import { addError, isRecord, readNumber, warnUnknownKeys } from './read-value';
 import { CASE_FORMAT, CASE_VERSION, type CaseFile, type CaseModel } from './types';
 
 const TOP_KEYS = ['format', 'version', 'title', 'beam', 'loads', 'factors', 'deflectionLimit'];
-const BEAM_KEYS = ['spans', 'supports', 'joints', 'section', 'grade', 'sectionLoss', 'selfWeight', 'restraint', 'bearing'];
+const BEAM_KEYS = [
+	'spans',
+	'supports',
+	'joints',
+	'section',
+	'grade',
+	'sectionLoss',
+	'selfWeight',
+	'restraint',
+	'bearing'
+];
 
 /**
  * Validates a parsed JSON value as a case file and converts it to internal units.
@@ -25,7 +35,8 @@ const BEAM_KEYS = ['spans', 'supports', 'joints', 'section', 'grade', 'sectionLo
 export function parseCase(json: unknown): Checked<CaseModel> {
 	const issues: InputIssue[] = [];
 	if (!isRecord(json)) {
-		addError(issues, '', 'not-an-object', 'A case file is a JSON object with format, version, beam and loads.');
+		const message = 'A case file is a JSON object with format, version, beam and loads.';
+		addError(issues, '', 'not-an-object', message);
 		return { ok: false, issues };
 	}
 	warnUnknownKeys(json, TOP_KEYS, '', issues);
@@ -36,10 +47,19 @@ export function parseCase(json: unknown): Checked<CaseModel> {
 	const b = beam ?? {};
 	const line = beam ? parseGeometry(b, issues) : undefined;
 	const spansM = readSpanList(b.spans);
-	const loss = b.sectionLoss === undefined ? 0 : readNumber(b.sectionLoss, 'beam.sectionLoss', issues, { label: 'section loss (mm per face)', min: 0 });
+	const loss =
+		b.sectionLoss === undefined
+			? 0
+			: readNumber(b.sectionLoss, 'beam.sectionLoss', issues, {
+					label: 'section loss (mm per face)',
+					min: 0
+				});
 	if (b.selfWeight !== undefined && typeof b.selfWeight !== 'boolean')
 		addError(issues, 'beam.selfWeight', 'not-a-boolean', 'selfWeight must be true or false.');
-	const materials = beam && loss !== undefined ? parseSections(b, spansM?.length, loss, issues, issues) : undefined;
+	const materials =
+		beam && loss !== undefined
+			? parseSections(b, spansM?.length, loss, issues, issues)
+			: undefined;
 	const loads = parseLoads(json.loads, spansM, issues);
 	const factors = parseFactors(json.factors, issues);
 	const restraint = parseRestraint(b.restraint, spansM, issues);
@@ -58,7 +78,10 @@ export function parseCase(json: unknown): Checked<CaseModel> {
 		materials.sections.forEach((s, e) => {
 			const mass = s.props?.mass ?? s.massKnown;
 			if (mass === undefined) return void selfWeightMissing.push(e);
-			if (mass > 0) selfWeightLoads.push({ kind: 'uniform', from: nodes[e], to: nodes[e + 1], value: massToLineLoad(mass), action: 'permanent' });
+			if (mass <= 0) return;
+			const [from, to] = [nodes[e], nodes[e + 1]];
+			const value = massToLineLoad(mass);
+			selfWeightLoads.push({ kind: 'uniform', from, to, value, action: 'permanent' });
 		});
 	}
 	const model: CaseModel = {
@@ -82,20 +105,27 @@ export function parseCase(json: unknown): Checked<CaseModel> {
 }
 
 function checkHeader(json: Record<string, unknown>, issues: InputIssue[]): void {
-	if (json.format !== CASE_FORMAT)
-		addError(issues, 'format', 'format-unknown', `This is not a case file: "format" must be "${CASE_FORMAT}".`);
-	if (typeof json.version === 'number' && json.version > CASE_VERSION)
-		addError(issues, 'version', 'version-newer', `Written by a newer version (${json.version}); this engine reads version ${CASE_VERSION}. Update the app.`);
-	else if (json.version !== CASE_VERSION)
+	if (json.format !== CASE_FORMAT) {
+		const message = `Not a case file: "format" must be "${CASE_FORMAT}".`;
+		addError(issues, 'format', 'format-unknown', message);
+	}
+	if (typeof json.version === 'number' && json.version > CASE_VERSION) {
+		const message =
+			`Written by a newer version (${json.version}); this engine reads version ` +
+			`${CASE_VERSION}. Update the app.`;
+		addError(issues, 'version', 'version-newer', message);
+	} else if (json.version !== CASE_VERSION) {
 		addError(issues, 'version', 'version-unknown', `"version" must be ${CASE_VERSION}.`);
+	}
 	if (json.title !== undefined && typeof json.title !== 'string')
 		addError(issues, 'title', 'not-a-string', 'The title must be text.');
 }
 
-/** The span list in m when every entry is a positive finite number (issues come from parseGeometry). */
+/** The span list in m when every entry is a positive number (parseGeometry reports the rest). */
 function readSpanList(value: unknown): number[] | undefined {
 	if (!Array.isArray(value) || value.length === 0) return undefined;
-	return value.every((v) => typeof v === 'number' && Number.isFinite(v) && v > 0) ? (value as number[]) : undefined;
+	const ok = value.every((v) => typeof v === 'number' && Number.isFinite(v) && v > 0);
+	return ok ? (value as number[]) : undefined;
 }
 
 /** The known parts of the file, as read (file units), without unknown keys. */

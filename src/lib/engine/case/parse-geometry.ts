@@ -15,26 +15,24 @@ const JOINTS: readonly JointKind[] = ['continuous', 'simple'];
  * @example
  * parseGeometry({ spans: [6], supports: ['pin', 'pin'] }, issues) // { spans: [6000], … }
  */
-export function parseGeometry(beam: Record<string, unknown>, issues: InputIssue[]): BeamLine | undefined {
+export function parseGeometry(
+	beam: Record<string, unknown>,
+	issues: InputIssue[]
+): BeamLine | undefined {
 	const before = issues.length;
 	const spans = readSpans(beam.spans, issues);
 	// List lengths can be checked even when a span value is wrong.
 	const n = Array.isArray(beam.spans) && beam.spans.length > 0 ? beam.spans.length : undefined;
-	const supports = readList(beam.supports, 'beam.supports', n === undefined ? undefined : n + 1, issues, (v, p) =>
+	const supportCount = n === undefined ? undefined : n + 1;
+	const supports = readList(beam.supports, 'beam.supports', supportCount, issues, (v, p) =>
 		readChoice(v, p, issues, SUPPORTS, 'support')
 	);
-	const joints =
-		beam.joints === undefined
-			? n === undefined
-				? undefined
-				: new Array<JointKind>(Math.max(0, n - 1)).fill('continuous')
-			: readList(beam.joints, 'beam.joints', n === undefined ? undefined : n - 1, issues, (v, p) =>
-					readChoice(v, p, issues, JOINTS, 'joint')
-				);
+	const joints = readJoints(beam.joints, n, issues);
 	if (!spans || !supports || !joints || issues.length > before) return undefined;
 	supports.forEach((kind, i) => {
-		if (kind === 'free' && i > 0 && i < supports.length - 1)
-			addError(issues, `beam.supports[${i}]`, 'free-inside', 'Only the two ends of the beam may be free.');
+		if (kind !== 'free' || i === 0 || i === supports.length - 1) return;
+		const message = 'Only the two ends of the beam may be free.';
+		addError(issues, `beam.supports[${i}]`, 'free-inside', message);
 	});
 	if (supports.length === 2 && supports.every((s) => s === 'free'))
 		addError(issues, 'beam.supports', 'no-support', 'The beam needs at least one support.');
@@ -45,12 +43,26 @@ export function parseGeometry(beam: Record<string, unknown>, issues: InputIssue[
 	return mech.length > 0 ? undefined : line;
 }
 
+/** Joints as given, or all continuous when omitted. */
+function readJoints(
+	value: unknown,
+	n: number | undefined,
+	issues: InputIssue[]
+): JointKind[] | undefined {
+	if (n === undefined) return undefined;
+	if (value === undefined) return new Array<JointKind>(Math.max(0, n - 1)).fill('continuous');
+	const readJoint = (v: unknown, p: string) => readChoice(v, p, issues, JOINTS, 'joint');
+	return readList(value, 'beam.joints', n - 1, issues, readJoint);
+}
+
 function readSpans(value: unknown, issues: InputIssue[]): number[] | undefined {
 	if (!Array.isArray(value) || value.length === 0) {
-		addError(issues, 'beam.spans', 'spans-missing', 'Give the span lengths in m as a list, e.g. [6.0].');
+		const message = 'Give the span lengths in m as a list, e.g. [6.0].';
+		addError(issues, 'beam.spans', 'spans-missing', message);
 		return undefined;
 	}
-	const out = value.map((v, i) => readNumber(v, `beam.spans[${i}]`, issues, { label: 'span (m)', positive: true }));
+	const rule = { label: 'span (m)', positive: true };
+	const out = value.map((v, i) => readNumber(v, `beam.spans[${i}]`, issues, rule));
 	return out.every((v): v is number => v !== undefined) ? out : undefined;
 }
 
@@ -66,8 +78,11 @@ function readList<T>(
 		return undefined;
 	}
 	if (length !== undefined && value.length !== length) {
-		const what = path.endsWith('supports') ? 'one support per node (spans + 1)' : 'one joint per internal node (spans − 1)';
-		addError(issues, path, 'wrong-length', `Expected ${length} entries: ${what}; got ${value.length}.`);
+		const what = path.endsWith('supports')
+			? 'one support per node (spans + 1)'
+			: 'one joint per internal node (spans − 1)';
+		const message = `Expected ${length} entries: ${what}; got ${value.length}.`;
+		addError(issues, path, 'wrong-length', message);
 		return undefined;
 	}
 	const out = value.map((v, i) => readItem(v, `${path}[${i}]`));

@@ -4,7 +4,14 @@
 import type { InputIssue } from '../model/issue';
 import type { Load } from '../model/types';
 import { kNPerMToNPerMm, kNToN, mToMm } from '../units';
-import { addError, addWarning, isRecord, readChoice, readNumber, warnUnknownKeys } from './read-value';
+import {
+	addError,
+	addWarning,
+	isRecord,
+	readChoice,
+	readNumber,
+	warnUnknownKeys
+} from './read-value';
 import type { CaseAction } from './types';
 
 const ACTIONS: readonly CaseAction[] = ['permanent', 'imposed', 'temporary'];
@@ -68,26 +75,37 @@ export function readPosition(
 	const tol = 1e-9 * Math.max(1, length.m);
 	if (x < -tol || x > length.m + tol) {
 		const shown = Number(length.m.toPrecision(10));
-		addError(issues, path, code, `The position ${x} m is off the beam, which runs from 0 to ${shown} m.`);
+		const message = `The position ${x} m is off the beam, which runs from 0 to ${shown} m.`;
+		addError(issues, path, code, message);
 		return undefined;
 	}
 	return Math.min(Math.max(mToMm(x), 0), length.mm);
 }
 
-function parseLoad(raw: unknown, path: string, length: BeamLength | undefined, issues: InputIssue[]): Load | undefined {
+function parseLoad(
+	raw: unknown,
+	path: string,
+	length: BeamLength | undefined,
+	issues: InputIssue[]
+): Load | undefined {
 	if (!isRecord(raw)) {
-		addError(issues, path, 'not-an-object', 'Each load must be an object with kind, position, value and action.');
+		const message = 'Each load must be an object with kind, position, value and action.';
+		addError(issues, path, 'not-an-object', message);
 		return undefined;
 	}
-	const kind = readChoice(raw.kind, `${path}.kind`, issues, ['point', 'uniform', 'linear'] as const, 'load kind');
+	const kinds = ['point', 'uniform', 'linear'] as const;
+	const kind = readChoice(raw.kind, `${path}.kind`, issues, kinds, 'load kind');
 	const action = readChoice(raw.action, `${path}.action`, issues, ACTIONS, 'action');
 	if (!kind) return undefined;
 	warnUnknownKeys(raw, KEYS[kind], path, issues);
-	const onBeam = (v: unknown, key: string): number | undefined => readPosition(v, `${path}.${key}`, length, issues);
+	const onBeam = (v: unknown, key: string): number | undefined =>
+		readPosition(v, `${path}.${key}`, length, issues);
 	const force = (key: string, label: string): number | undefined => {
 		const v = readNumber(raw[key], `${path}.${key}`, issues, { label });
-		if (v !== undefined && v < 0)
-			addWarning(issues, `${path}.${key}`, 'load-upward', 'A negative value acts upward; check that is intended.');
+		if (v !== undefined && v < 0) {
+			const message = 'A negative value acts upward; check that is intended.';
+			addWarning(issues, `${path}.${key}`, 'load-upward', message);
+		}
 		return v;
 	};
 	if (kind === 'point') {
@@ -100,7 +118,8 @@ function parseLoad(raw: unknown, path: string, length: BeamLength | undefined, i
 	const to = onBeam(raw.to, 'to');
 	if (from !== undefined && to !== undefined && !(to > from)) {
 		const [a, b] = [from / 1000, to / 1000];
-		addError(issues, `${path}.to`, 'range-empty', `"to" (${b} m) must be greater than "from" (${a} m).`);
+		const message = `"to" (${b} m) must be greater than "from" (${a} m).`;
+		addError(issues, `${path}.to`, 'range-empty', message);
 		return undefined;
 	}
 	if (kind === 'uniform') {
@@ -110,6 +129,9 @@ function parseLoad(raw: unknown, path: string, length: BeamLength | undefined, i
 	}
 	const start = force('start', 'line load at "from" (kN/m)');
 	const end = force('end', 'line load at "to" (kN/m)');
-	if (from === undefined || to === undefined || start === undefined || end === undefined || !action) return undefined;
+	if (from === undefined || to === undefined || start === undefined || end === undefined) {
+		return undefined;
+	}
+	if (!action) return undefined;
 	return { kind, from, to, start: kNPerMToNPerMm(start), end: kNPerMToNPerMm(end), action };
 }

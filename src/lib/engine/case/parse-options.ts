@@ -5,7 +5,14 @@
  */
 import type { InputIssue } from '../model/issue';
 import { measureBeam, readPosition } from './parse-loads';
-import { addError, addWarning, isRecord, readChoice, readNumber, warnUnknownKeys } from './read-value';
+import {
+	addError,
+	addWarning,
+	isRecord,
+	readChoice,
+	readNumber,
+	warnUnknownKeys
+} from './read-value';
 import type { CaseModel, ResolvedFactors } from './types';
 
 /**
@@ -31,7 +38,8 @@ const EXTRA_KEYS = ['xi', 'psi0'] as const;
 export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFactors | undefined {
 	if (value === undefined) return { ...DEFAULT_FACTORS };
 	if (!isRecord(value)) {
-		addError(issues, 'factors', 'not-an-object', 'The factors must be an object, e.g. {"permanent": 1.35}.');
+		const message = 'The factors must be an object, e.g. {"permanent": 1.35}.';
+		addError(issues, 'factors', 'not-an-object', message);
 		return undefined;
 	}
 	warnUnknownKeys(value, [...FACTOR_KEYS, ...EXTRA_KEYS, 'set'], 'factors', issues);
@@ -39,7 +47,8 @@ export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFact
 	let ok = true;
 	for (const key of FACTOR_KEYS) {
 		if (value[key] === undefined) continue;
-		const v = readNumber(value[key], `factors.${key}`, issues, { label: `factor ${key}`, positive: true });
+		const rule = { label: `factor ${key}`, positive: true };
+		const v = readNumber(value[key], `factors.${key}`, issues, rule);
 		if (v === undefined) ok = false;
 		else out[key] = v;
 	}
@@ -51,8 +60,9 @@ export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFact
 		else extra[key] = v;
 	}
 	for (const key of ['gammaM0', 'gammaM1'] as const) {
-		if ((out[key] ?? 1) < 1)
-			addWarning(issues, `factors.${key}`, 'factor-below-one', `${key} below 1.0 is less safe than any code value.`);
+		if ((out[key] ?? 1) >= 1) continue;
+		const message = `${key} below 1.0 is less safe than any code value.`;
+		addWarning(issues, `factors.${key}`, 'factor-below-one', message);
 	}
 	if (value.set !== undefined && typeof value.set !== 'string') {
 		addError(issues, 'factors.set', 'not-a-string', 'The factor set must be given by its name.');
@@ -72,10 +82,15 @@ export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFact
 }
 
 /** Reads `beam.restraint`; positions in m become mm. */
-export function parseRestraint(value: unknown, spans: number[] | undefined, issues: InputIssue[]): CaseModel['restraint'] {
+export function parseRestraint(
+	value: unknown,
+	spans: number[] | undefined,
+	issues: InputIssue[]
+): CaseModel['restraint'] {
 	if (value === undefined) return undefined;
 	if (!isRecord(value)) {
-		addError(issues, 'beam.restraint', 'not-an-object', 'The restraint must be an object with "lateral".');
+		const message = 'The restraint must be an object with "lateral".';
+		addError(issues, 'beam.restraint', 'not-an-object', message);
 		return undefined;
 	}
 	warnUnknownKeys(value, ['lateral', 'loadHeight'], 'beam.restraint', issues);
@@ -85,30 +100,40 @@ export function parseRestraint(value: unknown, spans: number[] | undefined, issu
 			? undefined
 			: readChoice(value.loadHeight, 'beam.restraint.loadHeight', issues, heights, 'load height');
 	const lat = value.lateral;
-	if (lat === 'continuous' || lat === 'ends-only') return { lateral: lat, ...(loadHeight ? { loadHeight } : {}) };
+	const height = loadHeight ? { loadHeight } : {};
+	if (lat === 'continuous' || lat === 'ends-only') return { lateral: lat, ...height };
 	if (!Array.isArray(lat)) {
-		addError(issues, 'beam.restraint.lateral', 'not-one-of', 'Lateral restraint: "continuous", "ends-only" or a list of positions in m.');
+		const message = 'Lateral restraint: "continuous", "ends-only" or a list of positions in m.';
+		addError(issues, 'beam.restraint.lateral', 'not-one-of', message);
 		return undefined;
 	}
 	const length = spans ? measureBeam(spans) : undefined;
-	const xs = lat.map((v, i) => readPosition(v, `beam.restraint.lateral[${i}]`, length, issues, 'off-beam'));
+	const xs = lat.map((v, i) =>
+		readPosition(v, `beam.restraint.lateral[${i}]`, length, issues, 'off-beam')
+	);
 	if (xs.some((x) => x === undefined)) return undefined;
-	return { lateral: (xs as number[]).sort((a, b) => a - b), ...(loadHeight ? { loadHeight } : {}) };
+	return { lateral: (xs as number[]).sort((a, b) => a - b), ...height };
 }
 
 /** Reads `beam.bearing`: one stiff bearing length per support, mm, zero or more. */
-export function parseBearing(value: unknown, supports: number | undefined, issues: InputIssue[]): number[] | undefined {
+export function parseBearing(
+	value: unknown,
+	supports: number | undefined,
+	issues: InputIssue[]
+): number[] | undefined {
 	if (value === undefined) return undefined;
 	if (!Array.isArray(value) || (supports !== undefined && value.length !== supports)) {
 		addError(issues, 'beam.bearing', 'wrong-length', 'Give one bearing length (mm) per support.');
 		return undefined;
 	}
-	const out = value.map((v, i) => readNumber(v, `beam.bearing[${i}]`, issues, { label: 'bearing length (mm)', min: 0 }));
+	const rule = { label: 'bearing length (mm)', min: 0 };
+	const out = value.map((v, i) => readNumber(v, `beam.bearing[${i}]`, issues, rule));
 	return out.every((v): v is number => v !== undefined) ? out : undefined;
 }
 
 /** Reads `deflectionLimit`: the n of span/n. */
 export function parseDeflectionLimit(value: unknown, issues: InputIssue[]): number | undefined {
 	if (value === undefined) return undefined;
-	return readNumber(value, 'deflectionLimit', issues, { label: 'deflection limit (span divided by)', positive: true });
+	const rule = { label: 'deflection limit (span divided by)', positive: true };
+	return readNumber(value, 'deflectionLimit', issues, rule);
 }

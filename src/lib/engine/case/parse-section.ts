@@ -28,17 +28,20 @@ function relocate(list: InputIssue[], base: string): InputIssue[] {
 /** Checks the outer form of a section entry before the library reads it. */
 function checkSpecForm(raw: unknown, path: string, issues: InputIssue[]): raw is SectionSpec {
 	if (!isRecord(raw)) {
-		addError(issues, path, 'section-missing', 'Give the section: {"designation": …}, a shape with dimensions, or {"mp": …}.');
+		const message = 'Give the section: {"designation": …}, a shape with dimensions, or {"mp": …}.';
+		addError(issues, path, 'section-missing', message);
 		return false;
 	}
 	if ('designation' in raw) {
 		if (typeof raw.designation === 'string') return true;
-		addError(issues, `${path}.designation`, 'not-a-string', 'The designation must be text, e.g. "UB 305x165x40".');
+		const message = 'The designation must be text, e.g. "UB 305x165x40".';
+		addError(issues, `${path}.designation`, 'not-a-string', message);
 		return false;
 	}
 	if ('mp' in raw) return true;
 	if (typeof raw.shape === 'string' && SHAPES.includes(raw.shape)) return true;
-	addError(issues, `${path}.shape`, 'not-one-of', `The shape must be one of: ${SHAPES.join(', ')}.`);
+	const message = `The shape must be one of: ${SHAPES.join(', ')}.`;
+	addError(issues, `${path}.shape`, 'not-one-of', message);
 	return false;
 }
 
@@ -56,7 +59,8 @@ export function parseSections(
 	const raw = beam.section;
 	const perSpan = Array.isArray(raw);
 	if (perSpan && spanCount !== undefined && raw.length !== spanCount) {
-		addError(issues, 'beam.section', 'wrong-length', `Give one section for the beam or one per span (${spanCount}).`);
+		const message = `Give one section for the beam or one per span (${spanCount}).`;
+		addError(issues, 'beam.section', 'wrong-length', message);
 		return undefined;
 	}
 	const entries: unknown[] = perSpan ? raw : [raw];
@@ -84,16 +88,19 @@ function resolveGrades(
 	const needed = sections.some((s) => s.shape !== 'known-mp');
 	if (spec === undefined) {
 		if (!needed) return sections.map(() => null);
-		addError(issues, 'beam.grade', 'grade-missing', 'Give the steel grade (e.g. "S275") or {"fy": …} in MPa.');
+		const message = 'Give the steel grade (e.g. "S275") or {"fy": …} in MPa.';
+		addError(issues, 'beam.grade', 'grade-missing', message);
 		return undefined;
 	}
 	if (typeof spec !== 'string' && !(isRecord(spec) && 'fy' in spec)) {
-		addError(issues, 'beam.grade', 'grade-not-valid', 'The grade must be a name such as "S275" or {"fy": 275}.');
+		const message = 'The grade must be a name such as "S275" or {"fy": 275}.';
+		addError(issues, 'beam.grade', 'grade-not-valid', message);
 		return undefined;
 	}
 	const out: (SteelGrade | null)[] = [];
 	for (const section of sections) {
-		const r = resolveGrade(spec as string | { fy: number; fu?: number }, section.governingThickness);
+		const gradeSpec = spec as string | { fy: number; fu?: number };
+		const r = resolveGrade(gradeSpec, section.governingThickness);
 		if (!r.ok) {
 			issues.push(...relocate(r.issues, 'beam.grade'));
 			return undefined;

@@ -15,7 +15,12 @@ export function addError(issues: InputIssue[], path: string, code: string, messa
 }
 
 /** Appends a warning issue. */
-export function addWarning(issues: InputIssue[], path: string, code: string, message: string): void {
+export function addWarning(
+	issues: InputIssue[],
+	path: string,
+	code: string,
+	message: string
+): void {
 	issues.push({ path, code, message, severity: 'warning' });
 }
 
@@ -32,7 +37,12 @@ export interface NumberRule {
  * Reads a finite number, or records `not-a-number` / `not-positive` / `below-minimum`.
  * @example readNumber('6', 'beam.spans[0]', issues, { label: 'span (m)' }) // undefined, 1 issue
  */
-export function readNumber(value: unknown, path: string, issues: InputIssue[], rule: NumberRule): number | undefined {
+export function readNumber(
+	value: unknown,
+	path: string,
+	issues: InputIssue[],
+	rule: NumberRule
+): number | undefined {
 	if (typeof value !== 'number' || !Number.isFinite(value)) {
 		addError(issues, path, 'not-a-number', `The ${rule.label} must be a number.`);
 		return undefined;
@@ -56,7 +66,8 @@ export function readChoice<T extends string>(
 	choices: readonly T[],
 	label: string
 ): T | undefined {
-	if (typeof value === 'string' && (choices as readonly string[]).includes(value)) return value as T;
+	const known = typeof value === 'string' && (choices as readonly string[]).includes(value);
+	if (known) return value as T;
 	addError(issues, path, 'not-one-of', `The ${label} must be one of: ${choices.join(', ')}.`);
 	return undefined;
 }
@@ -71,6 +82,7 @@ export function warnUnknownKeys(
 	for (const key of Object.keys(obj)) {
 		if (known.includes(key)) continue;
 		const path = prefix ? `${prefix}.${key}` : key;
-		addWarning(issues, path, 'unknown-key', `"${key}" is not part of the case format and was ignored.`);
+		const message = `"${key}" is not part of the case format and was ignored.`;
+		addWarning(issues, path, 'unknown-key', message);
 	}
 }

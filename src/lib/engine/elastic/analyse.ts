@@ -8,7 +8,15 @@ import { listBreakpoints, readElement, type ElementData } from './element-field'
 import { findAbsoluteExtreme, listMomentCandidates } from './extremes';
 import { findMechanismIssues } from './mechanism';
 import { solveStiffness } from './stiffness';
-import type { ElasticDiagramPoint, ElasticInput, ElasticResult, ElasticState, LocatedValue, NodeReaction, Side } from './types';
+import type {
+	ElasticDiagramPoint,
+	ElasticInput,
+	ElasticResult,
+	ElasticState,
+	LocatedValue,
+	NodeReaction,
+	Side
+} from './types';
 
 /** Sample intervals per span in the diagram, besides the load breakpoints. */
 const DIAGRAM_SAMPLES = 24;
@@ -18,8 +26,11 @@ const DIAGRAM_SAMPLES = 24;
  * Returns issues instead of a result when the beam is a mechanism.
  * @param input beam (mm), EI per span (N·mm²), loads (N, N/mm, downward +)
  * @example
- * const r = analyseElastic({ beam: { spans: [6000], supports: ['pin', 'pin'], joints: [] },
- *   EI: [210000 * 8.5e7], loads: [{ kind: 'uniform', from: 0, to: 6000, value: 4, action: 'permanent' }] });
+ * const r = analyseElastic({
+ *   beam: { spans: [6000], supports: ['pin', 'pin'], joints: [] },
+ *   EI: [210000 * 8.5e7],
+ *   loads: [{ kind: 'uniform', from: 0, to: 6000, value: 4, action: 'permanent' }]
+ * });
  * r.ok && r.value.maxDeflection.overall.value // 5wL⁴/384EI ≈ 3.78 mm
  */
 export function analyseElastic(input: ElasticInput): Checked<ElasticResult> {
@@ -96,7 +107,9 @@ function collectReactions(
 			if (sol.restrained.has(sol.dofs[e][k + 1])) moment += sol.endForces[e][k + 1];
 		}
 		const beamMoment =
-			i > 0 ? readElement(elements[i - 1], elements[i - 1].L, 'left').M : readElement(elements[0], 0, 'right').M;
+			i > 0
+				? readElement(elements[i - 1], elements[i - 1].L, 'left').M
+				: readElement(elements[0], 0, 'right').M;
 		return {
 			node: i,
 			x,
@@ -131,7 +144,11 @@ function findMaxMoments(nodes: number[], elements: ElementData[]): ElasticResult
 	let hi: LocatedValue = { x: 0, value: -Infinity };
 	let lo: LocatedValue = { x: 0, value: Infinity };
 	elements.forEach((el, e) => {
-		const field = { L: el.L, breakpoints: listBreakpoints(el), read: (s: number, side: Side) => readElement(el, s, side) };
+		const field = {
+			L: el.L,
+			breakpoints: listBreakpoints(el),
+			read: (s: number, side: Side) => readElement(el, s, side)
+		};
 		for (const c of listMomentCandidates(field)) {
 			if (c.M > hi.value) hi = { x: nodes[e] + c.s, value: c.M };
 			if (c.M < lo.value) lo = { x: nodes[e] + c.s, value: c.M };
@@ -145,7 +162,10 @@ function findMaxMoments(nodes: number[], elements: ElementData[]): ElasticResult
 	};
 }
 
-function findMaxDeflections(nodes: number[], elements: ElementData[]): ElasticResult['maxDeflection'] {
+function findMaxDeflections(
+	nodes: number[],
+	elements: ElementData[]
+): ElasticResult['maxDeflection'] {
 	const spans = elements.map((el, e) => {
 		const ext = findAbsoluteExtreme(
 			(s) => readElement(el, s, 'right').w,

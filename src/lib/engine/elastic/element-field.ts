@@ -38,8 +38,8 @@ export function readElement(el: ElementData, s: number, side: Side): LocalState 
 	const at = side === 'right';
 	const V = F1 - sumLoadIntegral(el.loads, s, at, () => 1);
 	const M = -M1 + F1 * s - sumLoadIntegral(el.loads, s, at, (t) => s - t);
-	const dTheta =
-		(-M1 * s + (F1 * s * s) / 2 - sumLoadIntegral(el.loads, s, at, (t) => (s - t) ** 2 / 2)) / el.EI;
+	const loadSlope = sumLoadIntegral(el.loads, s, at, (t) => (s - t) ** 2 / 2);
+	const dTheta = (-M1 * s + (F1 * s * s) / 2 - loadSlope) / el.EI;
 	const dV =
 		((-M1 * s * s) / 2 +
 			(F1 * s ** 3) / 6 -

@@ -40,7 +40,8 @@ export function splitLoadsBySpan(beam: BeamLine, loads: Load[]): ElementLoad[][]
 			const from = Math.max(load.from, nodes[e]);
 			const to = Math.min(load.to, nodes[e + 1]);
 			if (to <= from) continue;
-			out[e].push({ kind: 'line', a: from - nodes[e], b: to - nodes[e], wa: wAt(from), wb: wAt(to) });
+			const [a, b] = [from - nodes[e], to - nodes[e]];
+			out[e].push({ kind: 'line', a, b, wa: wAt(from), wb: wAt(to) });
 		}
 	}
 	return out;
@@ -54,7 +55,8 @@ export function findSpanIndex(nodes: number[], x: number): number {
 
 /** Line-load intensity of a piece at local position t (inside [a, b]), N/mm. */
 export function lineIntensity(load: Extract<ElementLoad, { kind: 'line' }>, t: number): number {
-	return load.b === load.a ? load.wa : load.wa + ((load.wb - load.wa) * (t - load.a)) / (load.b - load.a);
+	if (load.b === load.a) return load.wa;
+	return load.wa + ((load.wb - load.wa) * (t - load.a)) / (load.b - load.a);
 }
 
 /**

@@ -6,7 +6,7 @@ import type { InputIssue } from '../model/issue';
 import { assertFinite } from '../model/issue';
 import type { BeamLine, Load } from '../model/types';
 import { analyseElastic } from './analyse';
-import { computeNodePositions, splitLoadsBySpan } from './element-loads';
+import { computeNodePositions, splitLoadsBySpan, type ElementLoad } from './element-loads';
 import { listBreakpoints } from './element-field';
 import { listMomentCandidates } from './extremes';
 import type { ElasticResult, Side } from './types';
@@ -49,8 +49,9 @@ export function computeElasticLimitFactor(input: ElasticLimitInput): ElasticLimi
 	const fixedBp = splitLoadsBySpan(beam, input.fixedLoads);
 	const varBp = splitLoadsBySpan(beam, input.variableLoads);
 	const breakpoints = beam.spans.map((L, e) => {
-		const el = (loads: typeof fixedBp[number]) => listBreakpoints({ L, EI: 1, loads, displacements: [], forces: [] });
-		return [...new Set([...el(fixedBp[e]), ...el(varBp[e])])].sort((a, b) => a - b);
+		const points = (loads: ElementLoad[]) =>
+			listBreakpoints({ L, EI: 1, loads, displacements: [], forces: [] });
+		return [...new Set([...points(fixedBp[e]), ...points(varBp[e])])].sort((a, b) => a - b);
 	});
 	const ratioAt = (lambda: number): { ratio: number; x: number } =>
 		findWorstRatio(fixed.value, variable.value, lambda, { nodes, breakpoints, limit: input.limit });

@@ -74,8 +74,11 @@ export function solveStiffness(
 	const d = new Array<number>(count).fill(0);
 	free.forEach((p, i) => (d[p] = x[i]));
 	const endDisplacements = dofs.map((ids) => ids.map((p) => d[p]));
+	// f = k·d + fixed-end forces, per element.
 	const endForces = beam.spans.map((_, e) =>
-		fixedEnd[e].map((f, i) => f + ks[e][i].reduce((s, kij, j) => s + kij * endDisplacements[e][j], 0))
+		fixedEnd[e].map(
+			(f, i) => f + ks[e][i].reduce((s, kij, j) => s + kij * endDisplacements[e][j], 0)
+		)
 	);
 	return { endDisplacements, endForces, dofs, restrained };
 }
