@@ -49,10 +49,31 @@ function formatCheckText(r: CheckReport, warnings: { path: string; message: stri
 	}
 	if (e.firstYield) lines.push(`  first yield at factor ${fmt(e.firstYield.factor)}`);
 	if (e.firstHinge) lines.push(`  first plastic hinge at factor ${fmt(e.firstHinge.factor)}`);
+	lines.push('', ...formatVerdictText(r));
 	lines.push('', 'Notices:', ...r.notices.map((n) => `  - ${n}`));
 	if (warnings.length > 0) lines.push('', 'Input warnings:', ...warnings.map((w) => `  - ${w.path}: ${w.message}`));
 	lines.push('', `Engine ${r.engineVersion}`);
 	return lines.join('\n');
+}
+
+/** Verdict, governing check, reserve, allowable loads and every check row. */
+function formatVerdictText(r: CheckReport): string[] {
+	const d = r.design;
+	const lines = [`Verdict: ${r.verdict.toUpperCase()} (${d.route.route})`, ...d.route.reasons.map((t) => `  ${t}`)];
+	if (r.governing) lines.push(`  governing: ${r.governing.label}, utilisation ${fmt(r.governing.utilisation, 3)}`);
+	if (d.loadFactor !== null) lines.push(`  load factor on the temporary loads ${fmt(d.loadFactor)}`);
+	if (r.reserve !== null) lines.push(`  reserve ${fmt(r.reserve, 3)} %`);
+	lines.push(`  factor set ${d.factorSet}, ${d.arrangementsTried} load arrangements tried`);
+	if (d.governingArrangement) lines.push(`  governing arrangement: ${d.governingArrangement}`);
+	for (const t of r.allowable?.loads ?? []) {
+		lines.push(`  largest ${t.label ?? `load ${t.index + 1}`}: ${fmt(t.capacity)} ${t.unit} (entered ${fmt(t.entered)})`);
+	}
+	lines.push('', 'Checks:');
+	for (const c of r.checks) {
+		const mark = c.pass ? 'ok' : c.level === 'warning' ? 'over (warning)' : 'FAILS';
+		lines.push(`  ${c.label}: ${fmt(c.utilisation * 100, 3)} % ${mark} [${c.clause}]`);
+	}
+	return lines;
 }
 
 /** Writes the `{"errors": […]}` object of an input problem and returns exit code 2. */

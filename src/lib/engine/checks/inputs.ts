@@ -8,6 +8,7 @@ import type { BasisFactors } from './design-basis';
 import type { FactorSettings } from './en1993/factors';
 import type { SectionClass } from './en1993/scope';
 import type { HingeReduction } from './plastic-bending';
+import type { LoadArrangement } from './load-arrangements';
 import type { LateralRestraint, LoadHeight } from './restraint';
 import type { CheckResult } from './types';
 import type { Verdict } from './verdict';
@@ -55,6 +56,8 @@ export interface DesignCheckOutcome {
 	factors: BasisFactors;
 	/** Number of load arrangements tried. */
 	arrangementCount: number;
+	/** The arrangement that governs bending (the collapse or first-hinge factor); null outside scope. */
+	bendingArrangement: LoadArrangement | null;
 	sectionClass: SectionClass | null;
 	collapse: CollapseSummary | null;
 	checks: CheckResult[];

@@ -76,7 +76,7 @@ export function runDesignChecks(
 	const base = { basis: basis.name, factors, sectionClass, ...notes };
 	if (early.route === 'outside-scope') {
 		const verdict = decideVerdict({ scope: early, checks: [], loadFactor: null });
-		return { ...base, arrangementCount: 0, collapse: null, checks: [], verdict };
+		return { ...base, arrangementCount: 0, bendingArrangement: null, collapse: null, checks: [], verdict };
 	}
 	const arrangements = listLoadArrangements({ combinations: factors.combinations, spanCount: beam.spans.length, imposedSpans });
 	const allKnown = members.every((m) => m.propsKnown);
@@ -150,7 +150,9 @@ export function runDesignChecks(
 	}
 	const loadFactor = route.route === 'plastic' ? (collapse?.loadFactor ?? null) : bendingFactor(checks);
 	const verdict = decideVerdict({ scope: route, checks, loadFactor });
-	return { ...base, arrangementCount: arrangements.length, collapse, checks, verdict };
+	const bendingRow = checks.find((c) => c.id === 'bending');
+	const bendingArrangement = arrangements.find((a) => a.name === bendingRow?.arrangement) ?? null;
+	return { ...base, arrangementCount: arrangements.length, bendingArrangement, collapse, checks, verdict };
 }
 
 function bendingFactor(checks: CheckResult[]): number | null {

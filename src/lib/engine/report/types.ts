@@ -4,6 +4,8 @@
  * JSON output: keep them.
  */
 import type { CaseFile, ResolvedFactors } from '../case/types';
+import type { CheckRowReport, DesignCheckReport } from '../checks/report-fields';
+import type { VerdictKind } from '../checks/types';
 import type { SectionDims, SectionProps, SectionShape } from '../section/types';
 
 /** Which loads λ multiplies: the temporary ones, or (with no temporary load) all of them. */
@@ -151,6 +153,20 @@ export interface CheckReport {
 	grades: (GradeReport | null)[];
 	/** Self-weight line load per span, kN/m (0 where not included). */
 	selfWeight: number[];
+	/** Member checks (bending, shear, interaction, ltb, web, deflection), worst load arrangement each. */
+	checks: CheckRowReport[];
+	/** `pass`, `fail` or `outside-scope`. */
+	verdict: VerdictKind;
+	/** The check that limits the temporary load first; null outside scope. */
+	governing: { id: string; label: string; utilisation: number } | null;
+	/** (allowable multiplier − 1) × 100, %; null outside scope or when the temporary load never governs. */
+	reserve: number | null;
+	/** Route, reasons, factor set, load arrangements and warnings behind the verdict. */
+	design: DesignCheckReport;
+	/** Largest temporary loads as entered: the smallest multiplier over all governing checks. */
+	allowable: TemporaryCapacityReport | null;
+	/** Plain-text summaries for sharing: short (< 600 characters) and long. */
+	summary: { short: string; long: string };
 	/** Always starts with the engineer-of-record notice. */
 	notices: string[];
 	assumptions: string[];
