@@ -8,6 +8,8 @@ import type { HingepointDB, HingepointDBv1 } from '../../src/lib/storage/schema'
 import {
 	getCheck,
 	listChecks,
+	loadDraft,
+	loadSettings,
 	openStore,
 	saveCheck,
 	updateCheck,
@@ -20,8 +22,12 @@ async function writeV1Fixture(name: string, extra: unknown[] = []): Promise<void
 		upgrade: (database, oldVersion, _newVersion, tx) =>
 			applyStoreMigrations(database as never, tx as never, oldVersion, 1)
 	});
-	const tx = db.transaction('checks', 'readwrite');
-	for (const record of [...fixture.records, ...extra]) await tx.store.put(record as never);
+	const tx = db.transaction(['checks', 'drafts', 'meta'], 'readwrite');
+	for (const record of [...fixture.records, ...extra]) {
+		await tx.objectStore('checks').put(record as never);
+	}
+	for (const draft of fixture.drafts) await tx.objectStore('drafts').put(draft);
+	for (const entry of fixture.meta) await tx.objectStore('meta').put(entry);
 	await tx.done;
 	db.close();
 }
@@ -60,6 +66,17 @@ describe('v1 → v2 migration', () => {
 		expect(titles).toEqual(['Scaffold landing beam', 'Plant room trimmer']);
 		const found = await listChecks(opened.store, { search: 'block a grid c/4' });
 		expect(found.ok && found.value.map((r) => r.id)).toEqual([fixture.records[0].id]);
+		opened.store.close();
+	});
+
+	it('keeps the draft and the settings written by version 1', async () => {
+		const name = uniqueDbName('v1v2-draft');
+		await writeV1Fixture(name);
+		const opened = await openStore(name);
+		if (!opened.ok) throw new Error(opened.message);
+		expect(await loadDraft(opened.store)).toEqual({ ok: true, value: fixture.drafts[0] });
+		const settings = await loadSettings(opened.store);
+		expect(settings.ok && settings.value).toMatchObject(fixture.meta[0].value as object);
 		opened.store.close();
 	});
 

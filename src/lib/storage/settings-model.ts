@@ -57,8 +57,7 @@ const EN1990_RECOMMENDED = {
 	psi0: 0.7
 };
 
-/** Factor sets that ship with the app; they cannot be edited or deleted. */
-export const BUILT_IN_FACTOR_SETS: readonly FactorSet[] = [
+const BUILT_IN: FactorSet[] = [
 	{
 		id: 'en1990-6.10',
 		name: 'EN 1990 (6.10), recommended',
@@ -73,8 +72,13 @@ export const BUILT_IN_FACTOR_SETS: readonly FactorSet[] = [
 	}
 ];
 
-/** Settings on first run. span/200 is common practice for beams under variable load. */
-export const DEFAULT_SETTINGS: Readonly<Settings> = {
+/** Factor sets that ship with the app; frozen, they cannot be edited or deleted. */
+export const BUILT_IN_FACTOR_SETS: readonly Readonly<FactorSet>[] = Object.freeze(
+	BUILT_IN.map((set) => Object.freeze(set))
+);
+
+/** Settings on first run (frozen). span/200 is common practice for beams under variable load. */
+export const DEFAULT_SETTINGS: Readonly<Settings> = Object.freeze<Settings>({
 	units: 'SI',
 	factorSets: [],
 	activeFactorSetId: 'en1990-6.10',
@@ -84,7 +88,7 @@ export const DEFAULT_SETTINGS: Readonly<Settings> = {
 	userName: '',
 	company: '',
 	theme: 'light'
-};
+});
 
 /**
  * Settings read from storage, field by field: anything missing or malformed takes its default,
