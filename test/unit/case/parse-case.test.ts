@@ -97,6 +97,27 @@ describe('parseCase: valid files', () => {
 		expect(r.value.factors).toMatchObject({ set: 'en1990-6.10ab', xi: 0.85, psi0: 0.7 });
 	});
 
+	it('passes the other check settings through without unknown-key warnings', () => {
+		const r = parseCase(
+			makeCase((c) => {
+				Object.assign(c, { deflectionLimitTotal: 250, deflectionGoverns: true, eta: 1.2, place: 'Bay 3' });
+				Object.assign(c.beam, { bearingLoads: 50, gradeConfirmed: true });
+				c.factors = { permanentFavourable: 1.0 };
+			})
+		);
+		if (!r.ok) throw new Error(r.issues[0].message);
+		expect(r.value).toMatchObject({
+			deflectionLimitTotal: 250,
+			deflectionGoverns: true,
+			eta: 1.2,
+			place: 'Bay 3',
+			bearingLoads: 50,
+			gradeConfirmed: true
+		});
+		expect(r.value.factors.permanentFavourable).toBe(1);
+		expect(r.warnings.filter((w) => w.code === 'unknown-key')).toEqual([]);
+	});
+
 	it('accepts a load ending at the beam end when the span sum rounds below it (8.1 + 1.2 = 9.2999… m)', () => {
 		// Regression: a UDL to 9.3 m was refused as off the beam, found by the random-case property.
 		const r = parseCase(
@@ -152,7 +173,9 @@ describe('parseCase: every problem names its field', () => {
 		['negative factor', (c: any) => (c.factors = { permanent: -1 }), 'factors.permanent'],
 		['wrong format tag', (c: any) => (c.format = 'beam'), 'format'],
 		['newer version', (c: any) => (c.version = 2), 'version'],
-		['a mechanism', (c: any) => (c.beam.supports = ['pin', 'free']), 'beam.supports']
+		['a mechanism', (c: any) => (c.beam.supports = ['pin', 'free']), 'beam.supports'],
+		['deflection setting not true/false', (c: any) => (c.deflectionGoverns = 'yes'), 'deflectionGoverns'],
+		['negative bearing under loads', (c: any) => (c.beam.bearingLoads = -5), 'beam.bearingLoads']
 	])('%s', (_name, patch, path) => {
 		expect(paths(makeCase(patch))).toContain(path);
 	});

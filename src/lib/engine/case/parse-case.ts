@@ -7,12 +7,24 @@ import type { Load } from '../model/types';
 import { massToLineLoad } from '../units';
 import { parseGeometry } from './parse-geometry';
 import { parseLoads } from './parse-loads';
-import { parseBearing, parseDeflectionLimit, parseFactors, parseRestraint } from './parse-options';
+import { parseBearing, parseCheckSettings, parseFactors, parseRestraint } from './parse-options';
 import { parseSections } from './parse-section';
 import { addError, isRecord, readNumber, warnUnknownKeys } from './read-value';
 import { CASE_FORMAT, CASE_VERSION, type CaseFile, type CaseModel } from './types';
 
-const TOP_KEYS = ['format', 'version', 'title', 'beam', 'loads', 'factors', 'deflectionLimit'];
+const TOP_KEYS = [
+	'format',
+	'version',
+	'title',
+	'beam',
+	'loads',
+	'factors',
+	'deflectionLimit',
+	'deflectionLimitTotal',
+	'deflectionGoverns',
+	'eta',
+	'place'
+];
 const BEAM_KEYS = [
 	'spans',
 	'supports',
@@ -22,7 +34,9 @@ const BEAM_KEYS = [
 	'sectionLoss',
 	'selfWeight',
 	'restraint',
-	'bearing'
+	'bearing',
+	'bearingLoads',
+	'gradeConfirmed'
 ];
 
 /**
@@ -64,7 +78,7 @@ export function parseCase(json: unknown): Checked<CaseModel> {
 	const factors = parseFactors(json.factors, issues);
 	const restraint = parseRestraint(b.restraint, spansM, issues);
 	const bearing = parseBearing(b.bearing, spansM ? spansM.length + 1 : undefined, issues);
-	const deflectionLimit = parseDeflectionLimit(json.deflectionLimit, issues);
+	const settings = parseCheckSettings(json, b, issues);
 	const errors = issues.filter((i) => i.severity === 'error');
 	if (errors.length > 0 || !line || !materials || !loads || !factors || loss === undefined) {
 		if (errors.length === 0) throw new Error('invariant: an unusable case part recorded no error');
@@ -98,7 +112,7 @@ export function parseCase(json: unknown): Checked<CaseModel> {
 		factors,
 		...(restraint ? { restraint } : {}),
 		...(bearing ? { bearing } : {}),
-		...(deflectionLimit !== undefined ? { deflectionLimit } : {}),
+		...settings,
 		file: echoFile(json)
 	};
 	return { ok: true, value: model, warnings: issues.filter((i) => i.severity === 'warning') };

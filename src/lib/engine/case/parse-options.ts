@@ -29,7 +29,7 @@ export const DEFAULT_FACTORS: Readonly<ResolvedFactors> = {
 
 const FACTOR_KEYS = ['permanent', 'imposed', 'temporary', 'gammaM0', 'gammaM1'] as const;
 /** Combination values the design checks read; passed through when given. */
-const EXTRA_KEYS = ['xi', 'psi0'] as const;
+const EXTRA_KEYS = ['xi', 'psi0', 'permanentFavourable'] as const;
 
 /**
  * Partial factors with defaults; `temporary` defaults to the imposed-load factor in use.
@@ -52,7 +52,7 @@ export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFact
 		if (v === undefined) ok = false;
 		else out[key] = v;
 	}
-	const extra: { xi?: number; psi0?: number } = {};
+	const extra: { xi?: number; psi0?: number; permanentFavourable?: number } = {};
 	for (const key of EXTRA_KEYS) {
 		if (value[key] === undefined) continue;
 		const v = readNumber(value[key], `factors.${key}`, issues, { label: `factor ${key}`, min: 0 });
@@ -131,9 +131,57 @@ export function parseBearing(
 	return out.every((v): v is number => v !== undefined) ? out : undefined;
 }
 
-/** Reads `deflectionLimit`: the n of span/n. */
-export function parseDeflectionLimit(value: unknown, issues: InputIssue[]): number | undefined {
-	if (value === undefined) return undefined;
-	const rule = { label: 'deflection limit (span divided by)', positive: true };
-	return readNumber(value, 'deflectionLimit', issues, rule);
+/** Settings the member checks read: deflection limits, η, grade confirmation, bearing, place. */
+export type CheckSettings = Pick<
+	CaseModel,
+	| 'deflectionLimit'
+	| 'deflectionLimitTotal'
+	| 'deflectionGoverns'
+	| 'eta'
+	| 'gradeConfirmed'
+	| 'bearingLoads'
+	| 'place'
+>;
+
+/**
+ * Reads the optional check settings of the file and its beam; each is validated as data only.
+ * @example parseCheckSettings({ deflectionLimit: 200 }, {}, issues) // { deflectionLimit: 200 }
+ */
+export function parseCheckSettings(
+	file: Record<string, unknown>,
+	beam: Record<string, unknown>,
+	issues: InputIssue[]
+): CheckSettings {
+	const out: CheckSettings = {};
+	const ratio = (key: 'deflectionLimit' | 'deflectionLimitTotal') => {
+		if (file[key] === undefined) return;
+		const rule = { label: 'deflection limit (span divided by)', positive: true };
+		const v = readNumber(file[key], key, issues, rule);
+		if (v !== undefined) out[key] = v;
+	};
+	ratio('deflectionLimit');
+	ratio('deflectionLimitTotal');
+	if (file.eta !== undefined) {
+		const v = readNumber(file.eta, 'eta', issues, { label: 'η (EN 1993-1-5 5.1)', positive: true });
+		if (v !== undefined) out.eta = v;
+	}
+	if (beam.bearingLoads !== undefined) {
+		const rule = { label: 'bearing length under loads (mm)', min: 0 };
+		const v = readNumber(beam.bearingLoads, 'beam.bearingLoads', issues, rule);
+		if (v !== undefined) out.bearingLoads = v;
+	}
+	const flag = (value: unknown, path: string): boolean | undefined => {
+		if (value === undefined || typeof value === 'boolean') return value;
+		addError(issues, path, 'not-a-boolean', 'This must be true or false.');
+		return undefined;
+	};
+	const governs = flag(file.deflectionGoverns, 'deflectionGoverns');
+	if (governs !== undefined) out.deflectionGoverns = governs;
+	const confirmed = flag(beam.gradeConfirmed, 'beam.gradeConfirmed');
+	if (confirmed !== undefined) out.gradeConfirmed = confirmed;
+	if (typeof file.place === 'string') out.place = file.place;
+	else if (file.place !== undefined) {
+		addError(issues, 'place', 'not-a-string', 'The place must be text.');
+	}
+	return out;
 }
