@@ -24,9 +24,9 @@ function normaliseAt(options: CurveOptions, x: number) {
 }
 
 /** P_max at x, N (a 1 N load times λ); null where the load goes straight into a support. */
-function evaluatePmax(options: CurveOptions, fixedField: FixedLoadField, x: number): number | null {
+function evaluatePmax(options: CurveOptions, x: number): number | null {
 	const { problem, scale } = normaliseAt(options, x);
-	const P = solveLoadFactorOnly(problem, scale, fixedField);
+	const P = solveLoadFactorOnly(problem, scale);
 	return P === null ? null : assertFinite(P, 'Pmax');
 }
 
@@ -61,7 +61,7 @@ export function computeCapacityCurve(options: { beam: BeamLine; capacity: Capaci
 	const probe = normaliseProblem({ ...options, variableLoads: [{ kind: 'point', x: 0, value: 1, action: 'temporary' }] });
 	const fixedField = findFixedLoadField(probe.problem);
 	if (fixedField.slack < -1e-12) return { status: 'fails-under-fixed', message: reportFixedLoadFailure(fixedField.slack).message };
-	const evaluate = (x: number) => evaluatePmax(options, fixedField, x);
+	const evaluate = (x: number) => evaluatePmax(options, x);
 	const critical = findCriticalPositions(options);
 	const xs: number[] = [];
 	critical.forEach((x, i) => {
@@ -87,7 +87,7 @@ export function computeCapacityCurve(options: { beam: BeamLine; capacity: Capaci
 	};
 }
 
-/** Refines every sampled local minimum within 20 % of the lowest sample; returns the lowest. */
+/** Refines every sampled local minimum within 10 % of the lowest sample; returns the lowest. */
 function refineMinimum(xs: number[], values: (number | null)[], f: (x: number) => number, L: number): { x: number; P: number } | null {
 	const v = values.map((p) => p ?? Infinity);
 	const lowest = Math.min(...v);
@@ -96,7 +96,7 @@ function refineMinimum(xs: number[], values: (number | null)[], f: (x: number) =
 	for (let i = 0; i < xs.length; i++) {
 		const left = i > 0 ? v[i - 1] : Infinity;
 		const right = i + 1 < xs.length ? v[i + 1] : Infinity;
-		if (!(v[i] <= left && v[i] <= right) || v[i] > 1.2 * lowest) continue;
+		if (!(v[i] <= left && v[i] <= right) || v[i] > 1.1 * lowest) continue;
 		const a = xs[Math.max(0, i - 1)];
 		const b = xs[Math.min(xs.length - 1, i + 1)];
 		const m = minimiseOnInterval(f, a, b, 1e-10 * L);

@@ -5,7 +5,6 @@
  */
 import { assertFinite } from '../model/issue';
 import { certifyField } from './certified-field';
-import { computeLowerBound } from './certify';
 import { measureLoadSize, normaliseProblem, type ProblemScale } from './normalise';
 import { solveEquilibrium } from './nullspace';
 import { solveStaticProgram } from './lower-bound';
@@ -65,14 +64,13 @@ function solveLambdaProgram(p: CollapseProblem) {
 }
 
 /**
- * λ alone (no mechanism, diagram or certificate) of a normalised problem whose fixed-load field
- * is admissible: the static program's optimum, exact to rounding; null when unbounded.
+ * λ alone (no mechanism, diagram or certificate) of a normalised problem whose fixed loads are
+ * admissible: the converged static program's optimum, exact to rounding; null when unbounded.
  */
-export function solveLoadFactorOnly(p: CollapseProblem, scale: ProblemScale, fixedField: FixedLoadField): number | null {
-	const { model, grid, sol } = solveLambdaProgram(p);
+export function solveLoadFactorOnly(p: CollapseProblem, scale: ProblemScale): number | null {
+	const { model, sol } = solveLambdaProgram(p);
 	if (sol.status !== 'optimal') return null;
-	const lambda1 = Math.max(0, sol.z[model.lambdaIndex]);
-	return computeLowerBound({ model, grid, z1: sol.z, lambda1, z0: fixedField.z }) * scale.lambda;
+	return Math.max(0, sol.z[model.lambdaIndex]) * scale.lambda;
 }
 
 /** Solves a normalised problem whose fixed-load field is already known and admissible. */
