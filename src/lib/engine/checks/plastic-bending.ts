@@ -11,8 +11,8 @@ import type { LoadArrangement } from './load-arrangements';
 import type { LoadEffects } from './load-effects';
 import type { SpanMember } from './member';
 
-/** Rounds of "reduce, then solve again"; two or three settle in practice. */
-const MAX_ROUNDS = 4;
+/** Rounds of "reduce, then solve again"; a handful settle to round-off in practice. */
+const MAX_ROUNDS = 12;
 
 /** A hinge whose capacity was reduced for shear. */
 export interface HingeReduction {
@@ -55,39 +55,39 @@ export function solvePlasticArrangement(o: PlasticArrangementInput): PlasticArra
 	let capacity = o.capacity;
 	let reductions: HingeReduction[] = [];
 	let result = solve(o, capacity);
+	// The reduction depends on the shear at collapse, which depends on λ: iterate λ → shear →
+	// My,V,Rd → λ. Should the hinges keep moving, the smallest λ seen is kept (conservative).
+	let best = { result, capacity, reductions };
 	for (let round = 0; round < MAX_ROUNDS && result.status === 'mechanism'; round++) {
-		// Reductions only accumulate (conservative), so the rounds cannot cycle.
-		const merged = mergeReductions(reductions, findReductions(o, result));
-		if (merged.length === reductions.length && merged.every((r, i) => r.myVRd === reductions[i].myVRd)) {
-			break;
-		}
-		reductions = merged;
-		capacity = merged.reduce((cap, r) => {
+		const next = findReductions(o, result);
+		if (next.length === 0) break;
+		const nextCapacity = next.reduce((cap, r) => {
 			const half = o.members[spanOf(o.nodes, r.x)].h / 2;
 			return reduceCapacity(cap, { from: r.x - half, to: r.x + half, value: r.myVRd });
 		}, o.capacity);
-		result = solve(o, capacity);
+		const nextResult = solve(o, nextCapacity);
+		const before = factorOf(result);
+		const after = factorOf(nextResult);
+		const settled = after !== null && before !== null && Math.abs(after - before) <= 1e-9 * after;
+		[result, capacity, reductions] = [nextResult, nextCapacity, next];
+		const bestFactor = factorOf(best.result) ?? Infinity;
+		if (round === 0 || settled || (after ?? Infinity) < bestFactor) best = { result, capacity, reductions };
+		if (settled) break;
 	}
-	const loadFactor =
-		result.status === 'fails-under-fixed' ? 0 : result.status === 'unbounded' ? null : result.loadFactor;
+	({ result, capacity, reductions } = best);
 	return {
 		arrangement: o.arrangement,
 		result,
-		loadFactor,
+		loadFactor: factorOf(result),
 		certified: result.status === 'mechanism' ? result.certified : result.status !== 'not-certified',
 		capacity,
 		reductions
 	};
 }
 
-function mergeReductions(prev: HingeReduction[], next: HingeReduction[]): HingeReduction[] {
-	const out = prev.map((r) => ({ ...r }));
-	for (const r of next) {
-		const same = out.find((p) => Math.abs(p.x - r.x) < 1e-6);
-		if (!same) out.push(r);
-		else if (r.myVRd < same.myVRd) Object.assign(same, r);
-	}
-	return out.sort((a, b) => a.x - b.x);
+/** λ of a result: 0 when the fixed loads fail, null when unbounded. */
+function factorOf(r: CollapseResult): number | null {
+	return r.status === 'fails-under-fixed' ? 0 : r.status === 'unbounded' ? null : r.loadFactor;
 }
 
 function solve(o: PlasticArrangementInput, capacity: CapacitySegment[]): CollapseResult {
