@@ -64,8 +64,9 @@ export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFact
 		const message = `${key} below 1.0 is less safe than any code value.`;
 		addWarning(issues, `factors.${key}`, 'factor-below-one', message);
 	}
-	if (value.set !== undefined && typeof value.set !== 'string') {
-		addError(issues, 'factors.set', 'not-a-string', 'The factor set must be given by its name.');
+	// Names of the factor sets the design checks know (checks/en1993/factors.ts).
+	const sets = ['en1990-6.10', 'en1990-6.10ab', 'custom'] as const;
+	if (value.set !== undefined && !readChoice(value.set, 'factors.set', issues, sets, 'factor set')) {
 		ok = false;
 	}
 	if (!ok) return undefined;
