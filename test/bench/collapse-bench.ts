@@ -9,12 +9,20 @@ import { writeGridProgram } from '../unit/collapse/grid-program';
 import { medianMs } from './median';
 
 /** Simple span, 6 m, self-weight plus a trolley load at 1.2 m. */
-const singleSpan: ProblemSpec = { spans: [6], supports: ['pin', 'pin'], Mp: 150, fixed: [{ w: 0.6, from: 0, to: 6 }], variable: [{ P: 12.6, at: 1.2 }] };
+const singleSpan: ProblemSpec = {
+	spans: [6],
+	supports: ['pin', 'pin'],
+	Mp: 150,
+	fixed: [{ w: 0.6, from: 0, to: 6 }],
+	variable: [{ P: 12.6, at: 1.2 }]
+};
 
 function makeFiveSpan(): ProblemSpec {
 	const loads: LoadSpec[] = [];
 	for (let i = 0; i < 20; i++) {
-		loads.push(i % 2 ? { P: 10 + i, at: 0.3 + i * 1.47 } : { w: 3 + i / 4, from: i * 1.4, to: i * 1.4 + 2.5 });
+		loads.push(
+			i % 2 ? { P: 10 + i, at: 0.3 + i * 1.47 } : { w: 3 + i / 4, from: i * 1.4, to: i * 1.4 + 2.5 }
+		);
 	}
 	return {
 		spans: [6, 6, 6, 6, 6],
@@ -25,28 +33,45 @@ function makeFiveSpan(): ProblemSpec {
 	};
 }
 
-const threeSpan: ProblemSpec = { spans: [6, 7.5, 6], supports: ['pin', 'pin', 'pin', 'pin'], Mp: [120, 150, 120], fixed: [{ w: 4, from: 0, to: 19.5 }], variable: [] };
+const threeSpan: ProblemSpec = {
+	spans: [6, 7.5, 6],
+	supports: ['pin', 'pin', 'pin', 'pin'],
+	Mp: [120, 150, 120],
+	fixed: [{ w: 4, from: 0, to: 19.5 }],
+	variable: []
+};
 
-const format = (ms: number) => `${ms < 0.1 ? (ms * 1000).toFixed(1) + ' µs' : ms.toFixed(3) + ' ms'}`;
+const format = (ms: number) =>
+	`${ms < 0.1 ? (ms * 1000).toFixed(1) + ' µs' : ms.toFixed(3) + ' ms'}`;
 
 /** Prints medians for the collapse solver and the HiGHS comparison. */
 export async function runCollapseBench(): Promise<void> {
 	const one = makeProblem(singleSpan);
-	console.log(`single-span check:              ${format(medianMs(() => solveCollapse(one), 2000, 200))}`);
+	console.log(
+		`single-span check:              ${format(medianMs(() => solveCollapse(one), 2000, 200))}`
+	);
 	const fiveSpec = makeFiveSpan();
 	const five = makeProblem(fiveSpec);
 	const fiveMs = medianMs(() => solveCollapse(five), 200, 20);
 	console.log(`five spans, 20 loads:           ${format(fiveMs)}`);
 	const three = makeProblem(threeSpan);
 	const curve = { beam: three.beam, capacity: three.capacity, fixedLoads: three.fixedLoads };
-	console.log(`capacity curve, three spans:    ${format(medianMs(() => computeCapacityCurve(curve), 20, 3))}`);
+	console.log(
+		`capacity curve, three spans:    ${format(medianMs(() => computeCapacityCurve(curve), 20, 3))}`
+	);
 	const highs = await (await import('highs')).default();
 	const exact = solveCollapse(five);
 	for (const perBeam of [300, 1500]) {
 		let lambdaGrid = NaN;
-		const gridMs = medianMs(() => {
-			lambdaGrid = highs.solve(writeGridProgram(fiveSpec, perBeam), { output_flag: false }).ObjectiveValue;
-		}, 7, 1);
+		const gridMs = medianMs(
+			() => {
+				lambdaGrid = highs.solve(writeGridProgram(fiveSpec, perBeam), {
+					output_flag: false
+				}).ObjectiveValue;
+			},
+			7,
+			1
+		);
 		const lambda = exact.status === 'mechanism' ? exact.loadFactor : NaN;
 		console.log(
 			`HiGHS, five spans, grid ${perBeam} per beam: ${format(gridMs)}  (ratio to exact solver ${(gridMs / fiveMs).toFixed(0)}×; ` +

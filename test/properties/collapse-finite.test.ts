@@ -14,7 +14,8 @@ import { makeProblem, relativeError } from '../unit/collapse/builders';
 function collectNumbers(value: unknown, out: number[] = []): number[] {
 	if (typeof value === 'number') out.push(value);
 	else if (Array.isArray(value)) value.forEach((v) => collectNumbers(v, out));
-	else if (value && typeof value === 'object') Object.values(value).forEach((v) => collectNumbers(v, out));
+	else if (value && typeof value === 'object')
+		Object.values(value).forEach((v) => collectNumbers(v, out));
 	return out;
 }
 
@@ -23,7 +24,9 @@ describe('finite results', () => {
 		fc.assert(
 			fc.property(arbitraryBeamSpec({ interiorFixed: true }), (spec) => {
 				const r = solveCollapse(makeProblem(spec));
-				expect(['mechanism', 'not-certified', 'fails-under-fixed', 'unbounded']).toContain(r.status);
+				expect(['mechanism', 'not-certified', 'fails-under-fixed', 'unbounded']).toContain(
+					r.status
+				);
 				expect(collectNumbers(r).every(Number.isFinite)).toBe(true);
 				if (r.status === 'mechanism') expect(r.loadFactor).toBeGreaterThanOrEqual(0);
 			}),
@@ -37,14 +40,23 @@ describe('capacity curve', () => {
 		fc.assert(
 			fc.property(arbitraryBeamSpec({ interiorFixed: true, upward: false }), (spec) => {
 				const problem = makeProblem(spec);
-				const curve = computeCapacityCurve({ beam: problem.beam, capacity: problem.capacity, fixedLoads: problem.fixedLoads });
+				const curve = computeCapacityCurve({
+					beam: problem.beam,
+					capacity: problem.capacity,
+					fixedLoads: problem.fixedLoads
+				});
 				expect(collectNumbers(curve).every(Number.isFinite)).toBe(true);
 				if (curve.status !== 'ok') return;
 				const { x, Pmax } = curve.minimum;
-				const check = solveCollapse({ ...problem, variableLoads: [{ kind: 'point', x, value: 1, action: 'temporary' }] });
+				const check = solveCollapse({
+					...problem,
+					variableLoads: [{ kind: 'point', x, value: 1, action: 'temporary' }]
+				});
 				expect(check.status).toBe('mechanism');
-				if (check.status === 'mechanism') expect(relativeError(check.loadFactor, Pmax)).toBeLessThan(1e-9);
-				for (const p of curve.points) if (p.Pmax !== null) expect(p.Pmax).toBeGreaterThanOrEqual(Pmax * (1 - 1e-9));
+				if (check.status === 'mechanism')
+					expect(relativeError(check.loadFactor, Pmax)).toBeLessThan(1e-9);
+				for (const p of curve.points)
+					if (p.Pmax !== null) expect(p.Pmax).toBeGreaterThanOrEqual(Pmax * (1 - 1e-9));
 			}),
 			{ numRuns: 12, seed: 99 }
 		);

@@ -10,7 +10,12 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { solveCollapse, type CollapseResult } from '../../src/lib/engine/collapse';
 import { arbitraryBeamSpec } from '../unit/collapse/arbitraries';
-import { makeProblem, relativeError, type LoadSpec, type ProblemSpec } from '../unit/collapse/builders';
+import {
+	makeProblem,
+	relativeError,
+	type LoadSpec,
+	type ProblemSpec
+} from '../unit/collapse/builders';
 
 const RUNS = { numRuns: 60, seed: 4242 };
 
@@ -64,18 +69,23 @@ describe('static and kinematic theorems', () => {
 describe('invariance', () => {
 	it('scaling every Mp and every fixed load by k scales λ by k', () => {
 		fc.assert(
-			fc.property(arbitraryBeamSpec({ interiorFixed: true }), fc.constantFrom(0.5, 2, 3.7), (spec, k) => {
-				const a = solveCollapse(makeProblem(spec));
-				const scaled: ProblemSpec = {
-					...spec,
-					Mp: (spec.Mp as Segment[]).map((s) => ({ ...s, sag: s.sag * k, hog: s.hog * k })),
-					fixed: (spec.fixed ?? []).map((l) => scaleLoad(l, k))
-				};
-				const b = solveCollapse(makeProblem(scaled));
-				expect(b.status).toBe(a.status);
-				const [la, lb] = [lambdaOf(a), lambdaOf(b)];
-				if (typeof la === 'number' && typeof lb === 'number') expect(relativeError(lb, k * la)).toBeLessThan(1e-8);
-			}),
+			fc.property(
+				arbitraryBeamSpec({ interiorFixed: true }),
+				fc.constantFrom(0.5, 2, 3.7),
+				(spec, k) => {
+					const a = solveCollapse(makeProblem(spec));
+					const scaled: ProblemSpec = {
+						...spec,
+						Mp: (spec.Mp as Segment[]).map((s) => ({ ...s, sag: s.sag * k, hog: s.hog * k })),
+						fixed: (spec.fixed ?? []).map((l) => scaleLoad(l, k))
+					};
+					const b = solveCollapse(makeProblem(scaled));
+					expect(b.status).toBe(a.status);
+					const [la, lb] = [lambdaOf(a), lambdaOf(b)];
+					if (typeof la === 'number' && typeof lb === 'number')
+						expect(relativeError(lb, k * la)).toBeLessThan(1e-8);
+				}
+			),
 			RUNS
 		);
 	});
@@ -86,7 +96,8 @@ describe('invariance', () => {
 				const b = solveCollapse(makeProblem(mirror(spec)));
 				expect(b.status).toBe(a.status);
 				const [la, lb] = [lambdaOf(a), lambdaOf(b)];
-				if (typeof la === 'number' && typeof lb === 'number') expect(relativeError(lb, la)).toBeLessThan(1e-8);
+				if (typeof la === 'number' && typeof lb === 'number')
+					expect(relativeError(lb, la)).toBeLessThan(1e-8);
 			}),
 			RUNS
 		);
@@ -97,16 +108,21 @@ describe('monotonic in load (same-sense loads, no overhangs: beam mechanisms onl
 	it('adding a downward fixed load never raises λ', () => {
 		const beams = arbitraryBeamSpec({ upward: false }).filter((s) => !s.supports.includes('free'));
 		fc.assert(
-			fc.property(beams, fc.integer({ min: 0, max: 1000 }), fc.integer({ min: 1, max: 40 }), (spec, at, P) => {
-				const L = spec.spans.reduce((a, b) => a + b, 0);
-				const a = solveCollapse(makeProblem(spec));
-				const more = { ...spec, fixed: [...(spec.fixed ?? []), { P, at: (L * at) / 1000 }] };
-				const b = solveCollapse(makeProblem(more));
-				const [la, lb] = [lambdaOf(a), lambdaOf(b)];
-				if (typeof la !== 'number') expect(b.status).not.toBe('mechanism');
-				else if (typeof lb === 'number') expect(lb).toBeLessThanOrEqual(la * (1 + 1e-9));
-				else expect(['fails-under-fixed', 'unbounded']).toContain(lb);
-			}),
+			fc.property(
+				beams,
+				fc.integer({ min: 0, max: 1000 }),
+				fc.integer({ min: 1, max: 40 }),
+				(spec, at, P) => {
+					const L = spec.spans.reduce((a, b) => a + b, 0);
+					const a = solveCollapse(makeProblem(spec));
+					const more = { ...spec, fixed: [...(spec.fixed ?? []), { P, at: (L * at) / 1000 }] };
+					const b = solveCollapse(makeProblem(more));
+					const [la, lb] = [lambdaOf(a), lambdaOf(b)];
+					if (typeof la !== 'number') expect(b.status).not.toBe('mechanism');
+					else if (typeof lb === 'number') expect(lb).toBeLessThanOrEqual(la * (1 + 1e-9));
+					else expect(['fails-under-fixed', 'unbounded']).toContain(lb);
+				}
+			),
 			RUNS
 		);
 	});

@@ -24,7 +24,10 @@ import { writeGridProgram } from '../unit/collapse/grid-program';
 describe('collapse solver against HiGHS on a conservative grid (200 random beams, seeded)', () => {
 	it('λ_grid ≤ λ_exact and within 1e-3 of it; fixed-load failures are infeasible on the grid', async () => {
 		const highs = await (await import('highs')).default();
-		const specs = fc.sample(arbitraryBeamSpec({ interiorFixed: false }), { seed: 20261201, numRuns: 600 });
+		const specs = fc.sample(arbitraryBeamSpec({ interiorFixed: false }), {
+			seed: 20261201,
+			numRuns: 600
+		});
 		let compared = 0;
 		let failures = 0;
 		let worst = 0;

@@ -4,7 +4,12 @@
  */
 import { kNmToNmm, kNToN, mToMm } from '../../../src/lib/engine/units';
 import type { CollapseProblem } from '../../../src/lib/engine/collapse';
-import type { CapacitySegment, JointKind, Load, SupportKind } from '../../../src/lib/engine/model/types';
+import type {
+	CapacitySegment,
+	JointKind,
+	Load,
+	SupportKind
+} from '../../../src/lib/engine/model/types';
 
 /** A load in textbook units: point P (kN) at x (m), uniform w (kN/m), linear w1→w2 (kN/m). */
 export type LoadSpec =
@@ -15,8 +20,16 @@ export type LoadSpec =
 /** Converts a textbook load to an engine load. */
 export function toLoad(spec: LoadSpec, action: Load['action'] = 'temporary'): Load {
 	if ('P' in spec) return { kind: 'point', x: mToMm(spec.at), value: kNToN(spec.P), action };
-	if ('w' in spec) return { kind: 'uniform', from: mToMm(spec.from), to: mToMm(spec.to), value: spec.w, action };
-	return { kind: 'linear', from: mToMm(spec.from), to: mToMm(spec.to), start: spec.w1, end: spec.w2, action };
+	if ('w' in spec)
+		return { kind: 'uniform', from: mToMm(spec.from), to: mToMm(spec.to), value: spec.w, action };
+	return {
+		kind: 'linear',
+		from: mToMm(spec.from),
+		to: mToMm(spec.to),
+		start: spec.w1,
+		end: spec.w2,
+		action
+	};
 }
 
 /** Options of `makeProblem`, in m, kN and kN·m. */
@@ -40,7 +53,12 @@ export function makeProblem(spec: ProblemSpec): CollapseProblem {
 	} else if (typeof spec.Mp[0] === 'number') {
 		let x = 0;
 		capacity = (spec.Mp as number[]).map((m, i) => {
-			const seg = { from: mToMm(x), to: mToMm(x + spec.spans[i]), sagging: kNmToNmm(m), hogging: kNmToNmm(m) };
+			const seg = {
+				from: mToMm(x),
+				to: mToMm(x + spec.spans[i]),
+				sagging: kNmToNmm(m),
+				hogging: kNmToNmm(m)
+			};
 			x += spec.spans[i];
 			return seg;
 		});

@@ -22,15 +22,26 @@ describe('computeCapacityCurve', () => {
 		for (const p of c.points) {
 			const a = p.x / 1000;
 			if (a === 0 || a === 6) expect(p.Pmax).toBeNull();
-			else expect(relativeError(p.Pmax as number, ((100 * 6) / (a * (6 - a))) * 1000)).toBeLessThan(1e-9);
+			else
+				expect(relativeError(p.Pmax as number, ((100 * 6) / (a * (6 - a))) * 1000)).toBeLessThan(
+					1e-9
+				);
 		}
 		expect(relativeError(c.minimum.Pmax, ((4 * 100) / 6) * 1000)).toBeLessThan(1e-12);
 		expect(Math.abs(c.minimum.x - 3000)).toBeLessThan(1e-3);
 		expect(c.certified).toBe(true);
 	});
 	it('simple span with a fixed UDL: minimum 4Mp/L − gL/2 at midspan', () => {
-		const c = curveOf({ spans: [6], supports: ['pin', 'pin'], Mp: 100, fixed: [{ w: 20, from: 0, to: 6 }], variable: [] });
-		expect(c.status === 'ok' && relativeError(c.minimum.Pmax, (400 / 6 - 60) * 1000)).toBeLessThan(1e-9);
+		const c = curveOf({
+			spans: [6],
+			supports: ['pin', 'pin'],
+			Mp: 100,
+			fixed: [{ w: 20, from: 0, to: 6 }],
+			variable: []
+		});
+		expect(c.status === 'ok' && relativeError(c.minimum.Pmax, (400 / 6 - 60) * 1000)).toBeLessThan(
+			1e-9
+		);
 	});
 	it('cantilever: weakest at the tip, Mp/L; overhang: Mp/c at its tip', () => {
 		const c = curveOf({ spans: [4], supports: ['fixed', 'free'], Mp: 80, variable: [] });
@@ -41,7 +52,13 @@ describe('computeCapacityCurve', () => {
 		expect(o.status === 'ok' && relativeError(o.minimum.Pmax, 50_000)).toBeLessThan(1e-12);
 	});
 	it('fixed loads that already exceed the capacity are reported, not drawn', () => {
-		const c = curveOf({ spans: [6], supports: ['pin', 'pin'], Mp: 100, fixed: [{ w: 30, from: 0, to: 6 }], variable: [] });
+		const c = curveOf({
+			spans: [6],
+			supports: ['pin', 'pin'],
+			Mp: 100,
+			fixed: [{ w: 30, from: 0, to: 6 }],
+			variable: []
+		});
 		expect(c.status).toBe('fails-under-fixed');
 	});
 });

@@ -11,7 +11,15 @@ import { makeProblem } from './builders';
 
 describe('momentAt / shearAt', () => {
 	it('match the statics of a collapsed simple span anywhere, including inside loaded intervals', () => {
-		const r = solveCollapse(makeProblem({ spans: [6], supports: ['pin', 'pin'], Mp: 100, fixed: [{ w: 20, from: 0, to: 6 }], variable: [{ P: 1, at: 1 }] }));
+		const r = solveCollapse(
+			makeProblem({
+				spans: [6],
+				supports: ['pin', 'pin'],
+				Mp: 100,
+				fixed: [{ w: 20, from: 0, to: 6 }],
+				variable: [{ P: 1, at: 1 }]
+			})
+		);
 		expect(r.status).toBe('mechanism');
 		if (r.status !== 'mechanism') return;
 		const Q = (120 * Math.sqrt(10) - 360) * 1000; // N

@@ -46,7 +46,8 @@ function intensities(loads: LoadSpec[], a: number, b: number): [number, number] 
 	const mid = (a + b) / 2;
 	for (const l of loads) {
 		if ('P' in l || !(l.from < mid && l.to > mid)) continue;
-		const at = (x: number) => ('w' in l ? l.w : l.w1 + ((l.w2 - l.w1) * (x - l.from)) / (l.to - l.from));
+		const at = (x: number) =>
+			'w' in l ? l.w : l.w1 + ((l.w2 - l.w1) * (x - l.from)) / (l.to - l.from);
 		wl += at(a);
 		wr += at(b);
 	}
@@ -77,7 +78,8 @@ function capacityAt(spec: ProblemSpec, x: number): { sag: number; hog: number } 
 }
 
 const num = (v: number) => (Number.isFinite(v) ? v.toPrecision(17) : '0');
-const term = (c: number, name: string) => (c === 0 ? '' : ` ${c < 0 ? '-' : '+'} ${num(Math.abs(c))} ${name}`);
+const term = (c: number, name: string) =>
+	c === 0 ? '' : ` ${c < 0 ? '-' : '+'} ${num(Math.abs(c))} ${name}`;
 
 /** The discretised static theorem as CPLEX LP text (maximise λ); perBeam grid intervals over the length. */
 export function writeGridProgram(spec: ProblemSpec, perBeam = GRID): string {
@@ -95,12 +97,17 @@ export function writeGridProgram(spec: ProblemSpec, perBeam = GRID): string {
 	const W = (loads: LoadSpec[], i: number) => {
 		const [wl, wr] = intensities(loads, x[i], x[i + 1]);
 		const h = x[i + 1] - x[i];
-		return { W: (h * (wl + wr)) / 2, F: (h * h * (2 * wl + wr)) / 6, B: (Math.max(Math.abs(wl), Math.abs(wr)) * h * h) / 8 };
+		return {
+			W: (h * (wl + wr)) / 2,
+			F: (h * h * (2 * wl + wr)) / 6,
+			B: (Math.max(Math.abs(wl), Math.abs(wr)) * h * h) / 8
+		};
 	};
 	for (let i = 0; i <= N; i++) {
 		const Pv = pointAt(spec.variable, i);
 		const Pf = pointAt(fixed, i);
-		const prev = i > 0 ? { v: W(spec.variable, i - 1), f: W(fixed, i - 1) } : { v: { W: 0 }, f: { W: 0 } };
+		const prev =
+			i > 0 ? { v: W(spec.variable, i - 1), f: W(fixed, i - 1) } : { v: { W: 0 }, f: { W: 0 } };
 		const lamCoef = prev.v.W + Pv;
 		const rhs = -(prev.f.W + Pf);
 		const left = i > 0 ? term(-1, `v${i - 1}`) : '';
@@ -111,7 +118,9 @@ export function writeGridProgram(spec: ProblemSpec, perBeam = GRID): string {
 		const h = x[i + 1] - x[i];
 		const v = W(spec.variable, i);
 		const f = W(fixed, i);
-		rows.push(`moment${i}:${term(1, `m${i + 1}`)}${term(-1, `m${i}`)}${term(-h, `v${i}`)}${term(v.F, 'lam')} = ${num(-f.F)}`);
+		rows.push(
+			`moment${i}:${term(1, `m${i + 1}`)}${term(-1, `m${i}`)}${term(-h, `v${i}`)}${term(v.F, 'lam')} = ${num(-f.F)}`
+		);
 		const mid = capacityAt(spec, (x[i] + x[i + 1]) / 2);
 		for (const e of [i, i + 1]) {
 			rows.push(`sag${i}_${e}:${term(1, `m${e}`)}${term(v.B, 'lam')} <= ${num(mid.sag - f.B)}`);
@@ -123,7 +132,19 @@ export function writeGridProgram(spec: ProblemSpec, perBeam = GRID): string {
 	(spec.joints ?? []).forEach((j, k) => {
 		if (j === 'simple') rows.push(`joint${k}: m${nodeAt[k + 1]} = 0`);
 	});
-	const free = [...x.map((_, i) => `m${i}`), ...x.slice(0, N).map((_, i) => `v${i}`), ...reaction.values()];
-	return ['Maximize', ' obj: lam', 'Subject To', ...rows.map((s) => ` ${s}`), 'Bounds', ...free.map((n) => ` ${n} free`), ' lam >= 0', 'End'].join('\n');
+	const free = [
+		...x.map((_, i) => `m${i}`),
+		...x.slice(0, N).map((_, i) => `v${i}`),
+		...reaction.values()
+	];
+	return [
+		'Maximize',
+		' obj: lam',
+		'Subject To',
+		...rows.map((s) => ` ${s}`),
+		'Bounds',
+		...free.map((n) => ` ${n} free`),
+		' lam >= 0',
+		'End'
+	].join('\n');
 }
-

@@ -4,7 +4,11 @@
  * "Mechanics of Materials" — common practice).
  */
 import { describe, expect, it } from 'vitest';
-import { computeLoadMoment, computeLoadResultant, computeLoadShear } from '../../../src/lib/engine/collapse/load-effects';
+import {
+	computeLoadMoment,
+	computeLoadResultant,
+	computeLoadShear
+} from '../../../src/lib/engine/collapse/load-effects';
 import type { Load } from '../../../src/lib/engine/model/types';
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);

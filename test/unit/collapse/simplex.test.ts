@@ -5,7 +5,12 @@
  * shadow prices 0, 3/2, 1 — from memory, and verified below by substitution and duality).
  */
 import { describe, expect, it } from 'vitest';
-import { addRow, createProgram, solveLinearProgram, solveProgram } from '../../../src/lib/engine/collapse/simplex';
+import {
+	addRow,
+	createProgram,
+	solveLinearProgram,
+	solveProgram
+} from '../../../src/lib/engine/collapse/simplex';
 
 const G = [
 	[1, 0],

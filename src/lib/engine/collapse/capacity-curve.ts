@@ -8,7 +8,14 @@ import type { BeamLine, CapacitySegment, Load } from '../model/types';
 import { assertFinite } from '../model/issue';
 import { minimiseOnInterval } from './minimise';
 import { normaliseProblem } from './normalise';
-import { assertValidProblem, findFixedLoadField, reportFixedLoadFailure, solveLoadFactorOnly, solveNormalised, type FixedLoadField } from './solve';
+import {
+	assertValidProblem,
+	findFixedLoadField,
+	reportFixedLoadFailure,
+	solveLoadFactorOnly,
+	solveNormalised,
+	type FixedLoadField
+} from './solve';
 import { computeNodePositions } from './statics';
 import type { CapacityCurve, CapacityPoint, CollapseProblem } from './types';
 
@@ -19,7 +26,10 @@ const MIN_PER_INTERVAL = 3;
 type CurveOptions = { beam: BeamLine; capacity: CapacitySegment[]; fixedLoads: Load[] };
 
 function normaliseAt(options: CurveOptions, x: number) {
-	const problem: CollapseProblem = { ...options, variableLoads: [{ kind: 'point', x, value: 1, action: 'temporary' }] };
+	const problem: CollapseProblem = {
+		...options,
+		variableLoads: [{ kind: 'point', x, value: 1, action: 'temporary' }]
+	};
 	return normaliseProblem(problem);
 }
 
@@ -37,7 +47,11 @@ function solveAt(options: CurveOptions, fixedField: FixedLoadField, x: number) {
 }
 
 /** Positions where P_max may have a kink: nodes, fixed-load points and ends, section changes. */
-function findCriticalPositions(options: { beam: BeamLine; capacity: CapacitySegment[]; fixedLoads: Load[] }): number[] {
+function findCriticalPositions(options: {
+	beam: BeamLine;
+	capacity: CapacitySegment[];
+	fixedLoads: Load[];
+}): number[] {
 	const xs = computeNodePositions(options.beam);
 	const L = xs[xs.length - 1];
 	for (const l of options.fixedLoads) {
@@ -55,12 +69,23 @@ function findCriticalPositions(options: { beam: BeamLine; capacity: CapacitySegm
  *   capacity: [{ from: 0, to: 6000, sagging: 100e6, hogging: 100e6 }], fixedLoads: [] }).minimum
  * // → { x: 3000, Pmax: 66 667 N (4Mp/L) , … }
  */
-export function computeCapacityCurve(options: { beam: BeamLine; capacity: CapacitySegment[]; fixedLoads: Load[] }): CapacityCurve {
+export function computeCapacityCurve(options: {
+	beam: BeamLine;
+	capacity: CapacitySegment[];
+	fixedLoads: Load[];
+}): CapacityCurve {
 	assertValidProblem({ ...options, variableLoads: [] });
 	const L = computeNodePositions(options.beam).at(-1) as number;
-	const probe = normaliseProblem({ ...options, variableLoads: [{ kind: 'point', x: 0, value: 1, action: 'temporary' }] });
+	const probe = normaliseProblem({
+		...options,
+		variableLoads: [{ kind: 'point', x: 0, value: 1, action: 'temporary' }]
+	});
 	const fixedField = findFixedLoadField(probe.problem);
-	if (fixedField.slack < -1e-12) return { status: 'fails-under-fixed', message: reportFixedLoadFailure(fixedField.slack).message };
+	if (fixedField.slack < -1e-12)
+		return {
+			status: 'fails-under-fixed',
+			message: reportFixedLoadFailure(fixedField.slack).message
+		};
 	const evaluate = (x: number) => evaluatePmax(options, x);
 	const critical = findCriticalPositions(options);
 	const xs: number[] = [];
@@ -73,22 +98,36 @@ export function computeCapacityCurve(options: { beam: BeamLine; capacity: Capaci
 	});
 	const values = xs.map(evaluate);
 	const best = refineMinimum(xs, values, (x) => evaluate(x) ?? Infinity, L);
-	if (!best) return { status: 'unbounded', message: 'A point load anywhere on this beam goes straight into a support.' };
+	if (!best)
+		return {
+			status: 'unbounded',
+			message: 'A point load anywhere on this beam goes straight into a support.'
+		};
 	const final = solveAt(options, fixedField, best.x);
-	if (final.status !== 'mechanism' && final.status !== 'not-certified') throw new Error('invariant: minimum of the capacity curve is not a mechanism');
+	if (final.status !== 'mechanism' && final.status !== 'not-certified')
+		throw new Error('invariant: minimum of the capacity curve is not a mechanism');
 	const points: CapacityPoint[] = xs.map((x, i) => ({ x, Pmax: values[i] }));
 	if (!xs.includes(best.x)) points.push({ x: best.x, Pmax: final.loadFactor });
 	points.sort((a, b) => a.x - b.x);
 	return {
 		status: 'ok',
 		points,
-		minimum: { x: assertFinite(best.x, 'x of minimum'), Pmax: final.loadFactor, mechanism: final.mechanism.name },
+		minimum: {
+			x: assertFinite(best.x, 'x of minimum'),
+			Pmax: final.loadFactor,
+			mechanism: final.mechanism.name
+		},
 		certified: final.certified
 	};
 }
 
 /** Refines every sampled local minimum within 10 % of the lowest sample; returns the lowest. */
-function refineMinimum(xs: number[], values: (number | null)[], f: (x: number) => number, L: number): { x: number; P: number } | null {
+function refineMinimum(
+	xs: number[],
+	values: (number | null)[],
+	f: (x: number) => number,
+	L: number
+): { x: number; P: number } | null {
 	const v = values.map((p) => p ?? Infinity);
 	const lowest = Math.min(...v);
 	if (!Number.isFinite(lowest)) return null;

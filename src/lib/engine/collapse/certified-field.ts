@@ -33,14 +33,19 @@ export function certifyField(options: {
 	const merged = consolidateHinges({ model, z: sol.z, ...grid, raw });
 	const kinks = makeCompatible(model.beam, merged).filter((h) => h.rotation !== 0);
 	const { upperBound, displacement } = computeUpperBound({ model, hinges: kinks });
-	const gap = Number.isFinite(upperBound) ? Math.abs(upperBound - lower) / Math.max(Math.abs(upperBound), 1e-300) : 1;
+	const gap = Number.isFinite(upperBound)
+		? Math.abs(upperBound - lower) / Math.max(Math.abs(upperBound), 1e-300)
+		: 1;
 	const equilibriumResidual = computeEquilibriumResidual(model, sol.z);
 	const spans = findMovingSpans(model.beam, displacement);
 	const mechanism = nameMechanism(model.beam, kinks, spans);
 	const largest = Math.max(...kinks.map((h) => Math.abs(h.rotation)));
 	const hinges: Hinge[] = kinks.map((h) => ({
 		x: assertFinite(h.x * scale.length, 'hinge x'),
-		moment: assertFinite(evaluateMoment(model, sol.z, h.x, h.side as 1 | -1) * scale.moment, 'hinge moment'),
+		moment: assertFinite(
+			evaluateMoment(model, sol.z, h.x, h.side as 1 | -1) * scale.moment,
+			'hinge moment'
+		),
 		rotation: assertFinite(h.rotation / largest, 'hinge rotation')
 	}));
 	const reactions = model.beam.supports.map(() => 0);
@@ -63,9 +68,11 @@ export function certifyField(options: {
 		equilibriumResidual: assertFinite(equilibriumResidual, 'equilibrium residual')
 	};
 	const problems: string[] = [];
-	if (!(gap <= CERTIFY_GAP)) problems.push(`the bounds differ by ${gap.toExponential(2)} (relative)`);
+	if (!(gap <= CERTIFY_GAP))
+		problems.push(`the bounds differ by ${gap.toExponential(2)} (relative)`);
 	if (equilibriumResidual > RESIDUAL_LIMIT) problems.push('the moment field is not in equilibrium');
-	if (displacement.compatibilityError > RESIDUAL_LIMIT) problems.push('the mechanism does not fit the supports');
+	if (displacement.compatibilityError > RESIDUAL_LIMIT)
+		problems.push('the mechanism does not fit the supports');
 	if (problems.length === 0) return { status: 'mechanism', certified: true, ...solution };
 	return {
 		status: 'not-certified',

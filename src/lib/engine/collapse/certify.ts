@@ -10,10 +10,16 @@ import type { HingeCandidate } from './hinge-set';
 import { buildDisplacement, computeExternalWork, type Displacement } from './virtual-work';
 
 /** Largest |M|/Mp of field z over the stations and the exact interior extremes. */
-export function measureMomentRatio(model: FieldModel, z: number[], stations: Station[], intervals: Interval[]): number {
+export function measureMomentRatio(
+	model: FieldModel,
+	z: number[],
+	stations: Station[],
+	intervals: Interval[]
+): number {
 	let worst = 0;
 	const ratio = (M: number, sag: number, hog: number) => (M >= 0 ? M / sag : -M / hog);
-	for (const s of stations) worst = Math.max(worst, ratio(evaluateMoment(model, z, s.x, s.side), s.sag, s.hog));
+	for (const s of stations)
+		worst = Math.max(worst, ratio(evaluateMoment(model, z, s.x, s.side), s.sag, s.hog));
 	for (const iv of intervals) {
 		for (const x of findStationaryPoints(model, z, iv)) {
 			worst = Math.max(worst, ratio(evaluateMoment(model, z, x, -1), iv.sag, iv.hog));
@@ -23,7 +29,11 @@ export function measureMomentRatio(model: FieldModel, z: number[], stations: Sta
 }
 
 /** Largest M/Ms and −M/Mh of a field on each interval (ends and exact interior peaks). */
-export function measureIntervalRatios(model: FieldModel, z: number[], intervals: Interval[]): { sag: number; hog: number }[] {
+export function measureIntervalRatios(
+	model: FieldModel,
+	z: number[],
+	intervals: Interval[]
+): { sag: number; hog: number }[] {
 	return intervals.map((iv) => {
 		const xs: [number, 1 | -1][] = [
 			[iv.from, 1],
@@ -68,7 +78,11 @@ export function combineLowerBound(options: {
 }
 
 /** Station ratios as zero-length intervals, for `combineLowerBound`. */
-export function measureStationRatios(model: FieldModel, z: number[], stations: Station[]): { sag: number; hog: number }[] {
+export function measureStationRatios(
+	model: FieldModel,
+	z: number[],
+	stations: Station[]
+): { sag: number; hog: number }[] {
 	return stations.map((s) => {
 		const M = evaluateMoment(model, z, s.x, s.side);
 		return { sag: M / s.sag, hog: -M / s.hog };
@@ -76,16 +90,20 @@ export function measureStationRatios(model: FieldModel, z: number[], stations: S
 }
 
 /** Kinematic-theorem bound: λ = (Σ Mp·|θ| − W_fixed) / W_variable, from the hinges alone. */
-export function computeUpperBound(options: {
-	model: FieldModel;
-	hinges: HingeCandidate[];
-}): { upperBound: number; displacement: Displacement } {
+export function computeUpperBound(options: { model: FieldModel; hinges: HingeCandidate[] }): {
+	upperBound: number;
+	displacement: Displacement;
+} {
 	const { model, hinges } = options;
 	const displacement = buildDisplacement(model.beam, hinges);
-	const internal = hinges.reduce((s, h) => s + (h.rotation > 0 ? h.sag : h.hog) * Math.abs(h.rotation), 0);
+	const internal = hinges.reduce(
+		(s, h) => s + (h.rotation > 0 ? h.sag : h.hog) * Math.abs(h.rotation),
+		0
+	);
 	const fixedWork = computeExternalWork(displacement, model.fixedLoads);
 	const variableWork = computeExternalWork(displacement, model.variableLoads);
-	const upperBound = variableWork > 0 ? (internal - fixedWork) / variableWork : Number.POSITIVE_INFINITY;
+	const upperBound =
+		variableWork > 0 ? (internal - fixedWork) / variableWork : Number.POSITIVE_INFINITY;
 	return { upperBound, displacement };
 }
 
@@ -129,7 +147,13 @@ export function computeLowerBound(options: {
 	z0: number[];
 }): number {
 	const { model, grid, z1, lambda1, z0 } = options;
-	const field1 = [...measureIntervalRatios(model, z1, grid.intervals), ...measureStationRatios(model, z1, grid.stations)];
-	const field0 = [...measureIntervalRatios(model, z0, grid.intervals), ...measureStationRatios(model, z0, grid.stations)];
+	const field1 = [
+		...measureIntervalRatios(model, z1, grid.intervals),
+		...measureStationRatios(model, z1, grid.stations)
+	];
+	const field0 = [
+		...measureIntervalRatios(model, z0, grid.intervals),
+		...measureStationRatios(model, z0, grid.stations)
+	];
 	return combineLowerBound({ lambda1, field1, field0 });
 }

@@ -32,7 +32,10 @@ export function sampleDiagram(options: {
 		if (x < L) push(x, 1);
 		const iv = intervals[i];
 		if (!iv || !iv.loaded) return;
-		const inner = Array.from({ length: DRAW_POINTS }, (_, k) => iv.from + ((k + 1) * (iv.to - iv.from)) / (DRAW_POINTS + 1));
+		const inner = Array.from(
+			{ length: DRAW_POINTS },
+			(_, k) => iv.from + ((k + 1) * (iv.to - iv.from)) / (DRAW_POINTS + 1)
+		);
 		inner.push(...findStationaryPoints(model, z, iv));
 		inner.sort((a, b) => a - b).forEach((x) => push(x, -1));
 	});
@@ -40,8 +43,15 @@ export function sampleDiagram(options: {
 }
 
 /** Scales a normalised diagram back to mm, N·mm and N. */
-export function scaleDiagram(d: CollapseDiagram, s: { length: number; moment: number; force: number }): CollapseDiagram {
-	return { x: d.x.map((v) => v * s.length), M: d.M.map((v) => v * s.moment), V: d.V.map((v) => v * s.force) };
+export function scaleDiagram(
+	d: CollapseDiagram,
+	s: { length: number; moment: number; force: number }
+): CollapseDiagram {
+	return {
+		x: d.x.map((v) => v * s.length),
+		M: d.M.map((v) => v * s.moment),
+		V: d.V.map((v) => v * s.force)
+	};
 }
 
 function locate(d: CollapseDiagram, x: number, side: 'left' | 'right'): number {
@@ -66,8 +76,15 @@ function hermite(d: CollapseDiagram, i: number, x: number): { M: number; V: numb
 	const t = (x - x0) / h;
 	const [m0, m1, v0, v1] = [d.M[i], d.M[i + 1], d.V[i] * h, d.V[i + 1] * h];
 	const M =
-		(2 * t ** 3 - 3 * t ** 2 + 1) * m0 + (t ** 3 - 2 * t ** 2 + t) * v0 + (-2 * t ** 3 + 3 * t ** 2) * m1 + (t ** 3 - t ** 2) * v1;
-	const dM = (6 * t ** 2 - 6 * t) * m0 + (3 * t ** 2 - 4 * t + 1) * v0 + (-6 * t ** 2 + 6 * t) * m1 + (3 * t ** 2 - 2 * t) * v1;
+		(2 * t ** 3 - 3 * t ** 2 + 1) * m0 +
+		(t ** 3 - 2 * t ** 2 + t) * v0 +
+		(-2 * t ** 3 + 3 * t ** 2) * m1 +
+		(t ** 3 - t ** 2) * v1;
+	const dM =
+		(6 * t ** 2 - 6 * t) * m0 +
+		(3 * t ** 2 - 4 * t + 1) * v0 +
+		(-6 * t ** 2 + 6 * t) * m1 +
+		(3 * t ** 2 - 2 * t) * v1;
 	return { M, V: dM / h };
 }
 
@@ -76,11 +93,19 @@ function hermite(d: CollapseDiagram, i: number, x: number): { M: number; V: numb
  * points; at a jump `side` picks the value just left or right of x (default left).
  * @example momentAt(result.diagram, 3000) // ≈ 100e6 for case A1 at collapse
  */
-export function momentAt(diagram: CollapseDiagram, x: number, side: 'left' | 'right' = 'left'): number {
+export function momentAt(
+	diagram: CollapseDiagram,
+	x: number,
+	side: 'left' | 'right' = 'left'
+): number {
 	return hermite(diagram, locate(diagram, x, side), x).M;
 }
 
 /** Shear force of a collapse diagram at x (mm), N (V = dM/dx); `side` as in `momentAt`. */
-export function shearAt(diagram: CollapseDiagram, x: number, side: 'left' | 'right' = 'left'): number {
+export function shearAt(
+	diagram: CollapseDiagram,
+	x: number,
+	side: 'left' | 'right' = 'left'
+): number {
 	return hermite(diagram, locate(diagram, x, side), x).V;
 }

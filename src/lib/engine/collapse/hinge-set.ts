@@ -34,7 +34,11 @@ export function consolidateHinges(options: {
 	const clusters: HingeCandidate[][] = [];
 	for (const h of kept) {
 		const last = clusters[clusters.length - 1]?.at(-1);
-		const same = last && last.side === h.side && Math.sign(last.rotation) === Math.sign(h.rotation) && h.x - last.x <= CLUSTER;
+		const same =
+			last &&
+			last.side === h.side &&
+			Math.sign(last.rotation) === Math.sign(h.rotation) &&
+			h.x - last.x <= CLUSTER;
 		if (same) clusters[clusters.length - 1].push(h);
 		else clusters.push([h]);
 	}
@@ -47,7 +51,10 @@ export function consolidateHinges(options: {
 		const peaks = iv ? findStationaryPoints(model, z, iv) : [];
 		const sense = Math.sign(rotation);
 		const best = peaks
-			.filter((x) => Math.sign(evaluateMoment(model, z, x, -1)) === sense && Math.abs(x - main.x) <= CLUSTER)
+			.filter(
+				(x) =>
+					Math.sign(evaluateMoment(model, z, x, -1)) === sense && Math.abs(x - main.x) <= CLUSTER
+			)
 			.sort((a, b) => Math.abs(a - main.x) - Math.abs(b - main.x))[0];
 		return { ...main, x: best ?? main.x, rotation };
 	});
@@ -68,10 +75,21 @@ function buildCompatibilityRows(beam: BeamLine, hinges: Kink[]): number[][] {
 	beam.supports.forEach((s, node) => {
 		if (s === 'free') return;
 		const x = X[node];
-		rows.push([...all.map((k, i) => (k.x < x ? -(x - k.x) : 0)).slice(0, hinges.length), 1, x, ...joints.map((j) => (j.x < x ? -(x - j.x) : 0))]);
+		rows.push([
+			...all.map((k, i) => (k.x < x ? -(x - k.x) : 0)).slice(0, hinges.length),
+			1,
+			x,
+			...joints.map((j) => (j.x < x ? -(x - j.x) : 0))
+		]);
 		if (s !== 'fixed') return;
-		const before = (k: Kink) => (node === n ? true : node === 0 ? false : k.x < x || (k.x === x && k.side < 0));
-		rows.push([...hinges.map((k) => (before(k) ? -1 : 0)), 0, 1, ...joints.map((j) => (before(j) ? -1 : 0))]);
+		const before = (k: Kink) =>
+			node === n ? true : node === 0 ? false : k.x < x || (k.x === x && k.side < 0);
+		rows.push([
+			...hinges.map((k) => (before(k) ? -1 : 0)),
+			0,
+			1,
+			...joints.map((j) => (before(j) ? -1 : 0))
+		]);
 	});
 	return rows;
 }
@@ -81,13 +99,22 @@ export function makeCompatible(beam: BeamLine, hinges: HingeCandidate[]): HingeC
 	const H = hinges.length;
 	if (H === 0) return hinges;
 	const rows = buildCompatibilityRows(beam, hinges);
-	const space = solveEquilibrium(rows, rows.map(() => 0));
+	const space = solveEquilibrium(
+		rows,
+		rows.map(() => 0)
+	);
 	const modes = space.basis.map((v) => v.slice(0, H));
 	if (modes.length === 0) return hinges.map((h) => ({ ...h, rotation: 0 }));
 	const target = hinges.map((h) => h.rotation);
 	const dot = (a: number[], b: number[]) => a.reduce((s, v, i) => s + v * b[i], 0);
 	const G = modes.map((a) => modes.map((b) => dot(a, b)));
-	const coef = solveSquare(G, modes.map((a) => dot(a, target)));
+	const coef = solveSquare(
+		G,
+		modes.map((a) => dot(a, target))
+	);
 	if (!coef) return hinges;
-	return hinges.map((h, i) => ({ ...h, rotation: modes.reduce((s, m, k) => s + coef[k] * m[i], 0) }));
+	return hinges.map((h, i) => ({
+		...h,
+		rotation: modes.reduce((s, m, k) => s + coef[k] * m[i], 0)
+	}));
 }

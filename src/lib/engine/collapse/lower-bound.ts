@@ -53,7 +53,16 @@ function makePoint(model: FieldModel, space: SolutionSpace, s: Station): CheckPo
 		rowSag[i] = v / s.sag;
 		rowHog[i] = -v / s.hog;
 	}
-	return { x: s.x, side: s.side, sag: s.sag, hog: s.hog, rowSag, rowHog, hSag: (s.sag - M0) / s.sag, hHog: (s.hog + M0) / s.hog };
+	return {
+		x: s.x,
+		side: s.side,
+		sag: s.sag,
+		hog: s.hog,
+		rowSag,
+		rowHog,
+		hSag: (s.sag - M0) / s.sag,
+		hHog: (s.hog + M0) / s.hog
+	};
 }
 
 function dot(a: number[], b: number[]): number {
@@ -86,7 +95,9 @@ export function solveStaticProgram(options: {
 	const margin = objective === 'margin';
 	const points = seedStations(stations, intervals).map((s) => makePoint(model, space, s));
 	const d = space.basis.length;
-	const c = margin ? [...new Array<number>(d).fill(0), 1] : space.basis.map((v) => v[model.lambdaIndex]);
+	const c = margin
+		? [...new Array<number>(d).fill(0), 1]
+		: space.basis.map((v) => v[model.lambdaIndex]);
 	const lp = createProgram(c);
 	const addPoint = (p: CheckPoint) => {
 		addRow(lp, margin ? [...p.rowSag, 1] : p.rowSag, p.hSag);
@@ -113,7 +124,8 @@ export function solveStaticProgram(options: {
 		lastGood = { status: 'optimal', z, objective, points: points.slice(), duals, violation };
 		// Where the optimum leaves part of the field free, its peaks can wander from round to round
 		// with λ unchanged; stop then and let the certificate account for what is left.
-		still = Math.abs(objective - previous) <= 1e-15 * Math.max(1, Math.abs(objective)) ? still + 1 : 0;
+		still =
+			Math.abs(objective - previous) <= 1e-15 * Math.max(1, Math.abs(objective)) ? still + 1 : 0;
 		previous = objective;
 		if ((still >= 2 && violation <= 1e-12) || still >= 40) return lastGood;
 		addNewPoints(points, peaks.near, limit, (s) => makePoint(model, space, s));
@@ -125,7 +137,6 @@ export function solveStaticProgram(options: {
 
 /** Refinement rounds before the last answer is returned as it stands. */
 const MAX_ROUNDS = 60;
-
 
 /** Interior peaks of the field that come within 1e-9 of the limit, and the worst excess. */
 function findPeaks(model: FieldModel, z: number[], intervals: Interval[], limit: number) {
@@ -143,7 +154,12 @@ function findPeaks(model: FieldModel, z: number[], intervals: Interval[], limit:
 }
 
 /** Largest M/Mp − limit at the stations. */
-export function measureStations(model: FieldModel, z: number[], stations: Station[], limit: number): number {
+export function measureStations(
+	model: FieldModel,
+	z: number[],
+	stations: Station[],
+	limit: number
+): number {
 	let worst = -Infinity;
 	for (const s of stations) {
 		const M = evaluateMoment(model, z, s.x, s.side);

@@ -35,7 +35,11 @@ export function findMovingSpans(beam: BeamLine, d: Displacement): number[] {
 	const scale = Math.max(...d.kinks.map((k) => Math.abs(k.rotation)), 1e-300) * X[X.length - 1];
 	const moving: number[] = [];
 	for (let s = 0; s < beam.spans.length; s++) {
-		const xs = [X[s], X[s + 1], ...d.kinks.filter((k) => k.x > X[s] && k.x < X[s + 1]).map((k) => k.x)];
+		const xs = [
+			X[s],
+			X[s + 1],
+			...d.kinks.filter((k) => k.x > X[s] && k.x < X[s + 1]).map((k) => k.x)
+		];
 		if (xs.some((x) => Math.abs(evaluateDisplacement(d, x)) > 1e-9 * scale)) moving.push(s);
 	}
 	return moving;
@@ -54,7 +58,11 @@ export function nameMechanism(beam: BeamLine, hinges: Kink[], spans: number[]): 
 		const atRoot = rootNode >= 0 && hinges.every((h) => Math.abs(h.x - X[rootNode]) <= 1e-9 * X[n]);
 		if (atRoot && n === 1) return { name: 'cantilever root', spans };
 		if (atRoot) return { name: `overhang root at support ${nameNode(rootNode)}`, spans };
-		if (freeLeft || freeRight) return { name: n === 1 ? 'cantilever mechanism' : `overhang mechanism in span ${label(s)}`, spans };
+		if (freeLeft || freeRight)
+			return {
+				name: n === 1 ? 'cantilever mechanism' : `overhang mechanism in span ${label(s)}`,
+				spans
+			};
 		return { name: `beam mechanism in span ${label(s)}`, spans };
 	}
 	const first = spans[0];

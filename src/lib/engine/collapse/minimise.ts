@@ -7,7 +7,12 @@
 const GOLDEN = 0.3819660112501051;
 
 /** Minimum of f on [a, b] to an absolute tolerance tol in x. */
-export function minimiseOnInterval(f: (x: number) => number, a: number, b: number, tol: number): { x: number; f: number } {
+export function minimiseOnInterval(
+	f: (x: number) => number,
+	a: number,
+	b: number,
+	tol: number
+): { x: number; f: number } {
 	let x = a + GOLDEN * (b - a);
 	let w = x;
 	let v = x;

@@ -75,6 +75,7 @@ export function normaliseProblem(problem: CollapseProblem): {
 
 /** The same load multiplied by a factor. */
 export function multiplyLoad(load: Load, factor: number): Load {
-	if (load.kind === 'point' || load.kind === 'uniform') return { ...load, value: load.value * factor };
+	if (load.kind === 'point' || load.kind === 'uniform')
+		return { ...load, value: load.value * factor };
 	return { ...load, start: load.start * factor, end: load.end * factor };
 }

@@ -25,7 +25,8 @@ function reduceRows(A: number[][], n: number): number[] {
 	const scale = Math.max(1e-300, ...A.flatMap((r) => r.slice(0, n).map(Math.abs)));
 	for (let col = 0; col < n && row < A.length; col++) {
 		let best = row;
-		for (let r = row + 1; r < A.length; r++) if (Math.abs(A[r][col]) > Math.abs(A[best][col])) best = r;
+		for (let r = row + 1; r < A.length; r++)
+			if (Math.abs(A[r][col]) > Math.abs(A[best][col])) best = r;
 		if (Math.abs(A[best][col]) <= PIVOT_TOLERANCE * scale) continue;
 		[A[row], A[best]] = [A[best], A[row]];
 		const p = A[row][col];

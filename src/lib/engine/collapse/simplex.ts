@@ -101,7 +101,8 @@ function iterate(lp: LinearProgram, phase: 1 | 2): boolean {
 	const skip = new Set<number>();
 	let degenerate = 0;
 	for (let iter = 0; iter < 50 * cols + 100; iter++) {
-		for (let i = 0; i < d; i++) cb[i] = phase === 1 ? (basis[i] < d ? 1 : 0) : basis[i] < d ? 0 : h[basis[i] - d];
+		for (let i = 0; i < d; i++)
+			cb[i] = phase === 1 ? (basis[i] < d ? 1 : 0) : basis[i] < d ? 0 : h[basis[i] - d];
 		const bland = degenerate > 2 * d;
 		let enter = -1;
 		let best = -PRICE_TOL;
@@ -146,7 +147,8 @@ function iterate(lp: LinearProgram, phase: 1 | 2): boolean {
  */
 function reinvert(lp: LinearProgram): boolean {
 	const { d, sign, G, basis, c } = lp;
-	const column = (j: number) => (j < d ? c.map((_, i) => (i === j ? 1 : 0)) : c.map((_, i) => sign[i] * G[j - d][i]));
+	const column = (j: number) =>
+		j < d ? c.map((_, i) => (i === j ? 1 : 0)) : c.map((_, i) => sign[i] * G[j - d][i]);
 	const B = c.map((_, i) => basis.map((b) => column(b)[i]));
 	const inverse: number[][] = [];
 	for (let k = 0; k < d; k++) {
@@ -236,7 +238,10 @@ function readSolution(lp: LinearProgram): LinearProgramResult {
 	}
 	if (basis.every((b) => b >= d)) {
 		const rows = basis.map((b) => G[b - d]);
-		const yExact = solveSquare(rows, basis.map((b) => h[b - d]));
+		const yExact = solveSquare(
+			rows,
+			basis.map((b) => h[b - d])
+		);
 		const transposed = c.map((_, i) => rows.map((r) => r[i]));
 		const wB = solveSquare(transposed, c);
 		if (yExact) y = yExact;

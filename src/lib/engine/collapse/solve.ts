@@ -41,12 +41,16 @@ export function findFixedLoadField(p: CollapseProblem): FixedLoadField {
 export function assertValidProblem(problem: CollapseProblem): void {
 	const errors = validateCollapseProblem(problem).filter((i) => i.severity === 'error');
 	if (errors.length > 0) {
-		throw new Error(`invariant: invalid collapse problem: ${errors.map((e) => `${e.path} ${e.code}`).join(', ')}`);
+		throw new Error(
+			`invariant: invalid collapse problem: ${errors.map((e) => `${e.path} ${e.code}`).join(', ')}`
+		);
 	}
 }
 
 /** Result for fixed loads that already exceed the collapse load. */
-export function reportFixedLoadFailure(slack: number): CollapseResult & { status: 'fails-under-fixed' } {
+export function reportFixedLoadFailure(
+	slack: number
+): CollapseResult & { status: 'fails-under-fixed' } {
 	// With λ = 0 the program is homogeneous in the loads: 1 − slack is (fixed load)/(collapse load).
 	const overstress = assertFinite(1 - slack, 'overstress');
 	return {
@@ -74,12 +78,21 @@ export function solveLoadFactorOnly(p: CollapseProblem, scale: ProblemScale): nu
 }
 
 /** Solves a normalised problem whose fixed-load field is already known and admissible. */
-export function solveNormalised(p: CollapseProblem, scale: ProblemScale, fixedField: FixedLoadField): CollapseResult {
+export function solveNormalised(
+	p: CollapseProblem,
+	scale: ProblemScale,
+	fixedField: FixedLoadField
+): CollapseResult {
 	const { model, grid, sol } = solveLambdaProgram(p);
 	if (sol.status === 'unbounded') {
-		return { status: 'unbounded', message: 'The variable loads can never cause collapse (they relieve the beam or go straight into supports).' };
+		return {
+			status: 'unbounded',
+			message:
+				'The variable loads can never cause collapse (they relieve the beam or go straight into supports).'
+		};
 	}
-	if (sol.status !== 'optimal') throw new Error('invariant: static program infeasible although λ = 0 is admissible');
+	if (sol.status !== 'optimal')
+		throw new Error('invariant: static program infeasible although λ = 0 is admissible');
 	return certifyField({ model, grid, sol, fixedField, scale });
 }
 

@@ -6,7 +6,12 @@
  * (vertical balance, zero moment at a pinned or free right end, zero moment at simple joints).
  */
 import type { BeamLine, Load } from '../model/types';
-import { computeLoadMoment, computeLoadResultant, computeLoadShear, type Side } from './load-effects';
+import {
+	computeLoadMoment,
+	computeLoadResultant,
+	computeLoadShear,
+	type Side
+} from './load-effects';
 
 /** One unknown of the moment field. */
 export type FieldUnknown =
@@ -120,13 +125,15 @@ export function evaluateShearBasis(model: FieldModel, x: number, side: Side): nu
 /** Bending moment of the field z at x, sagging positive. */
 export function evaluateMoment(model: FieldModel, z: number[], x: number, side: Side): number {
 	let m = -computeLoadMoment(model.fixedLoads, x);
-	for (let i = 0; i < z.length; i++) if (z[i] !== 0) m += momentCoefficient(model, model.unknowns[i], x, side) * z[i];
+	for (let i = 0; i < z.length; i++)
+		if (z[i] !== 0) m += momentCoefficient(model, model.unknowns[i], x, side) * z[i];
 	return m;
 }
 
 /** Shear of the field z at x (V = dM/dx). */
 export function evaluateShear(model: FieldModel, z: number[], x: number, side: Side): number {
 	let v = -computeLoadShear(model.fixedLoads, x, side);
-	for (let i = 0; i < z.length; i++) if (z[i] !== 0) v += shearCoefficient(model, model.unknowns[i], x, side) * z[i];
+	for (let i = 0; i < z.length; i++)
+		if (z[i] !== 0) v += shearCoefficient(model, model.unknowns[i], x, side) * z[i];
 	return v;
 }

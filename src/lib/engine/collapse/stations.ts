@@ -27,7 +27,11 @@ export interface Interval {
 }
 
 /** Resistance at x: the weaker of the segments that touch x. */
-export function findCapacityAt(capacity: CapacitySegment[], x: number, tol = 0): { sag: number; hog: number } {
+export function findCapacityAt(
+	capacity: CapacitySegment[],
+	x: number,
+	tol = 0
+): { sag: number; hog: number } {
 	let sag = Infinity;
 	let hog = Infinity;
 	for (const c of capacity) {
@@ -35,7 +39,8 @@ export function findCapacityAt(capacity: CapacitySegment[], x: number, tol = 0):
 		sag = Math.min(sag, c.sagging);
 		hog = Math.min(hog, c.hogging);
 	}
-	if (!Number.isFinite(sag) || !Number.isFinite(hog)) throw new Error(`invariant: no capacity at x = ${x}`);
+	if (!Number.isFinite(sag) || !Number.isFinite(hog))
+		throw new Error(`invariant: no capacity at x = ${x}`);
 	return { sag, hog };
 }
 
@@ -58,7 +63,8 @@ function collectBreaks(model: FieldModel, capacity: CapacitySegment[]): number[]
 	// A node wins over a load or section break merged into it, so jumps sit exactly at nodes.
 	for (const X of model.nodeX) {
 		let best = 0;
-		for (let i = 1; i < merged.length; i++) if (Math.abs(merged[i] - X) < Math.abs(merged[best] - X)) best = i;
+		for (let i = 1; i < merged.length; i++)
+			if (Math.abs(merged[i] - X) < Math.abs(merged[best] - X)) best = i;
 		merged[best] = X;
 	}
 	return merged;
@@ -90,7 +96,11 @@ export function buildStations(
 		const mid = (from + to) / 2;
 		const cap = findCapacityAt(capacity, mid, tol);
 		const loaded = loads.some(
-			(l) => l.kind !== 'point' && l.from < mid && l.to > mid && (l.kind === 'uniform' ? l.value !== 0 : l.start !== 0 || l.end !== 0)
+			(l) =>
+				l.kind !== 'point' &&
+				l.from < mid &&
+				l.to > mid &&
+				(l.kind === 'uniform' ? l.value !== 0 : l.start !== 0 || l.end !== 0)
 		);
 		intervals.push({ from, to, sag: cap.sag, hog: cap.hog, loaded });
 	}

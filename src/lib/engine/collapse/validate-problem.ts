@@ -14,15 +14,18 @@ function error(path: string, code: string, message: string): InputIssue {
 function checkLoad(load: Load, path: string, L: number): InputIssue[] {
 	const onBeam = (x: number) => Number.isFinite(x) && x >= 0 && x <= L;
 	if (load.kind === 'point') {
-		if (!onBeam(load.x)) return [error(`${path}.x`, 'load-off-beam', 'The load must sit on the beam.')];
-		if (!Number.isFinite(load.value)) return [error(`${path}.value`, 'load-not-finite', 'Give the load as a number.')];
+		if (!onBeam(load.x))
+			return [error(`${path}.x`, 'load-off-beam', 'The load must sit on the beam.')];
+		if (!Number.isFinite(load.value))
+			return [error(`${path}.value`, 'load-not-finite', 'Give the load as a number.')];
 		return [];
 	}
 	if (!onBeam(load.from) || !onBeam(load.to) || !(load.to > load.from)) {
 		return [error(`${path}.from`, 'load-range', 'A line load needs from < to, both on the beam.')];
 	}
 	const values = load.kind === 'uniform' ? [load.value] : [load.start, load.end];
-	if (!values.every(Number.isFinite)) return [error(`${path}.value`, 'load-not-finite', 'Give the load as a number.')];
+	if (!values.every(Number.isFinite))
+		return [error(`${path}.value`, 'load-not-finite', 'Give the load as a number.')];
 	return [];
 }
 
@@ -35,18 +38,27 @@ export function validateCollapseProblem(problem: CollapseProblem): InputIssue[] 
 	let reach = 0;
 	caps.forEach((c, i) => {
 		const path = `capacity[${problem.capacity.indexOf(c)}]`;
-		if (!(c.sagging > 0 && c.hogging > 0 && Number.isFinite(c.sagging) && Number.isFinite(c.hogging))) {
-			issues.push(error(path, 'capacity-not-positive', 'Moment resistances must be positive numbers.'));
+		if (
+			!(c.sagging > 0 && c.hogging > 0 && Number.isFinite(c.sagging) && Number.isFinite(c.hogging))
+		) {
+			issues.push(
+				error(path, 'capacity-not-positive', 'Moment resistances must be positive numbers.')
+			);
 		}
 		if (!(c.to > c.from) || c.from > reach + 1e-9 * L) {
-			issues.push(error(path, 'capacity-gap', 'Resistance segments must cover the beam without gaps.'));
+			issues.push(
+				error(path, 'capacity-gap', 'Resistance segments must cover the beam without gaps.')
+			);
 		}
 		reach = Math.max(reach, c.to);
 		if (i === caps.length - 1 && reach < L * (1 - 1e-9)) {
-			issues.push(error(path, 'capacity-gap', 'Resistance segments must reach the end of the beam.'));
+			issues.push(
+				error(path, 'capacity-gap', 'Resistance segments must reach the end of the beam.')
+			);
 		}
 	});
-	if (caps.length === 0) issues.push(error('capacity', 'capacity-missing', 'Give the moment resistance of the beam.'));
+	if (caps.length === 0)
+		issues.push(error('capacity', 'capacity-missing', 'Give the moment resistance of the beam.'));
 	problem.fixedLoads.forEach((l, i) => issues.push(...checkLoad(l, `fixedLoads[${i}]`, L)));
 	problem.variableLoads.forEach((l, i) => issues.push(...checkLoad(l, `variableLoads[${i}]`, L)));
 	return issues;

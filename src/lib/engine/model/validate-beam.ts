@@ -25,24 +25,50 @@ export function validateBeamLine(beam: BeamLine): InputIssue[] {
 	if (n === 0) return [error('beam.spans', 'no-spans', 'The beam needs at least one span.')];
 	beam.spans.forEach((s, i) => {
 		if (!Number.isFinite(s) || s <= 0) {
-			issues.push(error(`beam.spans[${i}]`, 'span-not-positive', `Span ${i + 1} must be longer than zero.`));
+			issues.push(
+				error(`beam.spans[${i}]`, 'span-not-positive', `Span ${i + 1} must be longer than zero.`)
+			);
 		}
 	});
 	if (!Array.isArray(beam.supports) || beam.supports.length !== n + 1) {
-		issues.push(error('beam.supports', 'supports-count', `Give ${n + 1} supports, one per node, for ${n} span(s).`));
+		issues.push(
+			error(
+				'beam.supports',
+				'supports-count',
+				`Give ${n + 1} supports, one per node, for ${n} span(s).`
+			)
+		);
 	}
 	if (!Array.isArray(beam.joints) || beam.joints.length !== n - 1) {
-		issues.push(error('beam.joints', 'joints-count', `Give ${n - 1} joint(s), one per internal node.`));
+		issues.push(
+			error('beam.joints', 'joints-count', `Give ${n - 1} joint(s), one per internal node.`)
+		);
 	}
 	if (issues.length > 0) return issues;
 	beam.supports.forEach((s, i) => {
-		if (!SUPPORTS.includes(s)) issues.push(error(`beam.supports[${i}]`, 'support-unknown', `Support ${i + 1} must be pin, fixed or free.`));
+		if (!SUPPORTS.includes(s))
+			issues.push(
+				error(
+					`beam.supports[${i}]`,
+					'support-unknown',
+					`Support ${i + 1} must be pin, fixed or free.`
+				)
+			);
 		else if (s === 'free' && i > 0 && i < n) {
-			issues.push(error(`beam.supports[${i}]`, 'free-inside', 'Only the two ends of the beam can be free (a cantilever or overhang).'));
+			issues.push(
+				error(
+					`beam.supports[${i}]`,
+					'free-inside',
+					'Only the two ends of the beam can be free (a cantilever or overhang).'
+				)
+			);
 		}
 	});
 	beam.joints.forEach((j, k) => {
-		if (!JOINTS.includes(j)) issues.push(error(`beam.joints[${k}]`, 'joint-unknown', `Joint ${k + 1} must be continuous or simple.`));
+		if (!JOINTS.includes(j))
+			issues.push(
+				error(`beam.joints[${k}]`, 'joint-unknown', `Joint ${k + 1} must be continuous or simple.`)
+			);
 		else if (j === 'simple' && beam.supports[k + 1] === 'fixed') {
 			issues.push({
 				path: `beam.supports[${k + 1}]`,
@@ -55,7 +81,11 @@ export function validateBeamLine(beam: BeamLine): InputIssue[] {
 	if (issues.some((i) => i.severity === 'error')) return issues;
 	if (isMechanismWithoutLoad(beam)) {
 		issues.push(
-			error('beam.supports', 'beam-is-mechanism', 'The beam can move without bending: add a support, fix an end or make a joint continuous.')
+			error(
+				'beam.supports',
+				'beam-is-mechanism',
+				'The beam can move without bending: add a support, fix an end or make a joint continuous.'
+			)
 		);
 	}
 	return issues;
