@@ -24,7 +24,8 @@ export function reportCollapse(result: CollapseResult, appliesTo: LambdaScope): 
 			diagram: null,
 			message:
 				result.status === 'fails-under-fixed'
-					? `The existing loads alone, without any temporary load, exceed the plastic capacity of the beam. ${result.message}`
+					? 'The existing loads alone, without any temporary load, exceed the plastic ' +
+						`capacity of the beam. ${result.message}`
 					: result.message
 		};
 	}
@@ -36,7 +37,11 @@ export function reportCollapse(result: CollapseResult, appliesTo: LambdaScope): 
 		lowerBound: result.lowerBound,
 		upperBound: result.upperBound,
 		certified,
-		hinges: result.hinges.map((h) => ({ x: mmToM(h.x), moment: nmmToKNm(h.moment), rotation: h.rotation })),
+		hinges: result.hinges.map((h) => ({
+			x: mmToM(h.x),
+			moment: nmmToKNm(h.moment),
+			rotation: h.rotation
+		})),
 		mechanism: { name: result.mechanism.name, spans: [...result.mechanism.spans] },
 		reactions: result.reactions.map(nToKN),
 		diagram: {

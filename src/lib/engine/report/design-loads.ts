@@ -15,7 +15,8 @@ export interface DesignLoadSet {
 
 /** Partial factor of an action category. */
 export function findActionFactor(factors: ResolvedFactors, action: ActionCategory): number {
-	return action === 'permanent' ? factors.permanent : action === 'imposed' ? factors.imposed : factors.temporary;
+	if (action === 'permanent') return factors.permanent;
+	return action === 'imposed' ? factors.imposed : factors.temporary;
 }
 
 /** A load multiplied by k. */
@@ -36,10 +37,13 @@ export function listCharacteristicLoads(model: CaseModel): Load[] {
  * buildDesignLoads(model).variable // temporary loads × γ temporary
  */
 export function buildDesignLoads(model: CaseModel): DesignLoadSet {
-	const factored = listCharacteristicLoads(model).map((l) => scaleLoad(l, findActionFactor(model.factors, l.action)));
+	const factored = listCharacteristicLoads(model).map((l) =>
+		scaleLoad(l, findActionFactor(model.factors, l.action))
+	);
 	const variable = factored.filter((l) => l.action === 'temporary');
 	if (variable.length === 0) return { fixed: [], variable: factored, appliesTo: 'all' };
-	return { fixed: factored.filter((l) => l.action !== 'temporary'), variable, appliesTo: 'temporary' };
+	const fixed = factored.filter((l) => l.action !== 'temporary');
+	return { fixed, variable, appliesTo: 'temporary' };
 }
 
 /** Total downward force of a load list, N. */
