@@ -109,4 +109,5 @@ export function addNewPoints(
 	}
 }
 
+/** Side of a position (re-exported for the program). */
 export type { Side };

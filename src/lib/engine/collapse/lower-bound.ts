@@ -19,6 +19,7 @@ import { addRow, createProgram, solveProgram } from './simplex';
 import type { FieldModel } from './statics';
 import type { Interval, Station } from './stations';
 
+/** A checked point with its two rows (re-exported for the mechanism reader). */
 export type { CheckPoint };
 
 /** Result of the static linear program. */

@@ -56,6 +56,7 @@ export function addRow(lp: LinearProgram, g: number[], hj: number): void {
 	}
 }
 
+/** Gauss–Jordan pivot on row r, column col; column col enters the basis. */
 export function pivot(lp: LinearProgram, r: number, col: number): void {
 	const { T, rhs } = lp;
 	const pr = T[r];
