@@ -44,3 +44,9 @@ export async function enterSimpleBeam(
 	await typeInto(page, 'loads[0].value', o.load);
 	await page.getByText('Along its whole length', { exact: false }).click();
 }
+
+/** Opens the check screen (optionally at a path such as `/check?id=…`) and waits until its case is in. */
+export async function openCheck(page: Page, path = '/check'): Promise<void> {
+	await page.goto(path);
+	await expect(page.getByTestId('check-heading')).toHaveAttribute('data-ready', 'true');
+}

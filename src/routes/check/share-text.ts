@@ -10,14 +10,23 @@ const VERDICT_WORDS = { pass: 'PASS', fail: 'FAIL', 'outside-scope': 'OUTSIDE SC
  * @example
  * composeShareTexts(report, 'Plant room beam').short // '…PASS…Screening aid only…'
  */
-export function composeShareTexts(report: ReportView, title: string): { short: string; long: string } {
+export function composeShareTexts(
+	report: ReportView,
+	title: string,
+	context: { place?: string; date: string; by?: string } = { date: '' }
+): { short: string; long: string } {
 	const fallback = [
 		title || 'Beam check',
 		`Verdict: ${report.verdict ? VERDICT_WORDS[report.verdict] : 'none'}`,
 		`Collapse load factor: ${report.collapse.loadFactor != null ? formatNumber(report.collapse.loadFactor, 3) : '—'}`
 	].join('\n');
-	const short = withNotice(report.summary?.short ?? fallback);
-	const long = withNotice(report.summary?.long ?? fallback);
+	// Place, date and who checked it are not the engine's business: they head the text here.
+	const header = [context.place ? `Place: ${context.place}` : '', context.date ? `Date: ${context.date}` : '', context.by ? `By: ${context.by}` : '']
+		.filter(Boolean)
+		.join('\n');
+	const join = (body: string) => (header ? `${header}\n${body}` : body);
+	const short = withNotice(join(report.summary?.short ?? fallback));
+	const long = withNotice(join(report.summary?.long ?? fallback));
 	return { short, long };
 }
 

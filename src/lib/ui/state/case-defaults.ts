@@ -2,19 +2,22 @@ import type { FactorSet, Settings } from '$lib/storage';
 import type { CaseFile } from './case-file';
 
 /**
- * The factors a case takes from a factor set: built-in sets by their id (the engine knows them),
- * own sets as `custom` with their numbers.
+ * The factors a case takes from a factor set: the combination rule by the engine's set name, and
+ * every number of the set (the engine uses given numbers over its recommended ones).
  * @example
  * factorsFromSet(BUILT_IN_FACTOR_SETS[0]).permanent // 1.35
  */
 export function factorsFromSet(set: FactorSet): NonNullable<CaseFile['factors']> {
 	return {
-		set: set.id.startsWith('en1990-') ? set.id : 'custom',
+		set: set.combination === '6.10a/b' ? 'en1990-6.10ab' : 'en1990-6.10',
 		permanent: set.gammaG,
+		permanentFavourable: set.gammaGinf,
 		imposed: set.gammaQ,
 		temporary: set.gammaTemp,
 		gammaM0: set.gammaM0,
-		gammaM1: set.gammaM1
+		gammaM1: set.gammaM1,
+		xi: set.xi,
+		psi0: set.psi0
 	};
 }
 

@@ -20,6 +20,8 @@ export interface ReportView {
 	};
 	/** λ × the proposed temporary loads: `total` in kN (characteristic). */
 	temporaryCapacity: { total: number } | null;
+	/** Largest temporary loads every check allows: `total` in kN (characteristic). */
+	allowable?: { total: number } | null;
 	/** Largest characteristic point load by position: x m, p kN. */
 	capacityCurve: { points: { x: number; p: number }[]; min: { x: number; p: number } } | null;
 	checks?: { id: string; label?: string; utilisation: number; pass: boolean; level?: string }[];

@@ -36,17 +36,31 @@ export class CheckSession {
 	/** Shown once after the first save: what installing to the home screen does. */
 	explainInstall = $state(false);
 	saving = $state(false);
+	/** True once `open` has put a case in the form. */
+	ready = $state(false);
 
 	/** Opens what the address asks for: ?id= a saved check, #c= a shared link, else the draft or the demo. */
-	async open(url: URL): Promise<void> {
+	async open(url: URL, defaults: { settings: Settings; set: FactorSet }): Promise<void> {
+		try {
+			await this.#open(url, defaults);
+		} finally {
+			this.ready = true;
+		}
+	}
+
+	async #open(url: URL, defaults: { settings: Settings; set: FactorSet }): Promise<void> {
 		const store = await connectStore();
+		const draft = store ? await loadDraft(store) : null;
+		const restored = draft?.ok && draft.value ? readDraft(draft.value.form) : null;
 		const id = url.searchParams.get('id');
 		if (id && store) {
 			const found = await getCheck(store, id);
 			if (found.ok) {
 				this.record = found.value;
 				this.source = 'saved';
-				this.form.load(asCaseFile(found.value.input), { savedId: id });
+				// Edits in progress on this very check (e.g. before a reload) win over the stored copy.
+				if (restored?.savedId === id) this.form.load(restored.case, { savedId: id, texts: restored.texts, units: restored.units });
+				else this.form.load(asCaseFile(found.value.input), { savedId: id });
 				return;
 			}
 			this.message = found.message;
@@ -60,20 +74,18 @@ export class CheckSession {
 			}
 			this.message = decoded.issues.map((issue) => issue.message).join(' ');
 		}
-		const draft = store ? await loadDraft(store) : null;
-		const restored = draft?.ok && draft.value ? readDraft(draft.value.form) : null;
-		if (restored) {
-			if (restored.savedId && store) {
-				const saved = await getCheck(store, restored.savedId);
-				this.record = saved.ok ? saved.value : null;
-			}
+		if (restored && restored.savedId === null) {
 			this.source = 'draft';
-			this.form.load(restored.case, { savedId: this.record ? restored.savedId : null, texts: restored.texts, units: restored.units });
+			this.form.load(restored.case, { texts: restored.texts, units: restored.units });
 			return;
 		}
 		if (!store) this.message = 'This browser does not let the app store data: checks cannot be saved here.';
-		this.source = 'demo';
-		this.form.load(createDemoCase());
+		// The last draft belonged to a saved check (it is kept there): a new check starts empty.
+		if (restored) this.startBlank(defaults);
+		else {
+			this.source = 'demo';
+			this.form.load(createDemoCase());
+		}
 	}
 
 	/** Starts again from an empty form with the user's defaults (the draft follows). */

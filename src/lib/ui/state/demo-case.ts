@@ -21,7 +21,8 @@ export function createDemoCase(): CaseFile {
 			sectionLoss: 0,
 			selfWeight: true,
 			restraint: { lateral: 'continuous', loadHeight: 'bottom-flange' },
-			bearing: [100, 100]
+			bearing: [100, 100],
+			bearingLoads: 50
 		},
 		loads: [
 			{ kind: 'uniform', from: 0, to: 4.8, value: 3.2, action: 'permanent' },

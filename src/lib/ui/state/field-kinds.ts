@@ -23,6 +23,7 @@ const FIXED: Record<string, FieldInfo> = {
 	'beam.section.mp': { kind: 'moment', rule: 'positive' },
 	'beam.grade.fy': { kind: 'stress', rule: 'positive' },
 	'beam.sectionLoss': { kind: 'dimension', rule: 'non-negative' },
+	'beam.bearingLoads': { kind: 'dimension', rule: 'non-negative' },
 	deflectionLimit: { kind: 'ratio', rule: 'positive' }
 };
 
