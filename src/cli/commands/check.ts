@@ -19,10 +19,12 @@ function formatCheckText(r: CheckReport, warnings: { path: string; message: stri
 		const fy = g ? `, ${g.name}, fy ${g.fy} MPa` : '';
 		lines.push(`Span ${i + 1}: ${s.designation}${fy}, ${cls}; Mp,Rd ${fmt(r.mpRd[i])} kNm`);
 	});
-	lines.push('', `Plastic collapse (${c.appliesTo === 'temporary' ? 'factor on the temporary loads' : 'factor on all loads'}):`);
+	const scope = c.appliesTo === 'temporary' ? 'on the temporary loads' : 'on all loads';
+	lines.push('', `Plastic collapse (factor ${scope}):`);
 	if (c.loadFactor === null) lines.push(`  no load factor: ${c.message ?? c.status}`);
 	else {
-		lines.push(`  load factor λ = ${fmt(c.loadFactor)}${c.certified ? ' (certified: bounds meet)' : ' — NOT CERTIFIED'}`);
+		const proof = c.certified ? ' (certified: bounds meet)' : ' — NOT CERTIFIED';
+		lines.push(`  load factor λ = ${fmt(c.loadFactor)}${proof}`);
 		if (c.mechanism) lines.push(`  mechanism: ${c.mechanism.name}`);
 		for (const h of c.hinges) lines.push(`  hinge at x = ${fmt(h.x)} m, M = ${fmt(h.moment)} kNm`);
 		if (c.message) lines.push(`  ${c.message}`);
@@ -31,27 +33,37 @@ function formatCheckText(r: CheckReport, warnings: { path: string; message: stri
 		lines.push('', 'Largest temporary loads (characteristic, the other loads present):');
 		for (const t of r.temporaryCapacity.loads) {
 			const name = t.label ?? `load ${t.index + 1} (${t.kind})`;
-			lines.push(`  ${name}: entered ${fmt(t.entered)} ${t.unit}, capacity ${fmt(t.capacity)} ${t.unit}`);
+			const entered = `${fmt(t.entered)} ${t.unit}`;
+			lines.push(`  ${name}: entered ${entered}, capacity ${fmt(t.capacity)} ${t.unit}`);
 		}
-		lines.push(`  total: ${fmt(r.temporaryCapacity.total)} kN (entered ${fmt(r.temporaryCapacity.enteredTotal)} kN)`);
+		const { total, enteredTotal } = r.temporaryCapacity;
+		lines.push(`  total: ${fmt(total)} kN (entered ${fmt(enteredTotal)} kN)`);
 	}
 	if (r.capacityCurve) {
 		const m = r.capacityCurve.min;
-		lines.push('', `Single temporary point load: least ${fmt(m.p)} kN at x = ${fmt(m.x)} m (${m.mechanism})`);
+		const where = `x = ${fmt(m.x)} m (${m.mechanism})`;
+		lines.push('', `Single temporary point load: least ${fmt(m.p)} kN at ${where}`);
 	}
 	const e = r.elastic;
 	lines.push('', 'Elastic, unfactored loads:');
-	if (e.maxMoment?.maxSagging) lines.push(`  largest sagging moment ${fmt(e.maxMoment.maxSagging.value)} kNm at ${fmt(e.maxMoment.maxSagging.x)} m`);
-	if (e.maxMoment?.maxHogging) lines.push(`  largest hogging moment ${fmt(e.maxMoment.maxHogging.value)} kNm at ${fmt(e.maxMoment.maxHogging.x)} m`);
+	for (const [word, v] of [
+		['sagging', e.maxMoment?.maxSagging],
+		['hogging', e.maxMoment?.maxHogging]
+	] as const) {
+		if (v) lines.push(`  largest ${word} moment ${fmt(v.value)} kNm at ${fmt(v.x)} m`);
+	}
 	if (e.maxDeflection) {
-		lines.push(`  largest deflection ${fmt(e.maxDeflection.total.value, 3)} mm at ${fmt(e.maxDeflection.total.x)} m`);
-		if (e.maxDeflection.temporary) lines.push(`  from the temporary loads alone ${fmt(e.maxDeflection.temporary.value, 3)} mm`);
+		const { total, temporary } = e.maxDeflection;
+		lines.push(`  largest deflection ${fmt(total.value, 3)} mm at ${fmt(total.x)} m`);
+		if (temporary) lines.push(`  from the temporary loads alone ${fmt(temporary.value, 3)} mm`);
 	}
 	if (e.firstYield) lines.push(`  first yield at factor ${fmt(e.firstYield.factor)}`);
 	if (e.firstHinge) lines.push(`  first plastic hinge at factor ${fmt(e.firstHinge.factor)}`);
 	lines.push('', ...formatVerdictText(r));
 	lines.push('', 'Notices:', ...r.notices.map((n) => `  - ${n}`));
-	if (warnings.length > 0) lines.push('', 'Input warnings:', ...warnings.map((w) => `  - ${w.path}: ${w.message}`));
+	if (warnings.length > 0) {
+		lines.push('', 'Input warnings:', ...warnings.map((w) => `  - ${w.path}: ${w.message}`));
+	}
 	lines.push('', `Engine ${r.engineVersion}`);
 	return lines.join('\n');
 }
@@ -59,14 +71,23 @@ function formatCheckText(r: CheckReport, warnings: { path: string; message: stri
 /** Verdict, governing check, reserve, allowable loads and every check row. */
 function formatVerdictText(r: CheckReport): string[] {
 	const d = r.design;
-	const lines = [`Verdict: ${r.verdict.toUpperCase()} (${d.route.route})`, ...d.route.reasons.map((t) => `  ${t}`)];
-	if (r.governing) lines.push(`  governing: ${r.governing.label}, utilisation ${fmt(r.governing.utilisation, 3)}`);
-	if (d.loadFactor !== null) lines.push(`  load factor on the temporary loads ${fmt(d.loadFactor)}`);
+	const lines = [
+		`Verdict: ${r.verdict.toUpperCase()} (${d.route.route})`,
+		...d.route.reasons.map((t) => `  ${t}`)
+	];
+	if (r.governing) {
+		const u = fmt(r.governing.utilisation, 3);
+		lines.push(`  governing: ${r.governing.label}, utilisation ${u}`);
+	}
+	if (d.loadFactor !== null) {
+		lines.push(`  load factor on the temporary loads ${fmt(d.loadFactor)}`);
+	}
 	if (r.reserve !== null) lines.push(`  reserve ${fmt(r.reserve, 3)} %`);
 	lines.push(`  factor set ${d.factorSet}, ${d.arrangementsTried} load arrangements tried`);
 	if (d.governingArrangement) lines.push(`  governing arrangement: ${d.governingArrangement}`);
 	for (const t of r.allowable?.loads ?? []) {
-		lines.push(`  largest ${t.label ?? `load ${t.index + 1}`}: ${fmt(t.capacity)} ${t.unit} (entered ${fmt(t.entered)})`);
+		const name = t.label ?? `load ${t.index + 1}`;
+		lines.push(`  largest ${name}: ${fmt(t.capacity)} ${t.unit} (entered ${fmt(t.entered)})`);
 	}
 	lines.push('', 'Checks:');
 	for (const c of r.checks) {
@@ -76,10 +97,20 @@ function formatVerdictText(r: CheckReport): string[] {
 	return lines;
 }
 
+/** One entry of the `errors` list printed for bad input. */
+interface CliError {
+	path: string;
+	message: string;
+	code?: string;
+}
+
 /** Writes the `{"errors": […]}` object of an input problem and returns exit code 2. */
-function failInput(errors: { path: string; message: string; code?: string }[], json: boolean): number {
+function failInput(errors: CliError[], json: boolean): number {
 	process.stdout.write(JSON.stringify({ errors }) + '\n');
-	if (!json) process.stderr.write(errors.map((e) => `${e.path || '(file)'}: ${e.message}`).join('\n') + '\n');
+	if (!json) {
+		const text = errors.map((e) => `${e.path || '(file)'}: ${e.message}`).join('\n');
+		process.stderr.write(text + '\n');
+	}
 	return 2;
 }
 
@@ -97,8 +128,13 @@ export const checkCommand: CliCommand = {
 		const curve = args.includes('--curve');
 		const unknown = args.filter((a) => a.startsWith('--') && a !== '--json' && a !== '--curve');
 		const files = args.filter((a) => !a.startsWith('--'));
-		if (unknown.length > 0) return failInput([{ path: '', message: `unknown option ${unknown[0]}` }], json);
-		if (files.length !== 1) return failInput([{ path: '', message: 'give exactly one case file: check <case.json>' }], json);
+		if (unknown.length > 0) {
+			return failInput([{ path: '', message: `unknown option ${unknown[0]}` }], json);
+		}
+		if (files.length !== 1) {
+			const message = 'give exactly one case file: check <case.json>';
+			return failInput([{ path: '', message }], json);
+		}
 		let text: string;
 		try {
 			text = await readFile(files[0], 'utf8');
