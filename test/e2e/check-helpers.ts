@@ -50,3 +50,21 @@ export async function openCheck(page: Page, path = '/check'): Promise<void> {
 	await page.goto(path);
 	await expect(page.getByTestId('check-heading')).toHaveAttribute('data-ready', 'true');
 }
+
+/** Saves the demo check under a title, with a place and notes; ends on /check?id=…. */
+export async function saveDemo(page: Page, title: string, building = 'Block A'): Promise<void> {
+	await openCheck(page);
+	// After a save, a new check starts blank: bring the demo back.
+	const demo = page.getByRole('button', { name: 'Open the demo' });
+	if (await demo.isVisible()) await demo.click();
+	await readLoadFactor(page);
+	await page.getByTestId('open-save').click();
+	await page.getByTestId('save-title').fill(title);
+	await page.getByTestId('save-building').fill(building);
+	await page.getByTestId('save-level').fill('B1');
+	await page.getByTestId('save-grid').fill('C/4');
+	await page.getByTestId('save-notes').fill('Pump change, hoist on trolley');
+	await page.getByTestId('save-confirm').click();
+	await expect(page.getByTestId('session-message')).toContainText('Saved');
+	await expect(page).toHaveURL(/\/check\?id=/);
+}

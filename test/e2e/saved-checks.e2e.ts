@@ -2,26 +2,8 @@
  * Saved checks on the phone: saving with title and place, the list after a reload, search, edits
  * that keep revisions, duplicate, and delete with undo.
  */
-import type { Page } from '@playwright/test';
-import { fieldAt, openCheck, readLoadFactor, typeInto } from './check-helpers';
+import { fieldAt, readLoadFactor, saveDemo, typeInto } from './check-helpers';
 import { test, expect } from './fixtures';
-
-async function saveDemo(page: Page, title: string, building = 'Block A'): Promise<void> {
-	await openCheck(page);
-	// After a save, a new check starts blank: bring the demo back.
-	const demo = page.getByRole('button', { name: 'Open the demo' });
-	if (await demo.isVisible()) await demo.click();
-	await readLoadFactor(page);
-	await page.getByTestId('open-save').click();
-	await page.getByTestId('save-title').fill(title);
-	await page.getByTestId('save-building').fill(building);
-	await page.getByTestId('save-level').fill('B1');
-	await page.getByTestId('save-grid').fill('C/4');
-	await page.getByTestId('save-notes').fill('Pump change, hoist on trolley');
-	await page.getByTestId('save-confirm').click();
-	await expect(page.getByTestId('session-message')).toContainText('Saved');
-	await expect(page).toHaveURL(/\/check\?id=/);
-}
 
 test('a saved check is listed after a reload and found by search', async ({ page }) => {
 	await saveDemo(page, 'Plant room hoist beam');
