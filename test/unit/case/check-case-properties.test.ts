@@ -9,14 +9,24 @@ import { findMechanismIssues } from '../../../src/lib/engine/elastic/index';
 import { checkCase } from '../../../src/lib/engine/index';
 import type { SupportKind } from '../../../src/lib/engine/model/types';
 
-const SECTIONS = [{ mp: 120 }, { mp: 80, mass: 30 }, { designation: 'UB 305x165x40' }, { designation: 'IPE 240' }, { designation: 'SHS 100x100x8.0' }];
+const SECTIONS = [
+	{ mp: 120 },
+	{ mp: 80, mass: 30 },
+	{ designation: 'UB 305x165x40' },
+	{ designation: 'IPE 240' },
+	{ designation: 'SHS 100x100x8.0' }
+];
+const SUPPORT = fc.constantFrom<SupportKind>('pin', 'fixed', 'free');
 const ACTIONS = ['permanent', 'imposed', 'temporary'] as const;
 
 /** A random valid case file (file units, invented numbers). */
 const caseFile = fc
 	.record({
-		spans: fc.array(fc.integer({ min: 10, max: 100 }).map((d) => d / 10), { minLength: 1, maxLength: 3 }),
-		ends: fc.tuple(fc.constantFrom<SupportKind>('pin', 'fixed', 'free'), fc.constantFrom<SupportKind>('pin', 'fixed', 'free')),
+		spans: fc.array(
+			fc.integer({ min: 10, max: 100 }).map((d) => d / 10),
+			{ minLength: 1, maxLength: 3 }
+		),
+		ends: fc.tuple(SUPPORT, SUPPORT),
 		section: fc.constantFrom(...SECTIONS),
 		grade: fc.constantFrom('S275', 'S355'),
 		selfWeight: fc.boolean(),
@@ -39,24 +49,43 @@ const caseFile = fc
 		const round = (t: number) => Math.round(t * total * 100) / 100;
 		const loads = r.loads.map((l) => {
 			const [p, q] = [round(Math.min(l.a, l.b)), round(Math.max(l.a, l.b))];
-			if (l.kind === 'point' || q <= p) return { kind: 'point', x: p, value: l.v, action: l.action };
-			if (l.kind === 'uniform') return { kind: 'uniform', from: p, to: q, value: l.v, action: l.action };
+			const action = l.action;
+			if (l.kind === 'point' || q <= p) return { kind: 'point', x: p, value: l.v, action };
+			if (l.kind === 'uniform') return { kind: 'uniform', from: p, to: q, value: l.v, action };
 			return { kind: 'linear', from: p, to: q, start: l.v, end: l.w, action: l.action };
 		});
 		return {
 			format: 'hingepoint.case',
 			version: 1,
 			title: 'DEMO — random',
-			beam: { spans: r.spans, supports, section: r.section, grade: r.grade, selfWeight: r.selfWeight },
+			beam: {
+				spans: r.spans,
+				supports,
+				section: r.section,
+				grade: r.grade,
+				selfWeight: r.selfWeight
+			},
 			loads
 		};
 	})
-	.filter((c) => findMechanismIssues({ spans: c.beam.spans, supports: c.beam.supports, joints: [] }).length === 0);
+	.filter((c) => {
+		const beam = { spans: c.beam.spans, supports: c.beam.supports, joints: [] };
+		return findMechanismIssues(beam).length === 0;
+	});
+
+/** A file load with its temporary value doubled; other loads unchanged. */
+function doubleTemporary(l: any): any {
+	if (l.action !== 'temporary') return l;
+	if (l.kind === 'linear') return { ...l, start: 2 * l.start, end: 2 * l.end };
+	return { ...l, value: 2 * l.value };
+}
 
 function collectNumbers(value: unknown, out: number[] = []): number[] {
 	if (typeof value === 'number') out.push(value);
 	else if (Array.isArray(value)) value.forEach((v) => collectNumbers(v, out));
-	else if (value && typeof value === 'object') Object.values(value).forEach((v) => collectNumbers(v, out));
+	else if (value && typeof value === 'object') {
+		Object.values(value).forEach((v) => collectNumbers(v, out));
+	}
 	return out;
 }
 
@@ -75,7 +104,7 @@ describe('checkCase on random valid cases', () => {
 	it('doubling the temporary loads halves the collapse factor', () => {
 		fc.assert(
 			fc.property(caseFile, (c) => {
-				const doubled = { ...c, loads: c.loads.map((l: any) => (l.action !== 'temporary' ? l : l.kind === 'linear' ? { ...l, start: 2 * l.start, end: 2 * l.end } : { ...l, value: 2 * l.value })) };
+				const doubled = { ...c, loads: c.loads.map(doubleTemporary) };
 				const a = checkCase(c);
 				const b = checkCase(doubled);
 				if (!a.ok || !b.ok || a.report.collapse.appliesTo !== 'temporary') return;

@@ -15,7 +15,16 @@ const expectRel = (actual: number | null | undefined, expected: number, rel = 1e
 };
 
 /** Simply supported beam of given Mp (kNm) and span (m) with the given loads (file units). */
-function simpleCase(o: { mp?: number; L?: number; loads: unknown[]; factors?: object; section?: object; grade?: string }) {
+interface SimpleCase {
+	mp?: number;
+	L?: number;
+	loads: unknown[];
+	factors?: object;
+	section?: object;
+	grade?: string;
+}
+
+function simpleCase(o: SimpleCase) {
 	return {
 		format: 'hingepoint.case',
 		version: 1,
@@ -37,8 +46,19 @@ function run(json: unknown, curve = false): CheckReport {
 	return out.report;
 }
 
-const point = (x: number, value: number, action = 'temporary') => ({ kind: 'point', x, value, action });
-const udl = (value: number, action: string, from = 0, to = 6) => ({ kind: 'uniform', from, to, value, action });
+const point = (x: number, value: number, action = 'temporary') => ({
+	kind: 'point',
+	x,
+	value,
+	action
+});
+const udl = (value: number, action: string, from = 0, to = 6) => ({
+	kind: 'uniform',
+	from,
+	to,
+	value,
+	action
+});
 
 describe('checkCase: plastic collapse', () => {
 	it('central point load on a simply supported span: λ = 4Mp/(LW) (Neal, virtual work)', () => {
@@ -53,14 +73,16 @@ describe('checkCase: plastic collapse', () => {
 	});
 
 	it('γM0 divides a given Mp like any other resistance (EN 1993-1-1 6.2.5)', () => {
-		const r = run(simpleCase({ mp: 100, loads: [point(3, 10)], factors: { temporary: 1, gammaM0: 1.1 } }));
+		const factors = { temporary: 1, gammaM0: 1.1 };
+		const r = run(simpleCase({ mp: 100, loads: [point(3, 10)], factors }));
 		expectRel(r.mpRd[0], 100 / 1.1);
 		expectRel(r.collapse.loadFactor, (4 * 100) / 1.1 / 6 / 10);
 	});
 
 	it('fixed UDL held, variable central load: Q = (4Mp/L − gL/2)/γT (Neal; fixed loads not scaled)', () => {
 		const [Mp, L, g, gT] = [100, 6, 5, 1.5];
-		const r = run(simpleCase({ mp: Mp, loads: [udl(g, 'permanent'), point(3, 1)], factors: { permanent: 1, temporary: gT } }));
+		const factors = { permanent: 1, temporary: gT };
+		const r = run(simpleCase({ mp: Mp, loads: [udl(g, 'permanent'), point(3, 1)], factors }));
 		expectRel(r.temporaryCapacity!.loads[0].capacity, ((4 * Mp) / L - (g * L) / 2) / gT);
 	});
 
@@ -83,7 +105,8 @@ describe('checkCase: plastic collapse', () => {
 });
 
 describe('checkCase: section, grade and elastic results', () => {
-	const ub = simpleCase({ section: { designation: 'UB 305x165x40' }, grade: 'S275', loads: [udl(4, 'permanent'), point(3, 10)] });
+	const section = { designation: 'UB 305x165x40' };
+	const ub = simpleCase({ section, grade: 'S275', loads: [udl(4, 'permanent'), point(3, 10)] });
 
 	it('Mp,Rd = Wpl,y·fy/γM0 with fy for the flange thickness (EN 1993-1-1 6.2.5; EN 10025-2 Table 7)', () => {
 		const r = run(ub);
@@ -97,14 +120,15 @@ describe('checkCase: section, grade and elastic results', () => {
 		const r = run(ub);
 		const EI = E_STEEL * r.section.props!.Iy;
 		const [w, W, L] = [4, 10_000, 6000];
-		expectRel(r.elastic.maxDeflection!.total.value, (5 * w * L ** 4) / (384 * EI) + (W * L ** 3) / (48 * EI), 1e-9);
+		const total = (5 * w * L ** 4) / (384 * EI) + (W * L ** 3) / (48 * EI);
+		expectRel(r.elastic.maxDeflection!.total.value, total, 1e-9);
 		expectRel(r.elastic.maxDeflection!.temporary!.value, (W * L ** 3) / (48 * EI), 1e-9);
 	});
 
 	it('first hinge equals collapse in a statically determinate beam; first yield is lower by Wel/Wpl', () => {
 		// Determinate beam, loads in proportion: M ∝ λ everywhere, so first hinge = collapse
 		// (simple plastic theory, Neal) and first yield = collapse × Wel/Wpl when only λ-loads act.
-		const r = run(simpleCase({ section: { designation: 'UB 305x165x40' }, grade: 'S275', loads: [point(3, 10)] }));
+		const r = run(simpleCase({ section, grade: 'S275', loads: [point(3, 10)] }));
 		expectRel(r.elastic.firstHinge!.factor, r.collapse.loadFactor!, 1e-9);
 		const { Wely, Wply } = r.section.props!;
 		expectRel(r.elastic.firstYield!.factor, (r.collapse.loadFactor! * Wely) / Wply, 1e-9);

@@ -12,7 +12,12 @@ function makeCase(patch: (c: Record<string, any>) => void = () => {}): Record<st
 		format: CASE_FORMAT,
 		version: CASE_VERSION,
 		title: 'DEMO — invented',
-		beam: { spans: [6.0], supports: ['pin', 'pin'], section: { designation: 'UB 305x165x40' }, grade: 'S275' },
+		beam: {
+			spans: [6.0],
+			supports: ['pin', 'pin'],
+			section: { designation: 'UB 305x165x40' },
+			grade: 'S275'
+		},
 		loads: [
 			{ kind: 'point', x: 2.0, value: 12.5, action: 'temporary' },
 			{ kind: 'uniform', from: 0, to: 6, value: 4.0, action: 'permanent' },
@@ -34,10 +39,12 @@ describe('parseCase: valid files', () => {
 		expect(r.ok).toBe(true);
 		if (!r.ok) return;
 		expect(r.value.beam).toEqual({ spans: [6000], supports: ['pin', 'pin'], joints: [] });
-		expect(r.value.loads[0]).toEqual({ kind: 'point', x: 2000, value: 12_500, action: 'temporary' });
+		const [p, u, l] = r.value.loads;
+		expect(p).toEqual({ kind: 'point', x: 2000, value: 12_500, action: 'temporary' });
 		// 1 kN/m = 1000 N / 1000 mm = 1 N/mm (definition of the units).
-		expect(r.value.loads[1]).toEqual({ kind: 'uniform', from: 0, to: 6000, value: 4, action: 'permanent' });
-		expect(r.value.loads[2]).toEqual({ kind: 'linear', from: 1000, to: 3000, start: 0, end: 5, action: 'imposed' });
+		expect(u).toEqual({ kind: 'uniform', from: 0, to: 6000, value: 4, action: 'permanent' });
+		const linear = { kind: 'linear', from: 1000, to: 3000, start: 0, end: 5 };
+		expect(l).toEqual({ ...linear, action: 'imposed' });
 	});
 
 	it('defaults: joints continuous, EN 1990 6.10 recommended factors, self-weight on', () => {
@@ -49,8 +56,10 @@ describe('parseCase: valid files', () => {
 		);
 		if (!r.ok) throw new Error(r.issues[0].message);
 		expect(r.value.beam.joints).toEqual(['continuous']);
-		// EN 1990 Table A1.2(B): γG,sup 1.35, γQ 1.5; EN 1993-1-1 6.1 NOTE 2B: γM0 = γM1 = 1.0 (from memory).
-		expect(r.value.factors).toEqual({ permanent: 1.35, imposed: 1.5, temporary: 1.5, gammaM0: 1, gammaM1: 1 });
+		// EN 1990 Table A1.2(B): γG,sup 1.35, γQ 1.5; EN 1993-1-1 6.1 NOTE 2B: γM0 = γM1 = 1.0
+		// (recommended values, from memory).
+		const recommended = { permanent: 1.35, imposed: 1.5, temporary: 1.5, gammaM0: 1, gammaM1: 1 };
+		expect(r.value.factors).toEqual(recommended);
 		expect(r.value.selfWeight).toBe(true);
 	});
 
@@ -77,7 +86,9 @@ describe('parseCase: valid files', () => {
 		expect(bare.value.grades).toEqual([null]);
 		expect(bare.value.selfWeightLoads).toEqual([]);
 		expect(bare.value.selfWeightMissing).toEqual([0]);
-		const heavy = parseCase(makeCase((c) => ((c.beam.section = { mp: 150, mass: 40 }), delete c.beam.grade)));
+		const heavy = parseCase(
+			makeCase((c) => ((c.beam.section = { mp: 150, mass: 40 }), delete c.beam.grade))
+		);
 		expect(heavy.ok && heavy.value.selfWeightLoads.length).toBe(1);
 	});
 
@@ -100,7 +111,8 @@ describe('parseCase: valid files', () => {
 	it('passes the other check settings through without unknown-key warnings', () => {
 		const r = parseCase(
 			makeCase((c) => {
-				Object.assign(c, { deflectionLimitTotal: 250, deflectionGoverns: true, eta: 1.2, place: 'Bay 3' });
+				const settings = { deflectionLimitTotal: 250, deflectionGoverns: true, eta: 1.2 };
+				Object.assign(c, { ...settings, place: 'Bay 3' });
 				Object.assign(c.beam, { bearingLoads: 50, gradeConfirmed: true });
 				c.factors = { permanentFavourable: 1.0 };
 			})
@@ -151,7 +163,11 @@ describe('parseCase: valid files', () => {
 
 describe('parseCase: every problem names its field', () => {
 	it.each([
-		['negative span', (c: any) => (c.beam.spans = [6, -2]) && (c.beam.supports = ['pin', 'pin', 'pin']), 'beam.spans[1]'],
+		[
+			'negative span',
+			(c: any) => ((c.beam.spans = [6, -2]), (c.beam.supports = ['pin', 'pin', 'pin'])),
+			'beam.spans[1]'
+		],
 		['NaN span', (c: any) => (c.beam.spans = [Number.NaN]), 'beam.spans[0]'],
 		['span given as text', (c: any) => (c.beam.spans = ['6']), 'beam.spans[0]'],
 		['support list of wrong length', (c: any) => (c.beam.supports = ['pin']), 'beam.supports'],
@@ -166,15 +182,23 @@ describe('parseCase: every problem names its field', () => {
 		['fy of zero', (c: any) => (c.beam.grade = { fy: 0 }), 'beam.grade.fy'],
 		['cast iron', (c: any) => (c.beam.grade = 'cast-iron'), 'beam.grade'],
 		['no grade for a steel section', (c: any) => delete c.beam.grade, 'beam.grade'],
-		['unknown designation', (c: any) => (c.beam.section = { designation: 'UB 305x165x41' }), 'beam.section.designation'],
-		['flange thicker than half the depth', (c: any) => (c.beam.section = { shape: 'I', h: 100, b: 100, tw: 6, tf: 60, r: 5 }), 'beam.section.tf'],
+		[
+			'unknown designation',
+			(c: any) => (c.beam.section = { designation: 'UB 305x165x41' }),
+			'beam.section.designation'
+		],
+		[
+			'flange thicker than half the depth',
+			(c: any) => (c.beam.section = { shape: 'I', h: 100, b: 100, tw: 6, tf: 60, r: 5 }),
+			'beam.section.tf'
+		],
 		['unknown shape', (c: any) => (c.beam.section = { shape: 'Z', h: 100 }), 'beam.section.shape'],
 		['negative section loss', (c: any) => (c.beam.sectionLoss = -1), 'beam.sectionLoss'],
 		['negative factor', (c: any) => (c.factors = { permanent: -1 }), 'factors.permanent'],
 		['wrong format tag', (c: any) => (c.format = 'beam'), 'format'],
 		['newer version', (c: any) => (c.version = 2), 'version'],
 		['a mechanism', (c: any) => (c.beam.supports = ['pin', 'free']), 'beam.supports'],
-		['deflection setting not true/false', (c: any) => (c.deflectionGoverns = 'yes'), 'deflectionGoverns'],
+		['flag not a boolean', (c: any) => (c.deflectionGoverns = 'yes'), 'deflectionGoverns'],
 		['negative bearing under loads', (c: any) => (c.beam.bearingLoads = -5), 'beam.bearingLoads']
 	])('%s', (_name, patch, path) => {
 		expect(paths(makeCase(patch))).toContain(path);
@@ -184,7 +208,10 @@ describe('parseCase: every problem names its field', () => {
 		const r = makeCase((c) => {
 			c.beam.spans = [5, 7];
 			c.beam.supports = ['pin', 'pin', 'pin'];
-			c.beam.section = [{ designation: 'UB 305x165x40' }, { shape: 'I', h: 300, b: 150, tw: 7, tf: 0, r: 8 }];
+			c.beam.section = [
+				{ designation: 'UB 305x165x40' },
+				{ shape: 'I', h: 300, b: 150, tw: 7, tf: 0, r: 8 }
+			];
 		});
 		expect(paths(r)).toContain('beam.section[1].tf');
 	});
@@ -195,7 +222,9 @@ describe('parseCase: every problem names its field', () => {
 	});
 
 	it('reports all problems at once, not only the first', () => {
-		const p = paths(makeCase((c) => ((c.beam.spans = [-6]), (c.loads[0].value = null), (c.format = 'x'))));
+		const p = paths(
+			makeCase((c) => ((c.beam.spans = [-6]), (c.loads[0].value = null), (c.format = 'x')))
+		);
 		expect(p).toEqual(expect.arrayContaining(['beam.spans[0]', 'loads[0].value', 'format']));
 	});
 

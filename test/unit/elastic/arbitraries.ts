@@ -44,11 +44,18 @@ export const loadsOn = (total: number): fc.Arbitrary<Load[]> => {
 		.tuple(pos, pos)
 		.filter(([a, b]) => a !== b)
 		.map(([a, b]) => [Math.min(a, b), Math.max(a, b)]);
-	const uniform = fc
-		.record({ r: range, v: value })
-		.map(({ r, v }): Load => ({ kind: 'uniform', from: r[0], to: r[1], value: v, action: 'imposed' }));
+	const uniform = fc.record({ r: range, v: value }).map(
+		({ r, v }): Load => ({ kind: 'uniform', from: r[0], to: r[1], value: v, action: 'imposed' })
+	);
 	const linear = fc.record({ r: range, s: value, e: value }).map(
-		({ r, s, e }): Load => ({ kind: 'linear', from: r[0], to: r[1], start: s, end: e, action: 'permanent' })
+		({ r, s, e }): Load => ({
+			kind: 'linear',
+			from: r[0],
+			to: r[1],
+			start: s,
+			end: e,
+			action: 'permanent'
+		})
 	);
 	return fc.array(fc.oneof(pointLoad, uniform, linear), { minLength: 1, maxLength: 4 });
 };
@@ -65,7 +72,7 @@ export function sumLoads(loads: Load[]): { force: number; moment: number } {
 		}
 		const [a, b] = l.kind === 'uniform' ? [l.value, l.value] : [l.start, l.end];
 		const len = l.to - l.from;
-		// Trapezoid: resultant (a + b)/2·len at from + len(a + 2b)/(3(a + b)); written without division.
+		// Trapezoid: resultant (a + b)/2·len at from + len(a + 2b)/(3(a + b)), here without division.
 		force += ((a + b) / 2) * len;
 		moment += ((a + b) / 2) * len * l.from + (len * len * (a + 2 * b)) / 6;
 	}
