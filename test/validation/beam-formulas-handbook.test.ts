@@ -2,8 +2,8 @@
  * Elastic beam formulas as tabulated in the standard handbooks: W.C. Young & R.G. Budynas,
  * "Roark's Formulas for Stress and Strain" (7th ed.), Table 8.1 (shear, moment and deflection
  * of straight beams), and the AISC Steel Construction Manual, "Beam Diagrams and Formulas"
- * (Table 3-23). Table numbers are from memory; every closed form below is also re-derivable by
- * double integration of M/EI and is computed inside the test. The three-moment equation is
+ * (Table 3-23). Table and case numbers are from memory; every closed form below is also
+ * re-derivable by double integration of M/EI and is computed inside the test. The three-moment equation is
  * Clapeyron's (e.g. S. Timoshenko & D.H. Young, "Theory of Structures", from memory).
  * Inputs are invented round numbers.
  */

@@ -37,15 +37,15 @@ export function reportTemporaryCapacity(
 	return { loads, total: lambda * enteredTotal, enteredTotal };
 }
 
-/**
- * Capacity curve in output units. The solver's P_max is a design value; dividing by the
- * temporary-load factor gives the characteristic point load that may be placed there.
- */
 /** The larger in size of the two ends of a linear load (its peak intensity). */
 function peakOf(start: number, end: number): number {
 	return Math.abs(end) > Math.abs(start) ? end : start;
 }
 
+/**
+ * Capacity curve in output units. The solver's P_max is a design value; dividing by the
+ * temporary-load factor gives the characteristic point load that may be placed there.
+ */
 export function reportCapacityCurve(
 	curve: CapacityCurve,
 	gammaTemporary: number
