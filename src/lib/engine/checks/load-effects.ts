@@ -17,9 +17,23 @@ export interface Effect {
 	w: number;
 }
 
+/** One characteristic load group and its analysis. */
+export interface LoadGroup {
+	/** `permanent`, `imposed` (with its span) or `temporary`. */
+	kind: 'permanent' | 'imposed' | 'temporary';
+	/** Characteristic loads of the group (imposed loads cut at the nodes). */
+	loads: Load[];
+	/** Effect of the group's characteristic loads at x. */
+	at(x: number, side: Side): Effect;
+	/** Weight of the group in an arrangement (its partial factor, 0 when patterned off). */
+	weight(arrangement: LoadArrangement): number;
+}
+
 /** Analysed groups, plus readers for one arrangement. */
 export interface LoadEffects {
 	nodes: number[];
+	/** Groups with loads; the fixed ones first, the temporary group (if any) last. */
+	groups: LoadGroup[];
 	/** Effect of an arrangement's fixed loads at x. */
 	fixedAt(arrangement: LoadArrangement, x: number, side?: Side): Effect;
 	/** Effect of an arrangement's factored temporary loads at x (× the multiplier later). */
@@ -33,9 +47,8 @@ export interface LoadEffects {
 /**
  * Analyses each load group once.
  * @param o.EI bending stiffness per span, N·mm²
- * @returns null when the beam is a mechanism (input validation reports that first)
  */
-export function analyseLoadGroups(o: { beam: BeamLine; EI: number[]; loads: Load[] }): LoadEffects | null {
+export function analyseLoadGroups(o: { beam: BeamLine; EI: number[]; loads: Load[] }): LoadEffects {
 	const nodes = [0];
 	for (const s of o.beam.spans) nodes.push(nodes[nodes.length - 1] + s);
 	const run = (loads: Load[]): ElasticResult | null => {
@@ -49,39 +62,51 @@ export function analyseLoadGroups(o: { beam: BeamLine; EI: number[]; loads: Load
 	for (const l of byAction('imposed')) {
 		for (const piece of splitLoadAtNodes(l, nodes)) imposedBySpan[findSpanIndex(piece, nodes)].push(piece);
 	}
-	const permanent = run(byAction('permanent'));
-	const imposed = imposedBySpan.map(run);
-	const temporary = run(byAction('temporary'));
-	const zero: Effect = { M: 0, V: 0, w: 0 };
-	const read = (r: ElasticResult | null, x: number, side: Side): Effect => {
-		if (!r) return zero;
-		const s = r.at(x, side);
-		return { M: s.M, V: s.V, w: s.w };
+	const group = (kind: LoadGroup['kind'], loads: Load[], weight: LoadGroup['weight']) => {
+		const result = run(loads);
+		if (!result) return null;
+		// The checks read the same points many times (every arrangement, every multiplier tried).
+		const cache = new Map<string, Effect>();
+		const at = (x: number, side: Side): Effect => {
+			const key = `${x}|${side}`;
+			let e = cache.get(key);
+			if (!e) {
+				const s = result.at(x, side);
+				cache.set(key, (e = { M: s.M, V: s.V, w: s.w }));
+			}
+			return e;
+		};
+		return { kind, loads, at, weight, result };
 	};
-	const add = (a: Effect, b: Effect, f: number): Effect => ({
-		M: a.M + f * b.M,
-		V: a.V + f * b.V,
-		w: a.w + f * b.w
-	});
-	const reactionsOf = (r: ElasticResult | null) => (r ? r.reactions.map((n) => n.force) : nodes.map(() => 0));
+	const fixed = [
+		group('permanent', byAction('permanent'), (a) => a.gammaG),
+		...imposedBySpan.map((loads, i) => group('imposed', loads, (a) => a.imposedBySpan[i]))
+	].filter((g) => g !== null);
+	const temporary = group('temporary', byAction('temporary'), (a) => a.gammaTemporary);
+	const combine = (list: typeof fixed, arr: LoadArrangement, x: number, side: Side): Effect => {
+		const e = { M: 0, V: 0, w: 0 };
+		for (const g of list) {
+			const f = g.weight(arr);
+			if (f === 0) continue;
+			const v = g.at(x, side);
+			e.M += f * v.M;
+			e.V += f * v.V;
+			e.w += f * v.w;
+		}
+		return e;
+	};
+	const reactionsOf = (list: typeof fixed, arr: LoadArrangement) => {
+		const out = nodes.map(() => 0);
+		for (const g of list) g.result.reactions.forEach((r, n) => (out[n] += g.weight(arr) * r.force));
+		return out;
+	};
+	const variable = temporary ? [temporary] : [];
 	return {
 		nodes,
-		fixedAt(arr, x, side = 'right') {
-			let e = add(zero, read(permanent, x, side), arr.gammaG);
-			imposed.forEach((r, i) => {
-				if (arr.imposedBySpan[i] > 0) e = add(e, read(r, x, side), arr.imposedBySpan[i]);
-			});
-			return e;
-		},
-		variableAt: (arr, x, side = 'right') => add(zero, read(temporary, x, side), arr.gammaTemporary),
-		reactions(arr) {
-			const fixed = reactionsOf(permanent).map((v) => v * arr.gammaG);
-			imposed.forEach((r, i) => {
-				const f = arr.imposedBySpan[i];
-				if (f > 0) reactionsOf(r).forEach((v, n) => (fixed[n] += f * v));
-			});
-			return { fixed, variable: reactionsOf(temporary).map((v) => v * arr.gammaTemporary) };
-		},
-		characteristic: { temporary, all: run(o.loads) }
+		groups: [...fixed, ...variable],
+		fixedAt: (arr, x, side = 'right') => combine(fixed, arr, x, side),
+		variableAt: (arr, x, side = 'right') => combine(variable, arr, x, side),
+		reactions: (arr) => ({ fixed: reactionsOf(fixed, arr), variable: reactionsOf(variable, arr) }),
+		characteristic: { temporary: temporary?.result ?? null, all: run(o.loads) }
 	};
 }

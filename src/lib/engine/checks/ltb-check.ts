@@ -7,9 +7,7 @@
 import type { Load } from '../model/types';
 import { E_STEEL, G_STEEL } from '../units';
 import type { CheckContext } from './context';
-import { applyArrangement } from './factor-loads';
-import type { LoadArrangement } from './load-arrangements';
-import { computeCriticalMoment } from './mcr';
+import { prepareCriticalMoment } from './mcr';
 import { spanOf } from './plastic-bending';
 import { computeLoadHeight, type LoadHeight, type RestraintSegment } from './restraint';
 import type { LtbSegment, SegmentLoad } from './segment-moment';
@@ -29,12 +27,6 @@ export interface LtbCheckOptions {
 export function checkBeamLtb(ctx: CheckContext, o: LtbCheckOptions): { checks: CheckResult[]; outOfScope: string[] } {
 	const checks: CheckResult[] = [];
 	const outOfScope: string[] = [];
-	const designLoads = new Map<LoadArrangement, ReturnType<typeof applyArrangement>>();
-	const loadsOf = (arr: LoadArrangement) => {
-		let d = designLoads.get(arr);
-		if (!d) designLoads.set(arr, (d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement: arr })));
-		return d;
-	};
 	o.segments.forEach((seg, index) => {
 		const m = ctx.members[spanOf(ctx.nodes, (seg.from + seg.to) / 2)];
 		if (seg.freeEnd) {
@@ -44,15 +36,22 @@ export function checkBeamLtb(ctx: CheckContext, o: LtbCheckOptions): { checks: C
 		if (!m.propsKnown) return;
 		const Wy = o.elasticModulus ? m.Wel : m.Wpl;
 		const zg = computeLoadHeight(o.loadHeight, m.h);
-		const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
-			const d = loadsOf(arr);
-			const segment: LtbSegment = {
+		// One part per load group: any arrangement and multiplier is a weighted sum of them.
+		const groups = ctx.effects.groups;
+		const prepared = prepareCriticalMoment({
+			parts: groups.map((g) => ({
 				length: seg.to - seg.from,
-				momentStart: ctx.effects.fixedAt(arr, seg.from, 'right').M + t * ctx.effects.variableAt(arr, seg.from, 'right').M,
-				momentEnd: ctx.effects.fixedAt(arr, seg.to, 'left').M + t * ctx.effects.variableAt(arr, seg.to, 'left').M,
-				loads: [...clipLoads(d.fixed, seg, 1), ...clipLoads(d.variable, seg, t)]
-			};
-			const cr = computeCriticalMoment({ segment, EIz: E_STEEL * m.Iz, GIt: G_STEEL * m.It, EIw: E_STEEL * m.Iw, zg });
+				momentStart: g.at(seg.from, 'right').M,
+				momentEnd: g.at(seg.to, 'left').M,
+				loads: clipLoads(g.loads, seg, 1)
+			})),
+			EIz: E_STEEL * m.Iz,
+			GIt: G_STEEL * m.It,
+			EIw: E_STEEL * m.Iw,
+			zg
+		});
+		const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
+			const cr = prepared.at(groups.map((g) => g.weight(arr) * (g.kind === 'temporary' ? t : 1)));
 			if (cr === null) return { utilisation: 0, detail: null };
 			const r = ctx.basis.computeLtbResistance({ shape: m.shape, h: m.h, b: m.b, Wy, fy: m.fy, mcr: cr.mcr, gammaM1: ctx.gammaM1 });
 			return { utilisation: cr.mMax / r.mbRd, detail: { ...r, mcr: cr.mcr, mEd: cr.mMax } };

@@ -52,16 +52,32 @@ const GAUSS4 = [
  *   EIz: 210e3 * 764e4, GIt: 81e3 * 14.7e4, EIw: 210e3 * 0.164e12, zg: 0 })?.mcr
  */
 export function computeCriticalMoment(input: CriticalMomentInput): CriticalMoment | null {
-	const { segment: seg, EIz, GIt, EIw, zg } = input;
+	const { segment, ...rest } = input;
+	return prepareCriticalMoment({ ...rest, parts: [segment] }).at([1]);
+}
+
+/** Inputs of {@link prepareCriticalMoment}: parts of one segment whose sum is the loading. */
+export interface CriticalMomentParts extends Omit<CriticalMomentInput, 'segment'> {
+	/** Loadings of the same segment (same length); the buckling state is Σ wᵢ·partᵢ. */
+	parts: LtbSegment[];
+}
+
+/** Mcr of any weighted sum of the prepared parts. */
+export interface PreparedCriticalMoment {
+	at(weights: number[]): CriticalMoment | null;
+}
+
+/**
+ * Assembles the energy matrices of each part once; moments and load-height terms are linear in
+ * the loads, so any weighted sum (fixed loads + t × temporary loads) costs one eigenvalue solve.
+ */
+export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriticalMoment {
+	const { parts, EIz, GIt, EIw, zg } = input;
 	const N = input.terms ?? 12;
-	const L = seg.length;
-	const points = listQuadraturePoints(seg, N);
-	let mMax = 0;
-	for (const p of points) mMax = Math.max(mMax, Math.abs(p.m));
-	for (const e of listSubintervalEdges(seg, N)) {
-		mMax = Math.max(mMax, Math.abs(computeSegmentMoment(seg, e)));
-	}
-	if (!(mMax > 0)) return null;
+	const L = parts[0].length;
+	const all: LtbSegment = { length: L, momentStart: 0, momentEnd: 0, loads: parts.flatMap((p) => p.loads) };
+	const edges = listSubintervalEdges(all, N);
+	const points = listQuadraturePoints(edges);
 	const k = Array.from({ length: N }, (_, i) => ((i + 1) * Math.PI) / L);
 	// Diagonal stiffness (orthogonality of sines: ∫ sₘsₙ = L/2 δₘₙ).
 	const d = [
@@ -69,43 +85,60 @@ export function computeCriticalMoment(input: CriticalMomentInput): CriticalMomen
 		...k.map((kn) => ((GIt * kn ** 2 + EIw * kn ** 4) * L) / 2)
 	];
 	const n2 = 2 * N;
-	const g = new Float64Array(n2 * n2);
-	const sines = new Float64Array(N);
-	const addLoadHeight = (x: number, weight: number) => {
-		for (let i = 0; i < N; i++) sines[i] = Math.sin(k[i] * x);
-		for (let i = 0; i < N; i++)
-			for (let j = 0; j < N; j++) g[(N + i) * n2 + N + j] += weight * sines[i] * sines[j];
-	};
-	for (const p of points) {
-		for (let i = 0; i < N; i++) sines[i] = Math.sin(k[i] * p.x);
-		for (let i = 0; i < N; i++) {
-			for (let j = 0; j < N; j++) {
-				// vᵀGv = −2∫M u''φ: u'' brings −kᵢ² on the a-terms.
-				const v = p.w * p.m * k[i] ** 2 * sines[i] * sines[j];
-				g[i * n2 + N + j] += v;
-				g[(N + j) * n2 + i] += v;
+	const sines = points.map((p) => k.map((kn) => Math.sin(kn * p.x)));
+	const assembled = parts.map((seg) => {
+		const g = new Float64Array(n2 * n2);
+		const addLoadHeight = (s: number[], weight: number) => {
+			for (let i = 0; i < N; i++)
+				for (let j = 0; j < N; j++) g[(N + i) * n2 + N + j] += weight * s[i] * s[j];
+		};
+		points.forEach((p, q) => {
+			const m = computeSegmentMoment(seg, p.x);
+			const s = sines[q];
+			for (let i = 0; i < N; i++) {
+				for (let j = 0; j < N; j++) {
+					// vᵀGv = −2∫M u''φ: u'' brings −kᵢ² on the a-terms.
+					const v = p.w * m * k[i] ** 2 * s[i] * s[j];
+					g[i * n2 + N + j] += v;
+					g[(N + j) * n2 + i] += v;
+				}
 			}
+			const q0 = loadAt(seg, p.x);
+			if (zg !== 0 && q0 !== 0) addLoadHeight(s, p.w * q0 * zg);
+		});
+		for (const load of seg.loads) {
+			if (zg !== 0 && load.kind === 'point') addLoadHeight(k.map((kn) => Math.sin(kn * load.x)), load.value * zg);
 		}
-		if (zg !== 0 && p.q !== 0) addLoadHeight(p.x, p.w * p.q * zg);
-	}
-	if (zg !== 0) {
-		for (const load of seg.loads) if (load.kind === 'point') addLoadHeight(load.x, load.value * zg);
-	}
-	// Symmetric form D^-½ G D^-½; its largest eigenvalue μ is 1/λcr.
-	for (let i = 0; i < n2; i++)
-		for (let j = 0; j < n2; j++) g[i * n2 + j] /= Math.sqrt(d[i] * d[j]);
-	const mu = computeSymmetricEigenvalues(g, n2).at(-1) ?? 0;
-	if (!(mu > 0)) return null;
-	const factor = 1 / mu;
-	return { mcr: factor * mMax, factor, mMax };
+		// Symmetric form D^-½ G D^-½; its largest eigenvalue μ is 1/λcr.
+		for (let i = 0; i < n2; i++) for (let j = 0; j < n2; j++) g[i * n2 + j] /= Math.sqrt(d[i] * d[j]);
+		const samples = [...points.map((p) => p.x), ...edges].map((x) => computeSegmentMoment(seg, x));
+		return { g, samples };
+	});
+	return {
+		at(weights) {
+			const g = new Float64Array(n2 * n2);
+			let mMax = 0;
+			const count = assembled[0].samples.length;
+			for (let q = 0; q < count; q++) {
+				let m = 0;
+				assembled.forEach((a, i) => (m += weights[i] * a.samples[q]));
+				mMax = Math.max(mMax, Math.abs(m));
+			}
+			if (!(mMax > 0)) return null;
+			assembled.forEach((a, i) => {
+				if (weights[i] !== 0) for (let e = 0; e < g.length; e++) g[e] += weights[i] * a.g[e];
+			});
+			const mu = computeSymmetricEigenvalues(g, n2).at(-1) ?? 0;
+			if (!(mu > 0)) return null;
+			const factor = 1 / mu;
+			return { mcr: factor * mMax, factor, mMax };
+		}
+	};
 }
 
 interface QuadraturePoint {
 	x: number;
 	w: number;
-	/** Moment, N·mm, and distributed load, N/mm, at x. */
-	m: number;
-	q: number;
 }
 
 /**
@@ -131,16 +164,12 @@ function listSubintervalEdges(seg: LtbSegment, N: number): number[] {
 }
 
 /** Composite 4-point Gauss rule on the subintervals. */
-function listQuadraturePoints(seg: LtbSegment, N: number): QuadraturePoint[] {
-	const edges = listSubintervalEdges(seg, N);
+function listQuadraturePoints(edges: number[]): QuadraturePoint[] {
 	const out: QuadraturePoint[] = [];
 	for (let e = 1; e < edges.length; e++) {
 		const a = edges[e - 1];
 		const h = edges[e] - a;
-		for (const [t, w] of GAUSS4) {
-			const x = a + ((t + 1) * h) / 2;
-			out.push({ x, w: (w * h) / 2, m: computeSegmentMoment(seg, x), q: loadAt(seg, x) });
-		}
+		for (const [t, w] of GAUSS4) out.push({ x: a + ((t + 1) * h) / 2, w: (w * h) / 2 });
 	}
 	return out;
 }

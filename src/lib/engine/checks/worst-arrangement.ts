@@ -36,21 +36,32 @@ export function findWorstArrangement<T>(
 	arrangements: LoadArrangement[],
 	evaluate: ArrangementEvaluator<T>
 ): WorstArrangement<T> {
-	let worst: WorstArrangement<T> | null = null;
+	if (arrangements.length === 0) throw new Error('invariant: at least one load arrangement');
+	const first = arrangements.map((arrangement) => {
+		const one = evaluate(arrangement, 1);
+		const u0 = evaluate(arrangement, 0).utilisation;
+		const u1 = one.utilisation;
+		// Straight-line estimate of the root, only to decide the search order.
+		const estimate = u0 >= 1 ? 0 : u1 > u0 ? (1 - u0) / (u1 - u0) : Number.MAX_VALUE;
+		return { arrangement, one, u0, estimate };
+	});
+	let worst = first[0];
+	for (const f of first) if (f.one.utilisation > worst.one.utilisation) worst = f;
 	let multiplier: number | null = null;
-	let existing = 0;
-	for (const arrangement of arrangements) {
-		const atOne = evaluate(arrangement, 1);
-		existing = Math.max(existing, evaluate(arrangement, 0).utilisation);
+	for (const f of [...first].sort((a, b) => a.estimate - b.estimate)) {
+		// u does not fall once past 1, so u(best) < 1 means this root lies beyond the best one.
+		if (multiplier !== null && evaluate(f.arrangement, multiplier).utilisation < 1) continue;
 		const m = findMultiplierAtCapacity({
-			utilisation: (t) => evaluate(arrangement, t).utilisation,
+			utilisation: (t) => evaluate(f.arrangement, t).utilisation,
 			tolerance: TOLERANCE
 		});
 		if (m !== null && (multiplier === null || m < multiplier)) multiplier = m;
-		if (worst === null || atOne.utilisation > worst.utilisation) {
-			worst = { arrangement, utilisation: atOne.utilisation, utilisationExisting: 0, multiplier: null, detail: atOne.detail };
-		}
 	}
-	if (worst === null) throw new Error('invariant: at least one load arrangement');
-	return { ...worst, utilisationExisting: existing, multiplier };
+	return {
+		arrangement: worst.arrangement,
+		utilisation: worst.one.utilisation,
+		utilisationExisting: Math.max(...first.map((f) => f.u0)),
+		multiplier,
+		detail: worst.one.detail
+	};
 }
