@@ -9,7 +9,7 @@ import type { CheckContext } from './context';
 import type { ScopeDecision, ScopeInput } from './en1993/scope';
 import { checkHingeRestraint } from './hinge-restraint';
 import type { CollapseSummary } from './inputs';
-import { solvePlasticArrangement } from './plastic-bending';
+import { solvePlasticArrangement, type PlasticArrangement } from './plastic-bending';
 import type { RestraintSegment } from './restraint';
 import type { CheckResult } from './types';
 
@@ -61,7 +61,7 @@ export function runPlasticRoute(
 			: { ok: true };
 	const scope = ctx.basis.decideRoute({
 		...o.scopeBase,
-		collapseCertified: all.every((p) => p.certified),
+		collapseCertified: isCertified(all, g),
 		hingesRestrained: restraint.ok,
 		hingeRestraintNote: restraint.reason
 	});
@@ -77,4 +77,16 @@ export function runPlasticRoute(
 		},
 		bending: describePlasticBending(ctx, g)
 	};
+}
+
+/**
+ * The governing collapse must be certified; another arrangement whose bounds did not meet
+ * matters only if its lower bound could undercut the governing factor.
+ */
+function isCertified(all: PlasticArrangement[], g: PlasticArrangement): boolean {
+	if (!g.certified) return false;
+	const lambda = g.loadFactor;
+	return all.every(
+		(p) => p.certified || (lambda !== null && 'lowerBound' in p.result && p.result.lowerBound >= lambda)
+	);
 }
