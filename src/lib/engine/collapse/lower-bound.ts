@@ -48,8 +48,13 @@ export function solveStaticProgram(options: {
 	stations: Station[];
 	intervals: Interval[];
 	objective: StaticObjective;
+	/**
+	 * Largest excess over Mp left in the final field once λ has settled: rounding level (default)
+	 * when the field is the certificate, looser when only λ is wanted.
+	 */
+	fieldTolerance?: number;
 }): StaticSolution {
-	const { model, space, stations, intervals, objective } = options;
+	const { model, space, stations, intervals, objective, fieldTolerance = 1e-12 } = options;
 	const margin = objective === 'margin';
 	const points = seedStations(stations, intervals).map((s) => makePoint(model, space, s));
 	const d = space.basis.length;
@@ -85,7 +90,7 @@ export function solveStaticProgram(options: {
 		still =
 			Math.abs(objective - previous) <= 1e-15 * Math.max(1, Math.abs(objective)) ? still + 1 : 0;
 		previous = objective;
-		if ((still >= 2 && violation <= 1e-12) || still >= 40) return lastGood;
+		if ((still >= 2 && violation <= fieldTolerance) || still >= 40) return lastGood;
 		addNewPoints(points, peaks.near, limit, (s) => makePoint(model, space, s));
 		if (points.length === count) return lastGood;
 		for (let i = count; i < points.length; i++) addPoint(points[i]);

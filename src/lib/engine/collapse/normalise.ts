@@ -29,14 +29,29 @@ export function measureLoadSize(loads: Load[]): number {
 	return size;
 }
 
+/** Position on the unit-length beam; rounding past an end (validated to 1e-9) is clamped. */
+const clampUnit = (t: number) => Math.min(1, Math.max(0, t));
+
 function scaleLoad(load: Load, s: { length: number; force: number }): Load {
 	const L = s.length;
-	if (load.kind === 'point') return { ...load, x: load.x / L, value: load.value / s.force };
+	if (load.kind === 'point')
+		return { ...load, x: clampUnit(load.x / L), value: load.value / s.force };
 	const line = s.force / L;
 	if (load.kind === 'uniform')
-		return { ...load, from: load.from / L, to: load.to / L, value: load.value / line };
+		return {
+			...load,
+			from: clampUnit(load.from / L),
+			to: clampUnit(load.to / L),
+			value: load.value / line
+		};
 	const { start, end } = load;
-	return { ...load, from: load.from / L, to: load.to / L, start: start / line, end: end / line };
+	return {
+		...load,
+		from: clampUnit(load.from / L),
+		to: clampUnit(load.to / L),
+		start: start / line,
+		end: end / line
+	};
 }
 
 /** Returns the dimensionless problem and the scale to undo it. */

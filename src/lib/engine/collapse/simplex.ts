@@ -8,7 +8,6 @@
  */
 import { solveSquare } from './nullspace';
 import {
-	PRICE_TOL,
 	addRow,
 	createProgram,
 	iterate,
@@ -18,6 +17,9 @@ import {
 } from './simplex-tableau';
 
 export { addRow, createProgram, type LinearProgram };
+
+/** A row violated by more than this after a solve makes the tableau be rebuilt. */
+const VERIFY_TOL = 1e-12;
 
 /** Outcome of `solveProgram`. */
 export type LinearProgramResult =
@@ -49,12 +51,16 @@ export function solveProgram(lp: LinearProgram): LinearProgramResult {
 	const { d, T, basis } = lp;
 	if (lp.warm) {
 		let result = solvePhaseTwo(lp);
-		// Verify against the data; if rounding in the tableau hid a violated row, rebuild and go on.
-		for (let k = 0; k < 3 && result.status === 'optimal' && result.residual > PRICE_TOL; k++) {
+		// Verify against the data; if rounding in the tableau hid a violated row, rebuild and go
+		// on, keeping the most accurate answer (a rebuilt tableau of a near-singular basis can be worse).
+		let best = result;
+		for (let k = 0; k < 3 && result.status === 'optimal' && result.residual > VERIFY_TOL; k++) {
 			if (!reinvert(lp)) break;
 			result = solvePhaseTwo(lp);
+			if (result.status !== 'optimal') break;
+			if (best.status !== 'optimal' || result.residual < best.residual) best = result;
 		}
-		return result;
+		return best;
 	}
 	{
 		iterate(lp, 1);

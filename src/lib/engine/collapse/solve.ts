@@ -60,11 +60,12 @@ export function reportFixedLoadFailure(
 	};
 }
 
-function solveLambdaProgram(p: CollapseProblem) {
+function solveLambdaProgram(p: CollapseProblem, fieldTolerance?: number) {
 	const model = buildFieldModel(p);
 	const grid = buildStations(model, p.capacity);
 	const space = solveEquilibrium(model.E, model.f);
-	return { model, grid, sol: solveStaticProgram({ model, space, ...grid, objective: 'lambda' }) };
+	const sol = solveStaticProgram({ model, space, ...grid, objective: 'lambda', fieldTolerance });
+	return { model, grid, sol };
 }
 
 /**
@@ -72,7 +73,8 @@ function solveLambdaProgram(p: CollapseProblem) {
  * admissible: the converged static program's optimum, exact to rounding; null when unbounded.
  */
 export function solveLoadFactorOnly(p: CollapseProblem, scale: ProblemScale): number | null {
-	const { model, sol } = solveLambdaProgram(p);
+	// Only λ is wanted here, and λ settles long before the last rounding-level excess is gone.
+	const { model, sol } = solveLambdaProgram(p, 1e-9);
 	if (sol.status !== 'optimal') return null;
 	return Math.max(0, sol.z[model.lambdaIndex]) * scale.lambda;
 }

@@ -12,7 +12,9 @@ function error(path: string, code: string, message: string): InputIssue {
 }
 
 function checkLoad(load: Load, path: string, L: number): InputIssue[] {
-	const onBeam = (x: number) => Number.isFinite(x) && x >= 0 && x <= L;
+	// Positions converted from other units may pass the ends by rounding; the solver clamps them.
+	const slack = 1e-9 * L;
+	const onBeam = (x: number) => Number.isFinite(x) && x >= -slack && x <= L + slack;
 	if (load.kind === 'point') {
 		if (!onBeam(load.x))
 			return [error(`${path}.x`, 'load-off-beam', 'The load must sit on the beam.')];
