@@ -11,7 +11,7 @@ const AXE_TAGS = ['wcag2a', 'wcag2aa', 'wcag21aa', 'wcag22aa'];
 
 test('the demo check: result, drawings and notice at 360 px, no axe violations', async ({ page }) => {
 	await page.goto('/check');
-	await expect(page.getByTestId('load-factor')).toBeVisible();
+	await expect(page.getByTestId('verdict')).toBeVisible();
 	await expect(page.getByTestId('moment-diagram')).toBeVisible();
 	await page.screenshot({ path: 'test-results/screens/check-360.png', fullPage: true });
 	const scan = await new AxeBuilder({ page }).withTags(AXE_TAGS).analyze();

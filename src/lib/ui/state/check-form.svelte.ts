@@ -19,7 +19,8 @@ export interface FormDraft {
 
 /** How the form runs the engine and reports changes (for the draft). */
 export interface CheckFormOptions {
-	run: (c: CaseFile) => CheckOutcome;
+	/** Null while the engine is still loading; the form then stays pending. */
+	run: (c: CaseFile) => CheckOutcome | null;
 	onchange?: (draft: FormDraft) => void;
 	/** Quiet time after the last keystroke before the engine runs, ms. */
 	delay?: number;
@@ -182,7 +183,9 @@ export class CheckForm {
 			this.outcome = null;
 			return;
 		}
-		this.outcome = this.#options.run($state.snapshot(this.case) as CaseFile);
+		const outcome = this.#options.run($state.snapshot(this.case) as CaseFile);
+		this.pending = outcome === null;
+		if (outcome) this.outcome = outcome;
 	}
 
 	dispose(): void {

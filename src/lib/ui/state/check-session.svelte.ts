@@ -16,7 +16,9 @@ import { asCaseFile, asStoredCase, type CaseFile } from './case-file';
 import { CheckForm } from './check-form.svelte';
 import { createBlankCase, createDemoCase } from './demo-case';
 import { DraftKeeper, readDraft } from './draft-keeper';
-import { runCheck, ENGINE_VERSION } from './run-check';
+import { ENGINE_VERSION } from './engine-version';
+import { loadEngineTools, type EngineTools } from './engine-tools';
+import { runCheck } from './run-check';
 import { connectStore } from './store-connection';
 
 /** Where the form's case came from when the page opened. */
@@ -28,7 +30,12 @@ export type CheckSource = 'saved' | 'link' | 'draft' | 'demo' | 'blank';
  */
 export class CheckSession {
 	readonly drafts = new DraftKeeper();
-	readonly form = new CheckForm({ run: runCheck, onchange: (draft) => this.drafts.queue(draft) });
+	readonly form = new CheckForm({
+		run: (c) => (this.tools ? runCheck(this.tools.checkCase, c) : null),
+		onchange: (draft) => this.drafts.queue(draft)
+	});
+	/** The engine, once loaded. */
+	tools = $state.raw<EngineTools | null>(null);
 	record = $state.raw<CheckRecord | null>(null);
 	source = $state<CheckSource>('demo');
 	/** Plain message after open/save (e.g. a damaged link, storage refused). */
@@ -49,7 +56,8 @@ export class CheckSession {
 	}
 
 	async #open(url: URL, defaults: { settings: Settings; set: FactorSet }): Promise<void> {
-		const store = await connectStore();
+		const [store, tools] = await Promise.all([connectStore(), loadEngineTools()]);
+		this.tools = tools;
 		const draft = store ? await loadDraft(store) : null;
 		const restored = draft?.ok && draft.value ? readDraft(draft.value.form) : null;
 		const id = url.searchParams.get('id');

@@ -1,14 +1,12 @@
-import { checkCase, ENGINE_VERSION } from '$lib/engine';
 import type { CaseFile } from './case-file';
 import type { CheckOutcome, ReportView } from './check-outcome';
-
-export { ENGINE_VERSION };
+import type { EngineTools } from './engine-tools';
 
 /**
  * Runs the engine once on a plain (snapshot) case, with the capacity curve. A thrown error is a
  * broken invariant in the engine: it is shown plainly and never as a verdict.
  */
-export function runCheck(c: CaseFile): CheckOutcome {
+export function runCheck(checkCase: EngineTools['checkCase'], c: CaseFile): CheckOutcome {
 	try {
 		const result = checkCase(c, { curve: true });
 		if (!result.ok) return { state: 'issues', issues: result.issues };
