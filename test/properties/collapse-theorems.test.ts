@@ -50,13 +50,13 @@ function scaleLoad(l: LoadSpec, k: number): LoadSpec {
 }
 
 describe('static and kinematic theorems', () => {
-	it('the lower bound (admissible field) equals the upper bound (virtual work) within 1e-6', () => {
+	it('the lower bound (admissible field) equals the upper bound (virtual work) within 1e-9', () => {
 		fc.assert(
 			fc.property(arbitraryBeamSpec({ interiorFixed: true }), (spec) => {
 				const r = solveCollapse(makeProblem(spec));
 				if (r.status !== 'mechanism' && r.status !== 'not-certified') return;
 				expect(r.status).toBe('mechanism');
-				expect(r.gap).toBeLessThanOrEqual(1e-6);
+				expect(r.gap).toBeLessThanOrEqual(1e-9); // certified needs 1e-6; the solver aims at rounding
 				expect(r.lowerBound).toBeLessThanOrEqual(r.upperBound * (1 + 1e-9));
 				expect(relativeError(r.loadFactor, r.upperBound)).toBeLessThan(1e-6);
 				expect(r.equilibriumResidual).toBeLessThan(1e-9);

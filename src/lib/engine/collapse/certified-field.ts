@@ -4,11 +4,13 @@
  */
 import { assertFinite } from '../model/issue';
 import { computeEquilibriumResidual, computeLowerBound, computeUpperBound } from './certify';
+import { cleanField } from './clean-field';
 import { sampleDiagram, scaleDiagram } from './diagram';
 import type { StaticSolution } from './lower-bound';
 import { consolidateHinges, makeCompatible } from './hinge-set';
 import { findMovingSpans, nameMechanism, readHinges } from './mechanism';
 import type { ProblemScale } from './normalise';
+import type { SolutionSpace } from './nullspace';
 import { evaluateMoment, type FieldModel } from './statics';
 import type { Interval, Station } from './stations';
 import type { CollapseResult, Hinge } from './types';
@@ -25,19 +27,37 @@ export function certifyField(options: {
 	sol: Extract<StaticSolution, { status: 'optimal' }>;
 	fixedField: { z: number[]; slack: number };
 	scale: ProblemScale;
+	space: SolutionSpace;
 }): CollapseResult {
-	const { model, grid, sol, fixedField, scale } = options;
+	const { model, grid, sol, fixedField, scale, space } = options;
 	const lambdaN = Math.max(0, sol.z[model.lambdaIndex]);
-	const lower = computeLowerBound({ model, grid, z1: sol.z, lambda1: lambdaN, z0: fixedField.z });
 	const raw = readHinges(sol.points, sol.duals);
 	const merged = consolidateHinges({ model, z: sol.z, ...grid, raw });
 	const kinks = makeCompatible(model.beam, merged).filter((h) => h.rotation !== 0);
 	const { upperBound, displacement } = computeUpperBound({ model, hinges: kinks });
+	const spans = findMovingSpans(model.beam, displacement);
+	let lower = computeLowerBound({ model, grid, z1: sol.z, lambda1: lambdaN, z0: fixedField.z });
+	// Only when rounding left the bounds apart is a cleaner field worth another program.
+	if (lower < lambdaN * (1 - 1e-13)) {
+		const cleaned = cleanField({
+			model,
+			space,
+			grid,
+			points: sol.points,
+			lambda: lambdaN,
+			movingSpans: spans
+		});
+		const lambda1 = cleaned ? Math.max(0, cleaned[model.lambdaIndex]) : 0;
+		if (cleaned)
+			lower = Math.max(
+				lower,
+				computeLowerBound({ model, grid, z1: cleaned, lambda1, z0: fixedField.z })
+			);
+	}
 	const gap = Number.isFinite(upperBound)
 		? Math.abs(upperBound - lower) / Math.max(Math.abs(upperBound), 1e-300)
 		: 1;
 	const equilibriumResidual = computeEquilibriumResidual(model, sol.z);
-	const spans = findMovingSpans(model.beam, displacement);
 	const mechanism = nameMechanism(model.beam, kinks, spans);
 	const largest = Math.max(...kinks.map((h) => Math.abs(h.rotation)));
 	const hinges: Hinge[] = kinks.map((h) => ({

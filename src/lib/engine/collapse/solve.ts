@@ -65,7 +65,7 @@ function solveLambdaProgram(p: CollapseProblem, fieldTolerance?: number) {
 	const grid = buildStations(model, p.capacity);
 	const space = solveEquilibrium(model.E, model.f);
 	const sol = solveStaticProgram({ model, space, ...grid, objective: 'lambda', fieldTolerance });
-	return { model, grid, sol };
+	return { model, grid, sol, space };
 }
 
 /**
@@ -85,7 +85,7 @@ export function solveNormalised(
 	scale: ProblemScale,
 	fixedField: FixedLoadField
 ): CollapseResult {
-	const { model, grid, sol } = solveLambdaProgram(p);
+	const { model, grid, sol, space } = solveLambdaProgram(p);
 	if (sol.status === 'unbounded') {
 		return {
 			status: 'unbounded',
@@ -95,7 +95,7 @@ export function solveNormalised(
 	}
 	if (sol.status !== 'optimal')
 		throw new Error('invariant: static program infeasible although λ = 0 is admissible');
-	return certifyField({ model, grid, sol, fixedField, scale });
+	return certifyField({ model, grid, sol, fixedField, scale, space });
 }
 
 /**
