@@ -49,7 +49,8 @@ export function computeMechanismShape(input: MechanismInput): { x: number; v: nu
 	const v = findNullVector(rows, n);
 	if (!v) return null;
 	const peak = v.reduce((best, value) => (Math.abs(value) > Math.abs(best) ? value : best), 0);
-	return points.map((p, k) => ({ x: p.x, v: v[k] / peak }));
+	// Fold −0 into 0 so a held point reads as exactly still.
+	return points.map((p, k) => ({ x: p.x, v: v[k] / peak || 0 }));
 }
 
 function collectKeyPoints(input: MechanismInput): KeyPoint[] {
