@@ -17,17 +17,19 @@ import type { CheckResult } from './types';
 export function pickGoverningCollapse(all: PlasticArrangement[]): PlasticArrangement {
 	let best = all[0];
 	for (const p of all) {
-		if (p.loadFactor !== null && (best.loadFactor === null || p.loadFactor < best.loadFactor)) best = p;
+		const lower = best.loadFactor === null || (p.loadFactor ?? Infinity) < best.loadFactor;
+		if (p.loadFactor !== null && lower) best = p;
 	}
 	return best;
 }
 
 /** Bending row of the plastic route. */
 export function describePlasticBending(ctx: CheckContext, g: PlasticArrangement): CheckResult {
-	const d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement: g.arrangement });
-	const inverse = (loads: Load[]) => {
-		if (loads.length === 0) return 0;
-		const r = solveCollapse({ beam: ctx.beam, capacity: g.capacity, fixedLoads: [], variableLoads: loads });
+	const { loads, beam } = ctx;
+	const d = applyArrangement({ loads, spans: beam.spans, arrangement: g.arrangement });
+	const inverse = (variableLoads: Load[]) => {
+		if (variableLoads.length === 0) return 0;
+		const r = solveCollapse({ beam, capacity: g.capacity, fixedLoads: [], variableLoads });
 		return r.status === 'unbounded' || r.status === 'fails-under-fixed' ? 0 : 1 / r.loadFactor;
 	};
 	const utilisation = inverse([...d.fixed, ...d.variable]);
@@ -38,9 +40,10 @@ export function describePlasticBending(ctx: CheckContext, g: PlasticArrangement)
 		values[`myVRd${i + 1}`] = r.myVRd;
 		values[`vEd${i + 1}`] = r.vEd;
 	});
-	const reduced = g.reductions.length > 0
-		? ` Hinge resistance reduced for shear (EN 1993-1-1 6.2.8) at ${g.reductions.length} hinge${g.reductions.length > 1 ? 's' : ''}.`
-		: '';
+	const n = g.reductions.length;
+	const reduced =
+		n > 0 ? ` Hinge resistance reduced for shear (EN 1993-1-1 6.2.8) at ${n} hinge(s).` : '';
+	const mechanism = 'mechanism' in g.result ? `Mechanism: ${g.result.mechanism.name}.` : '';
 	return {
 		id: 'bending',
 		label: 'Bending: plastic collapse',
@@ -53,18 +56,27 @@ export function describePlasticBending(ctx: CheckContext, g: PlasticArrangement)
 		values,
 		x: 'hinges' in g.result ? g.result.hinges[0]?.x : undefined,
 		arrangement: g.arrangement.name,
-		note: `${'mechanism' in g.result ? `Mechanism: ${g.result.mechanism.name}.` : ''}${reduced}`.trim() || undefined
+		note: `${mechanism}${reduced}`.trim() || undefined
 	};
 }
 
 /** Bending row of an elastic route; `resistance` per span, N·mm. */
-export function checkElasticBending(ctx: CheckContext, o: { EI: number[]; resistance: number[]; elastic: boolean }): CheckResult {
+export function checkElasticBending(
+	ctx: CheckContext,
+	o: { EI: number[]; resistance: number[]; elastic: boolean }
+): CheckResult {
 	let worst: { arr: LoadArrangement; u: number; factor: number | null; x?: number } | null = null;
 	let existing = 0;
 	for (const arr of ctx.arrangements) {
 		const d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement: arr });
 		const run = (fixedLoads: Load[], variableLoads: Load[]) =>
-			computeElasticLimitFactor({ beam: ctx.beam, EI: o.EI, fixedLoads, variableLoads, limit: o.resistance });
+			computeElasticLimitFactor({
+				beam: ctx.beam,
+				EI: o.EI,
+				fixedLoads,
+				variableLoads,
+				limit: o.resistance
+			});
 		const inverse = (loads: Load[]) => {
 			if (loads.length === 0) return 0;
 			const r = run([], loads);
@@ -75,14 +87,19 @@ export function checkElasticBending(ctx: CheckContext, o: { EI: number[]; resist
 		const u = inverse([...d.fixed, ...d.variable]);
 		existing = Math.max(existing, inverse(d.fixed));
 		const x = f.status === 'reached' || f.status === 'fails-under-fixed' ? f.x : undefined;
-		if (!worst || (factor !== null && (worst.factor === null || factor < worst.factor))) worst = { arr, u, factor, x };
+		const lower = factor !== null && (worst?.factor == null || factor < worst.factor);
+		if (!worst || lower) worst = { arr, u, factor, x };
 		worst.u = Math.max(worst.u, u);
 	}
 	if (!worst) throw new Error('invariant: at least one load arrangement');
 	return {
 		id: 'bending',
-		label: o.elastic ? 'Bending: elastic resistance (first yield)' : 'Bending: plastic resistance at the first hinge',
-		clause: o.elastic ? 'EN 1993-1-1 6.2.5 (Wel·fy)' : 'EN 1993-1-1 6.2.5 (Wpl·fy), elastic analysis',
+		label: o.elastic
+			? 'Bending: elastic resistance (first yield)'
+			: 'Bending: plastic resistance at the first hinge',
+		clause: o.elastic
+			? 'EN 1993-1-1 6.2.5 (Wel·fy)'
+			: 'EN 1993-1-1 6.2.5 (Wpl·fy), elastic analysis',
 		level: 'governing',
 		utilisation: worst.u,
 		utilisationExisting: existing,

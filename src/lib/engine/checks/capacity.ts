@@ -20,8 +20,8 @@ export function buildCapacity(spans: number[], resistance: number[]): CapacitySe
 /**
  * Lowers the capacity to at most `value` on [from, to], splitting segments as needed.
  * @example
- * reduceCapacity([{ from: 0, to: 6000, sagging: 100, hogging: 100 }], { from: 2900, to: 3100, value: 90 })
- * // three segments, the middle one at 90
+ * const whole = [{ from: 0, to: 6000, sagging: 100, hogging: 100 }];
+ * reduceCapacity(whole, { from: 2900, to: 3100, value: 90 }) // three segments, the middle at 90
  */
 export function reduceCapacity(
 	capacity: CapacitySegment[],

@@ -38,12 +38,18 @@ export interface CheckContext {
  * field brought from λ back to t along the released beam, V_c − (λ − t)·γT·V_released.
  * @returns the values that apply (one or two), N
  */
-export function readShears(ctx: CheckContext, arr: LoadArrangement, x: number, side: Side, t: number): number[] {
+export function readShears(
+	ctx: CheckContext,
+	arr: LoadArrangement,
+	x: number,
+	side: Side,
+	t: number
+): number[] {
 	const out = [ctx.effects.fixedAt(arr, x, side).V + t * ctx.effects.variableAt(arr, x, side).V];
 	const p = ctx.plastic.get(arr);
 	if (p && 'diagram' in p.result && p.loadFactor !== null && ctx.released) {
 		const rel = ctx.released.at(x, side).V * arr.gammaTemporary;
-		out.push(shearAt(p.result.diagram, x, side === 'left' ? 'left' : 'right') - (p.loadFactor - t) * rel);
+		out.push(shearAt(p.result.diagram, x, side) - (p.loadFactor - t) * rel);
 	}
 	return out;
 }
@@ -56,7 +62,8 @@ export function readReactions(ctx: CheckContext, arr: LoadArrangement, t: number
 	if (p && 'reactions' in p.result && p.loadFactor !== null && ctx.released) {
 		const c = p.result.reactions;
 		const lambda = p.loadFactor;
-		out.push(ctx.released.reactions.map((n, i) => c[i] - (lambda - t) * n.force * arr.gammaTemporary));
+		const gammaT = arr.gammaTemporary;
+		out.push(ctx.released.reactions.map((n, i) => c[i] - (lambda - t) * n.force * gammaT));
 	}
 	return out;
 }

@@ -54,7 +54,7 @@ export function checkBeamDeflections(o: DeflectionRowsInput): CheckResult[] {
 			multiplierAtCapacity: dT > 0 ? Math.max(0, (w.check.allowed - existing) / dT) : null,
 			values: { deflection: w.check.deflection, allowed: w.check.allowed, span: o.spans[w.span] },
 			x: w.x,
-			note: 'All loads unfactored, elastic; the multiplier is read at the point of largest deflection.'
+			note: 'All loads unfactored, elastic; multiplier read at the point of largest deflection.'
 		});
 	}
 	return out;
@@ -63,7 +63,12 @@ export function checkBeamDeflections(o: DeflectionRowsInput): CheckResult[] {
 function worstSpan(o: DeflectionRowsInput, r: ElasticResult, limit: number) {
 	let best: { span: number; x: number; check: ReturnType<typeof checkDeflection> } | null = null;
 	r.maxDeflection.spans.forEach((v, span) => {
-		const check = checkDeflection({ deflection: v.value, span: o.spans[span], cantilever: o.cantilever[span], limit });
+		const check = checkDeflection({
+			deflection: v.value,
+			span: o.spans[span],
+			cantilever: o.cantilever[span],
+			limit
+		});
 		if (!best || check.utilisation > best.check.utilisation) best = { span, x: v.x, check };
 	});
 	if (!best) throw new Error('invariant: a beam has at least one span');

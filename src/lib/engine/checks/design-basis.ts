@@ -31,7 +31,13 @@ export interface DesignBasis<Settings> {
 	resolveFactors(settings: Settings, options: { hasImposed: boolean }): BasisFactors;
 	decideRoute(input: ScopeInput): ScopeDecision;
 	/** Bending resistance for the route, N·mm. */
-	computeBendingResistance(o: { Wpl: number; Wel: number; fy: number; gammaM0: number; elastic: boolean }): number;
+	computeBendingResistance(o: {
+		Wpl: number;
+		Wel: number;
+		fy: number;
+		gammaM0: number;
+		elastic: boolean;
+	}): number;
 	computeShearArea(input: ShearAreaInput): number | null;
 	computeShearResistance(o: { Av: number; fy: number; gammaM0: number }): number;
 	checkWebSlenderness(o: { hw: number; tw: number; fy: number; eta: number }): {
@@ -51,5 +57,11 @@ export interface DesignBasis<Settings> {
 		gammaM1: number;
 	}): LtbResistance & { method: string; curve: string };
 	computeWebResistance(o: WebResistanceInput): WebResistance;
-	computeStableLength(o: { fy: number; iz: number; h: number; tf: number; psi: number }): number | null;
+	computeStableLength(o: {
+		fy: number;
+		iz: number;
+		h: number;
+		tf: number;
+		psi: number;
+	}): number | null;
 }

@@ -9,8 +9,8 @@ import type { BeamLine } from '../model/types';
 /**
  * Releases the redundants of a beam line.
  * @example
- * releaseRedundants({ spans: [6000, 6000], supports: ['pin', 'pin', 'pin'], joints: ['continuous'] })
- * // joints: ['simple']
+ * const beam = { spans: [6000, 6000], supports: ['pin', 'pin', 'pin'], joints: ['continuous'] };
+ * releaseRedundants(beam).joints // ['simple']
  */
 export function releaseRedundants(beam: BeamLine): BeamLine {
 	const n = beam.spans.length;

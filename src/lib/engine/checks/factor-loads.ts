@@ -42,7 +42,9 @@ export function findSpanIndex(load: Load, nodes: number[]): number {
 
 /** Scales a load's intensity by a factor. */
 export function scaleLoad(load: Load, factor: number): Load {
-	if (load.kind === 'linear') return { ...load, start: load.start * factor, end: load.end * factor };
+	if (load.kind === 'linear') {
+		return { ...load, start: load.start * factor, end: load.end * factor };
+	}
 	return { ...load, value: load.value * factor };
 }
 

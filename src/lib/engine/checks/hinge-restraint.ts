@@ -34,19 +34,22 @@ export function checkHingeRestraint(o: HingeRestraintInput): { ok: boolean; reas
 			(s) => Math.abs(s.from - hinge.x) <= m.h / 2 || Math.abs(s.to - hinge.x) <= m.h / 2
 		);
 		if (near.length === 0) {
-			return { ok: false, reason: `no lateral restraint within h/2 of the hinge at ${mmToM(hinge.x).toFixed(2)} m` };
+			const at = mmToM(hinge.x).toFixed(2);
+			return { ok: false, reason: `no lateral restraint within h/2 of the hinge at ${at} m` };
 		}
 		for (const s of near) {
 			const loaded = o.loadPositions.some((l) => l.to > s.from && l.from < s.to);
 			const psi = loaded
 				? 1
-				: computeEndMomentRatio(momentAt(o.diagram, s.from, 'right'), momentAt(o.diagram, s.to, 'left'));
+				: computeEndMomentRatio(
+						momentAt(o.diagram, s.from, 'right'),
+						momentAt(o.diagram, s.to, 'left')
+					);
 			const stable = o.basis.computeStableLength({ fy: m.fy, iz: m.iz, h: m.h, tf: m.tf, psi });
 			if (stable === null || s.to - s.from > stable) {
-				return {
-					ok: false,
-					reason: `the segment from ${mmToM(s.from).toFixed(2)} to ${mmToM(s.to).toFixed(2)} m next to a hinge is longer than the stable length`
-				};
+				const [a, b] = [mmToM(s.from).toFixed(2), mmToM(s.to).toFixed(2)];
+				const reason = `the segment from ${a} to ${b} m next to a hinge exceeds the stable length`;
+				return { ok: false, reason };
 			}
 		}
 	}

@@ -56,7 +56,7 @@ export interface DesignCheckOutcome {
 	factors: BasisFactors;
 	/** Number of load arrangements tried. */
 	arrangementCount: number;
-	/** The arrangement that governs bending (the collapse or first-hinge factor); null outside scope. */
+	/** The arrangement that governs bending (collapse or first-hinge factor); null outside scope. */
 	bendingArrangement: LoadArrangement | null;
 	sectionClass: SectionClass | null;
 	collapse: CollapseSummary | null;

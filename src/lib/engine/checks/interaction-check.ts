@@ -18,7 +18,8 @@ export function checkBeamInteraction(
 	if (o.vRd.every((v) => v === null)) return null;
 	const points: { x: number; side: Side; span: number }[] = [];
 	ctx.beam.spans.forEach((_, i) => {
-		points.push({ x: ctx.nodes[i], side: 'right', span: i }, { x: ctx.nodes[i + 1], side: 'left', span: i });
+		points.push({ x: ctx.nodes[i], side: 'right', span: i });
+		points.push({ x: ctx.nodes[i + 1], side: 'left', span: i });
 	});
 	for (const x of listPointLoadPositions(ctx.loads)) {
 		const span = spanOf(ctx.nodes, x);
@@ -37,7 +38,14 @@ export function checkBeamInteraction(
 			const rho = ctx.basis.computeShearReduction({ vEd, vplRd });
 			const mvRd = o.elastic
 				? ((1 - rho) * m.Wel * m.fy) / ctx.gammaM0
-				: ctx.basis.computeReducedMomentResistance({ Wpl: m.Wpl, Aw: m.hw * m.tw, tw: m.tw, fy: m.fy, gammaM0: ctx.gammaM0, rho });
+				: ctx.basis.computeReducedMomentResistance({
+						Wpl: m.Wpl,
+						Aw: m.hw * m.tw,
+						tw: m.tw,
+						fy: m.fy,
+						gammaM0: ctx.gammaM0,
+						rho
+					});
 			const u = mvRd > 0 ? mEd / mvRd : mEd > 0 ? Number.MAX_VALUE : 0;
 			if (u > best.utilisation) best = { utilisation: u, mEd, vEd, rho, mvRd, x: p.x };
 		}

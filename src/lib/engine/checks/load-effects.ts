@@ -60,7 +60,9 @@ export function analyseLoadGroups(o: { beam: BeamLine; EI: number[]; loads: Load
 	const byAction = (a: Load['action']) => o.loads.filter((l) => l.action === a);
 	const imposedBySpan: Load[][] = o.beam.spans.map(() => []);
 	for (const l of byAction('imposed')) {
-		for (const piece of splitLoadAtNodes(l, nodes)) imposedBySpan[findSpanIndex(piece, nodes)].push(piece);
+		for (const piece of splitLoadAtNodes(l, nodes)) {
+			imposedBySpan[findSpanIndex(piece, nodes)].push(piece);
+		}
 	}
 	const group = (kind: LoadGroup['kind'], loads: Load[], weight: LoadGroup['weight']) => {
 		const result = run(loads);

@@ -24,13 +24,19 @@ export interface LtbCheckOptions {
 }
 
 /** LTB rows, and the reasons a segment is outside scope. */
-export function checkBeamLtb(ctx: CheckContext, o: LtbCheckOptions): { checks: CheckResult[]; outOfScope: string[] } {
+export function checkBeamLtb(
+	ctx: CheckContext,
+	o: LtbCheckOptions
+): { checks: CheckResult[]; outOfScope: string[] } {
 	const checks: CheckResult[] = [];
 	const outOfScope: string[] = [];
 	o.segments.forEach((seg, index) => {
 		const m = ctx.members[spanOf(ctx.nodes, (seg.from + seg.to) / 2)];
 		if (seg.freeEnd) {
-			outOfScope.push('A cantilever whose tip is not restrained laterally: its buckling is outside this tool (add a restraint at the tip).');
+			outOfScope.push(
+				'A cantilever tip is not restrained laterally: its buckling is outside this tool ' +
+					'(add a restraint at the tip).'
+			);
 			return;
 		}
 		if (!m.propsKnown) return;
@@ -53,7 +59,7 @@ export function checkBeamLtb(ctx: CheckContext, o: LtbCheckOptions): { checks: C
 		const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
 			const cr = prepared.at(groups.map((g) => g.weight(arr) * (g.kind === 'temporary' ? t : 1)));
 			if (cr === null) return { utilisation: 0, detail: null };
-			const r = ctx.basis.computeLtbResistance({ shape: m.shape, h: m.h, b: m.b, Wy, fy: m.fy, mcr: cr.mcr, gammaM1: ctx.gammaM1 });
+			const r = ctx.basis.computeLtbResistance({ ...m, Wy, mcr: cr.mcr, gammaM1: ctx.gammaM1 });
 			return { utilisation: cr.mMax / r.mbRd, detail: { ...r, mcr: cr.mcr, mEd: cr.mMax } };
 		});
 		const d = worst.detail;
@@ -67,11 +73,21 @@ export function checkBeamLtb(ctx: CheckContext, o: LtbCheckOptions): { checks: C
 			pass: worst.utilisation <= 1,
 			multiplierAtCapacity: worst.multiplier,
 			values: d
-				? { mEd: d.mEd, mcr: d.mcr, lambdaLT: d.lambdaBar, chiLT: d.chiLT, mbRd: d.mbRd, from: seg.from, to: seg.to }
+				? {
+						mEd: d.mEd,
+						mcr: d.mcr,
+						lambdaLT: d.lambdaBar,
+						chiLT: d.chiLT,
+						mbRd: d.mbRd,
+						from: seg.from,
+						to: seg.to
+					}
 				: { from: seg.from, to: seg.to },
 			x: seg.from,
 			arrangement: worst.arrangement.name,
-			note: d ? `χLT by ${d.method}, curve ${d.curve}; Mcr by the energy method for this segment's moment diagram.` : 'No moment in this segment.'
+			note: d
+				? `χLT by ${d.method}, curve ${d.curve}; Mcr by the energy method for this segment.`
+				: 'No moment in this segment.'
 		});
 	});
 	return { checks, outOfScope };
@@ -83,15 +99,19 @@ function clipLoads(loads: Load[], seg: RestraintSegment, factor: number): Segmen
 	if (factor === 0) return out;
 	for (const l of loads) {
 		if (l.kind === 'point') {
-			if (l.x > seg.from && l.x < seg.to) out.push({ kind: 'point', x: l.x - seg.from, value: l.value * factor });
+			if (l.x > seg.from && l.x < seg.to) {
+				out.push({ kind: 'point', x: l.x - seg.from, value: l.value * factor });
+			}
 			continue;
 		}
 		const a = Math.max(l.from, seg.from);
 		const b = Math.min(l.to, seg.to);
 		if (b <= a) continue;
 		const at = (x: number) =>
-			l.kind === 'uniform' ? l.value : l.start + ((l.end - l.start) * (x - l.from)) / (l.to - l.from);
-		out.push({ kind: 'line', from: a - seg.from, to: b - seg.from, start: at(a) * factor, end: at(b) * factor });
+			l.kind === 'uniform'
+				? l.value * factor
+				: (l.start + ((l.end - l.start) * (x - l.from)) / (l.to - l.from)) * factor;
+		out.push({ kind: 'line', from: a - seg.from, to: b - seg.from, start: at(a), end: at(b) });
 	}
 	return out;
 }

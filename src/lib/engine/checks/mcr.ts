@@ -2,9 +2,11 @@
  * Elastic critical moment Mcr of one segment of a doubly symmetric beam, for any moment diagram
  * and load height, by the Rayleigh–Ritz energy method (Timoshenko & Gere, Theory of Elastic
  * Stability, ch. 6). Fork supports at the segment ends (u = φ = 0, warping free) make the sine
- * series u = Σ aₙ sin(nπx/L), φ = Σ bₙ sin(nπx/L) complete and the stiffness matrix diagonal:
+ * series u = Σ aₙ sin(nπx/L), φ = Σ bₙ sin(nπx/L) complete and the stiffness matrix
+ * diagonal:
  *   U = ½∫(EIz u''² + GIt φ'² + EIw φ''²) dx
- *   V = ∫ M u'' φ dx − ½∫ q·zg φ² dx − ½ Σ P·zg φ(xP)²   (zg > 0: load above the shear centre)
+ *   V = ∫ M u'' φ dx − ½∫ q·zg φ² dx − ½ Σ P·zg φ(xP)²
+ * (zg > 0: load above the shear centre)
  * The critical factor λcr on the segment's loads is the smallest positive λ with
  * det(K − λG) = 0; Mcr = λcr · max|M|.
  */
@@ -75,7 +77,8 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 	const { parts, EIz, GIt, EIw, zg } = input;
 	const N = input.terms ?? 12;
 	const L = parts[0].length;
-	const all: LtbSegment = { length: L, momentStart: 0, momentEnd: 0, loads: parts.flatMap((p) => p.loads) };
+	const loads = parts.flatMap((p) => p.loads);
+	const all: LtbSegment = { length: L, momentStart: 0, momentEnd: 0, loads };
 	const edges = listSubintervalEdges(all, N);
 	const points = listQuadraturePoints(edges);
 	const k = Array.from({ length: N }, (_, i) => ((i + 1) * Math.PI) / L);
@@ -107,10 +110,16 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 			if (zg !== 0 && q0 !== 0) addLoadHeight(s, p.w * q0 * zg);
 		});
 		for (const load of seg.loads) {
-			if (zg !== 0 && load.kind === 'point') addLoadHeight(k.map((kn) => Math.sin(kn * load.x)), load.value * zg);
+			if (zg === 0 || load.kind !== 'point') continue;
+			addLoadHeight(
+				k.map((kn) => Math.sin(kn * load.x)),
+				load.value * zg
+			);
 		}
 		// Symmetric form D^-½ G D^-½; its largest eigenvalue μ is 1/λcr.
-		for (let i = 0; i < n2; i++) for (let j = 0; j < n2; j++) g[i * n2 + j] /= Math.sqrt(d[i] * d[j]);
+		for (let i = 0; i < n2; i++) {
+			for (let j = 0; j < n2; j++) g[i * n2 + j] /= Math.sqrt(d[i] * d[j]);
+		}
 		const samples = [...points.map((p) => p.x), ...edges].map((x) => computeSegmentMoment(seg, x));
 		return { g, samples };
 	});
@@ -176,6 +185,8 @@ function listQuadraturePoints(edges: number[]): QuadraturePoint[] {
 
 function loadAt(seg: LtbSegment, x: number): number {
 	let q = 0;
-	for (const l of seg.loads) if (l.kind === 'line' && x >= l.from && x <= l.to) q += lineLoadAt(l, x);
+	for (const l of seg.loads) {
+		if (l.kind === 'line' && x >= l.from && x <= l.to) q += lineLoadAt(l, x);
+	}
 	return q;
 }

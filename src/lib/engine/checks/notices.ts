@@ -18,15 +18,20 @@ export const BASE_ASSUMPTIONS: readonly string[] = [
  * @example
  * listNotices({ restraintGiven: false, hollow: false })[0] // the engineer-of-record notice
  */
-export function listNotices(o: { restraintGiven: boolean; hollow: boolean; bearingGiven: boolean }): {
-	notices: string[];
-	assumptions: string[];
-} {
+export function listNotices(o: {
+	restraintGiven: boolean;
+	hollow: boolean;
+	bearingGiven: boolean;
+}): { notices: string[]; assumptions: string[] } {
 	const assumptions = [...BASE_ASSUMPTIONS];
 	if (!o.restraintGiven) {
-		assumptions.push('No lateral restraint was given: the compression flange is taken as restrained throughout.');
+		assumptions.push(
+			'No lateral restraint was given: the compression flange is taken as restrained throughout.'
+		);
 	}
-	if (!o.bearingGiven) assumptions.push('No stiff bearing lengths were given: taken as 0 mm (conservative).');
+	if (!o.bearingGiven) {
+		assumptions.push('No stiff bearing lengths were given: taken as 0 mm (conservative).');
+	}
 	const notices = [ENGINEER_NOTICE_SHORT];
 	if (o.hollow) notices.push('Local web bearing is not checked for hollow or solid sections.');
 	return { notices, assumptions };

@@ -71,7 +71,9 @@ export function solvePlasticArrangement(o: PlasticArrangementInput): PlasticArra
 		const settled = after !== null && before !== null && Math.abs(after - before) <= 1e-9 * after;
 		[result, capacity, reductions] = [nextResult, nextCapacity, next];
 		const bestFactor = factorOf(best.result) ?? Infinity;
-		if (round === 0 || settled || (after ?? Infinity) < bestFactor) best = { result, capacity, reductions };
+		if (round === 0 || settled || (after ?? Infinity) < bestFactor) {
+			best = { result, capacity, reductions };
+		}
 		if (settled) break;
 	}
 	({ result, capacity, reductions } = best);
@@ -91,7 +93,8 @@ function factorOf(r: CollapseResult): number | null {
 }
 
 function solve(o: PlasticArrangementInput, capacity: CapacitySegment[]): CollapseResult {
-	return solveCollapse({ beam: o.beam, capacity, fixedLoads: o.fixedLoads, variableLoads: o.variableLoads });
+	const { beam, fixedLoads, variableLoads } = o;
+	return solveCollapse({ beam, capacity, fixedLoads, variableLoads });
 }
 
 /**
@@ -99,7 +102,10 @@ function solve(o: PlasticArrangementInput, capacity: CapacitySegment[]): Collaps
  * the elastic shear under the same loads. Evaluating it at λ, not at 1, makes λ itself the
  * largest temporary-load multiplier the reduced hinges allow.
  */
-function findReductions(o: PlasticArrangementInput, r: Extract<CollapseResult, { status: 'mechanism' }>) {
+function findReductions(
+	o: PlasticArrangementInput,
+	r: Extract<CollapseResult, { status: 'mechanism' }>
+): HingeReduction[] {
 	const out: HingeReduction[] = [];
 	const L = o.nodes[o.nodes.length - 1];
 	for (const hinge of r.hinges) {

@@ -56,7 +56,9 @@ export function runPlasticRoute(
 					segments: o.segments,
 					nodes: ctx.nodes,
 					members: ctx.members,
-					loadPositions: ctx.loads.map((l) => (l.kind === 'point' ? { from: l.x, to: l.x } : { from: l.from, to: l.to }))
+					loadPositions: ctx.loads.map((l) =>
+						l.kind === 'point' ? { from: l.x, to: l.x } : { from: l.from, to: l.to }
+					)
 				})
 			: { ok: true };
 	const scope = ctx.basis.decideRoute({
@@ -87,6 +89,8 @@ function isCertified(all: PlasticArrangement[], g: PlasticArrangement): boolean 
 	if (!g.certified) return false;
 	const lambda = g.loadFactor;
 	return all.every(
-		(p) => p.certified || (lambda !== null && 'lowerBound' in p.result && p.result.lowerBound >= lambda)
+		(p) =>
+			p.certified ||
+			(lambda !== null && 'lowerBound' in p.result && p.result.lowerBound >= lambda)
 	);
 }

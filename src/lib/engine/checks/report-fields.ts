@@ -68,7 +68,10 @@ export interface DesignCheckReport {
 /** Converts a check row to output units. */
 export function reportCheckRow(c: CheckResult): CheckRowReport {
 	const keys: Record<string, number> = {};
-	for (const [k, v] of Object.entries(c.values)) keys[k] = assertFinite((KEY_UNITS[k] ?? ((n: number) => n))(v), `check ${c.id}.${k}`);
+	for (const [k, v] of Object.entries(c.values)) {
+		const convert = KEY_UNITS[k] ?? ((n: number) => n);
+		keys[k] = assertFinite(convert(v), `check ${c.id}.${k}`);
+	}
 	return {
 		id: c.id,
 		label: c.label,
@@ -116,7 +119,9 @@ export function summariseCase(o: {
 	date?: string;
 }): { short: string; long: string } {
 	const { model, report } = o;
-	const temporary = model.loads.map((l, i) => ({ l, i })).filter(({ l }) => l.action === 'temporary');
+	const temporary = model.loads
+		.map((l, i) => ({ l, i }))
+		.filter(({ l }) => l.action === 'temporary');
 	const m = report.allowableMultiplier;
 	const input: SummaryInput = {
 		title: model.title,
@@ -129,7 +134,7 @@ export function summariseCase(o: {
 		loads: model.file.loads.map((l) => ({
 			action: l.action,
 			kind: l.kind,
-			value: l.kind === 'linear' ? (Math.abs(l.end) > Math.abs(l.start) ? l.end : l.start) : l.value,
+			value: readEntered(l),
 			...(l.kind === 'point' ? { at: l.x } : { from: l.from, to: l.to }),
 			label: l.label ?? null
 		})),
@@ -144,9 +149,9 @@ export function summariseCase(o: {
 			m === null
 				? []
 				: temporary.map(({ l, i }) => {
-						const raw = model.file.loads[i];
-						const entered = raw.kind === 'linear' ? (Math.abs(raw.end) > Math.abs(raw.start) ? raw.end : raw.start) : raw.value;
-						return { name: model.loadLabels[i] ?? `load ${i + 1}`, value: m * entered, unit: l.kind === 'point' ? 'kN' : 'kN/m' };
+						const name = model.loadLabels[i] ?? `load ${i + 1}`;
+						const unit = l.kind === 'point' ? 'kN' : 'kN/m';
+						return { name, value: m * readEntered(model.file.loads[i]), unit };
 					}),
 		checks: report.checks.map((c) => ({
 			label: c.label,
@@ -182,6 +187,13 @@ const KEY_LABELS: Record<string, [string, string]> = {
 function describeKeys(c: CheckRowReport): string[] {
 	return Object.entries(KEY_LABELS).flatMap(([k, [name, unit]]) => {
 		const v = c[k];
-		return typeof v === 'number' ? [`${name} ${Number(v.toPrecision(3))}${unit ? ` ${unit}` : ''}`] : [];
+		if (typeof v !== 'number') return [];
+		return [`${name} ${Number(v.toPrecision(3))}${unit ? ` ${unit}` : ''}`];
 	});
+}
+
+/** A load's value as entered: kN, kN/m, or the larger end of a linear load. */
+function readEntered(l: CaseModel['file']['loads'][number]): number {
+	if (l.kind !== 'linear') return l.value;
+	return Math.abs(l.end) > Math.abs(l.start) ? l.end : l.start;
 }

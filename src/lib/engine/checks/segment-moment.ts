@@ -56,8 +56,8 @@ export function computeSegmentMoment(seg: LtbSegment, x: number): number {
 			m += x <= load.x ? (load.value * (L - load.x) * x) / L : (load.value * load.x * (L - x)) / L;
 			continue;
 		}
-		// Free moment = R_A·x − ∫ q(s)(x − s) ds over the loaded part left of x; the integrands are
-		// at most quadratic, so 3-point Gauss is exact.
+		// Free moment = R_A·x − ∫ q(s)(x − s) ds over the loaded part left of x; the integrands
+		// are at most quadratic, so 3-point Gauss is exact.
 		let rA = 0;
 		let left = 0;
 		const hi = Math.min(x, load.to);

@@ -13,7 +13,8 @@ export function computeSpanShearResistances(ctx: CheckContext): (number | null)[
 	return ctx.members.map((m) => {
 		if (!m.propsKnown) return null;
 		const Av = ctx.basis.computeShearArea({ ...m, eta: ctx.eta });
-		return Av === null ? null : ctx.basis.computeShearResistance({ Av, fy: m.fy, gammaM0: ctx.gammaM0 });
+		if (Av === null) return null;
+		return ctx.basis.computeShearResistance({ Av, fy: m.fy, gammaM0: ctx.gammaM0 });
 	});
 }
 
@@ -24,7 +25,8 @@ export function checkBeamShear(ctx: CheckContext, vRd: (number | null)[]): Check
 	if (vRd.every((v) => v === null)) return null;
 	const points: { x: number; side: Side; span: number }[] = [];
 	ctx.beam.spans.forEach((_, i) => {
-		points.push({ x: ctx.nodes[i], side: 'right', span: i }, { x: ctx.nodes[i + 1], side: 'left', span: i });
+		points.push({ x: ctx.nodes[i], side: 'right', span: i });
+		points.push({ x: ctx.nodes[i + 1], side: 'left', span: i });
 	});
 	for (const x of listPointLoadPositions(ctx.loads)) {
 		const span = spanOf(ctx.nodes, x);
@@ -55,7 +57,7 @@ export function checkBeamShear(ctx: CheckContext, vRd: (number | null)[]): Check
 		arrangement: worst.arrangement.name,
 		note:
 			ctx.plastic.size > 0
-				? 'Larger of the elastic shear and the shear of the collapse moment field at the design load.'
+				? 'Larger of the elastic shear and that of the collapse moment field at the design load.'
 				: 'Elastic shear.'
 	};
 }

@@ -77,18 +77,23 @@ export function formatNumber(v: number): string {
 
 function describeLoad(l: SummaryLoad): string {
 	const who = l.label ? `${l.label} ` : '';
-	const a = l.action === 'permanent' ? 'permanent' : l.action === 'imposed' ? 'imposed' : 'temporary';
-	if (l.kind === 'point') return `${who}${a} ${formatNumber(l.value)} kN at ${formatNumber(l.at ?? 0)} m`;
-	return `${who}${a} ${formatNumber(l.value)} kN/m from ${formatNumber(l.from ?? 0)} to ${formatNumber(l.to ?? 0)} m`;
+	const v = formatNumber(l.value);
+	if (l.kind === 'point') return `${who}${l.action} ${v} kN at ${formatNumber(l.at ?? 0)} m`;
+	const [a, b] = [formatNumber(l.from ?? 0), formatNumber(l.to ?? 0)];
+	return `${who}${l.action} ${v} kN/m from ${a} to ${b} m`;
 }
 
 function describeBeam(s: SummaryInput): string {
-	return `${s.spans.map((L) => `${formatNumber(L)} m`).join(' + ')} (${s.supports.join('-')}), ${s.section}, ${s.grade}`;
+	const spans = s.spans.map((L) => `${formatNumber(L)} m`).join(' + ');
+	return `${spans} (${s.supports.join('-')}), ${s.section}, ${s.grade}`;
 }
 
 function describeResult(s: SummaryInput): string {
 	const parts = [VERDICT_WORDS[s.verdict]];
-	if (s.governing) parts.push(`governed by ${s.governing.label} at ${Math.round(s.governing.utilisation * 100)} %`);
+	if (s.governing) {
+		const u = Math.round(s.governing.utilisation * 100);
+		parts.push(`governed by ${s.governing.label} at ${u} %`);
+	}
 	if (s.loadFactor !== null) parts.push(`load factor ${formatNumber(s.loadFactor)}`);
 	if (s.reserve !== null) parts.push(`reserve ${Math.round(s.reserve)} %`);
 	if (s.verdict === 'outside-scope' && s.routeReasons[0]) parts.push(s.routeReasons[0]);
@@ -104,9 +109,8 @@ function describeResult(s: SummaryInput): string {
 export function writeShortSummary(s: SummaryInput): string {
 	const head = [s.title || 'Beam check', [s.place, s.date].filter(Boolean).join(', ')];
 	const loads = `Loads: ${s.loads.map(describeLoad).join('; ')}`;
-	const allow = s.allowable.length
-		? `Largest temporary load: ${s.allowable.map((a) => `${a.name} ${formatNumber(a.value)} ${a.unit}`).join(', ')}`
-		: '';
+	const allowed = s.allowable.map((a) => `${a.name} ${formatNumber(a.value)} ${a.unit}`);
+	const allow = allowed.length ? `Largest temporary load: ${allowed.join(', ')}` : '';
 	const build = (withLoads: boolean, withAllow: boolean, withPlace: boolean) =>
 		toPlainText(
 			[
@@ -133,6 +137,12 @@ export function writeShortSummary(s: SummaryInput): string {
 	return build(false, false, false).slice(0, SHORT_SUMMARY_LIMIT - 1) + '…';
 }
 
+function describeCheck(c: SummaryCheck): string {
+	const state = c.pass ? 'ok' : c.level === 'warning' ? 'over the limit (warning only)' : 'NOT OK';
+	const details = c.details.length ? `; ${c.details.join(', ')}` : '';
+	return `  • ${c.label} (${c.clause}): ${Math.round(c.utilisation * 100)} % ${state}${details}`;
+}
+
 /** The long form: every input, factor, check, notice and assumption. */
 export function writeLongSummary(s: SummaryInput): string {
 	const lines = [
@@ -147,13 +157,10 @@ export function writeLongSummary(s: SummaryInput): string {
 		'',
 		`Result: ${describeResult(s)}`,
 		...s.routeReasons.map((r) => `Route: ${r}`),
-		...s.allowable.map((a) => `Largest temporary load ${a.name}: ${formatNumber(a.value)} ${a.unit}`),
+		...s.allowable.map((a) => `Largest temporary ${a.name}: ${formatNumber(a.value)} ${a.unit}`),
 		'',
 		'Checks:',
-		...s.checks.map(
-			(c) =>
-				`  • ${c.label} (${c.clause}): ${Math.round(c.utilisation * 100)} % ${c.pass ? 'ok' : c.level === 'warning' ? 'over the limit (warning only)' : 'NOT OK'}${c.details.length ? `; ${c.details.join(', ')}` : ''}`
-		),
+		...s.checks.map(describeCheck),
 		'',
 		'Notices:',
 		...[s.notice, ...s.notices.filter((n) => n !== s.notice)].map((n) => `  • ${n}`),

@@ -34,7 +34,7 @@ export interface Verdict {
  * Decides the verdict.
  * @param o.loadFactor collapse (or first-hinge) factor on the temporary loads, when computed
  * @example
- * decideVerdict({ scope, checks, loadFactor: 1.4 }).verdict // 'pass' when every governing check ≤ 1
+ * decideVerdict({ scope, checks, loadFactor: 1.4 }).verdict // 'pass' if every governing check ≤ 1
  */
 export function decideVerdict(o: {
 	scope: ScopeDecision;
@@ -71,7 +71,8 @@ export function decideVerdict(o: {
 			utilisation: assertFinite(governing.utilisation, 'governing utilisation')
 		},
 		loadFactor: o.loadFactor === null ? null : assertFinite(o.loadFactor, 'load factor'),
-		allowableMultiplier: allowable === null ? null : assertFinite(allowable, 'allowable multiplier'),
+		allowableMultiplier:
+			allowable === null ? null : assertFinite(allowable, 'allowable multiplier'),
 		reserve: allowable === null ? null : (allowable - 1) * 100,
 		warnings
 	};
@@ -101,12 +102,14 @@ function collectWarnings(checks: CheckResult[]): string[] {
 	);
 	if (existing > EXISTING_LOAD_WARNING) {
 		out.push(
-			`The existing loads alone already use ${Math.round(existing * 100)} % of the capacity (warning above ${EXISTING_LOAD_WARNING * 100} %, common practice).`
+			`The existing loads alone already use ${Math.round(existing * 100)} % of the capacity ` +
+				`(warning above ${EXISTING_LOAD_WARNING * 100} %, common practice).`
 		);
 	}
 	for (const c of checks) {
 		if (c.level === 'warning' && !c.pass) {
-			out.push(`${c.label}: utilisation ${Math.round(c.utilisation * 100)} % (reported, not counted in the verdict).`);
+			const u = Math.round(c.utilisation * 100);
+			out.push(`${c.label}: utilisation ${u} % (reported, not counted in the verdict).`);
 		}
 	}
 	return out;

@@ -51,8 +51,12 @@ export function checkBeamWebs(ctx: CheckContext, bearing: BearingLengths): Check
 			label: 'Web under point load',
 			force(arr, t) {
 				let d = designLoads.get(arr);
-				if (!d) designLoads.set(arr, (d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement: arr })));
-				const sum = (ls: typeof d.fixed) => ls.reduce((a, l) => a + (l.kind === 'point' && l.x === x ? l.value : 0), 0);
+				if (!d) {
+					d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement: arr });
+					designLoads.set(arr, d);
+				}
+				const sum = (ls: typeof d.fixed) =>
+					ls.reduce((a, l) => a + (l.kind === 'point' && l.x === x ? l.value : 0), 0);
 				return Math.abs(sum(d.fixed) + t * sum(d.variable));
 			}
 		});
@@ -87,6 +91,7 @@ function checkPoint(
 		c: 0,
 		gammaM1: ctx.gammaM1
 	});
+	const ss = Math.min(p.ss, m.hw);
 	const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
 		const fEd = p.force(arr, t);
 		return { utilisation: fEd / web.fRd, detail: fEd };
@@ -103,7 +108,7 @@ function checkPoint(
 		values: {
 			fEd: worst.detail,
 			fRd: web.fRd,
-			ss: Math.min(p.ss, m.hw),
+			ss,
 			kF: web.kF,
 			ly: web.ly,
 			chiF: web.chiF,
@@ -111,6 +116,6 @@ function checkPoint(
 		},
 		x: p.x,
 		arrangement: worst.arrangement.name,
-		note: `Load type (${p.type}) of EN 1993-1-5 Figure 6.1, stiff bearing ${Math.round(Math.min(p.ss, m.hw))} mm.`
+		note: `Load type (${p.type}) of EN 1993-1-5 Figure 6.1, stiff bearing ${Math.round(ss)} mm.`
 	};
 }

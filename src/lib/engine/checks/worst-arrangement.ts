@@ -29,8 +29,8 @@ const TOLERANCE = 1e-6;
 /**
  * Worst case over arrangements (throws on an empty list: there is always one arrangement).
  * @example
- * findWorstArrangement(arrangements, (a, t) => ({ utilisation: 0.3 + 0.5 * t, detail: null })).multiplier
- * // 1.4
+ * const u = (a: LoadArrangement, t: number) => ({ utilisation: 0.3 + 0.5 * t, detail: null });
+ * findWorstArrangement(arrangements, u).multiplier // 1.4
  */
 export function findWorstArrangement<T>(
 	arrangements: LoadArrangement[],

@@ -113,7 +113,8 @@ function listCombinations(f: Omit<ResolvedFactors, 'combinations'>, hasImposed: 
 		gammaTemporary: f.gammaT * f.psi0T
 	});
 	if (f.set === 'custom') {
-		return [{ name: 'custom', ...g(f.gammaGsup), gammaImposed: f.gammaQ, gammaTemporary: f.gammaT }];
+		const custom = { gammaImposed: f.gammaQ, gammaTemporary: f.gammaT };
+		return [{ name: 'custom', ...g(f.gammaGsup), ...custom }];
 	}
 	const out: Combination[] = [];
 	if (f.set === 'en1990-6.10') {

@@ -46,28 +46,34 @@ export interface ScopeDecision {
 export function decideRoute(s: ScopeInput): ScopeDecision {
 	const out: string[] = [];
 	if (!s.ductile) {
-		out.push('The material is not ductile steel (cast or wrought iron): this tool does not assess it.');
+		out.push('The material is not ductile steel (cast or wrought iron): not assessed here.');
 	}
 	if (!s.gradeConfirmed) out.push('The steel grade is unknown and has not been confirmed.');
 	if (s.sectionClass === 4) {
-		out.push('The section is Class 4 (slender, EN 1993-1-1 5.5): local buckling is outside this tool.');
+		out.push('The section is Class 4 (EN 1993-1-1 5.5): local buckling is outside this tool.');
 	}
 	if (s.needsShearBucklingCheck) {
-		out.push('The web needs a shear buckling check (hw/tw > 72ε/η, EN 1993-1-1 6.2.6(6)): outside this tool.');
+		out.push(
+			'The web needs a shear buckling check (hw/tw > 72ε/η, EN 1993-1-1 6.2.6(6)): ' +
+				'outside this tool.'
+		);
 	}
 	out.push(...(s.otherReasons ?? []));
 	if (out.length > 0) return { route: 'outside-scope', reasons: out };
 	if (s.sectionClass === 3) {
 		return {
 			route: 'elastic-first-yield',
-			reasons: ['Class 3 section: elastic analysis with the elastic resistance Wel·fy (EN 1993-1-1 6.2.5).']
+			reasons: [
+				'Class 3 section: elastic analysis with the elastic resistance Wel·fy (EN 1993-1-1 6.2.5).'
+			]
 		};
 	}
 	if (s.sectionClass === 2) {
 		return {
 			route: 'elastic-plastic-section',
 			reasons: [
-				'Class 2 section: no rotation capacity for plastic hinges (EN 1993-1-1 5.6), so elastic analysis with the plastic resistance Wpl·fy, up to the first hinge.'
+				'Class 2 section: no rotation capacity for plastic hinges (EN 1993-1-1 5.6), so ' +
+					'elastic analysis with the plastic resistance Wpl·fy, up to the first hinge.'
 			]
 		};
 	}
@@ -75,7 +81,10 @@ export function decideRoute(s: ScopeInput): ScopeDecision {
 		return {
 			route: 'elastic-plastic-section',
 			reasons: [
-				`A plastic hinge would form where the compression flange is not restrained enough (EN 1993-1-1 6.3.5${s.hingeRestraintNote ? `: ${s.hingeRestraintNote}` : ''}), so plastic analysis is not used: elastic analysis with the plastic resistance and the buckling resistance Mb,Rd.`
+				'A plastic hinge would form where the compression flange is not restrained enough ' +
+					`(EN 1993-1-1 6.3.5${s.hingeRestraintNote ? `: ${s.hingeRestraintNote}` : ''}), ` +
+					'so plastic analysis is not used: elastic analysis with the plastic resistance ' +
+					'and the buckling resistance Mb,Rd.'
 			]
 		};
 	}
@@ -87,6 +96,9 @@ export function decideRoute(s: ScopeInput): ScopeDecision {
 	}
 	return {
 		route: 'plastic',
-		reasons: ['Class 1 section, ductile steel, hinges restrained: plastic collapse analysis (EN 1993-1-1 5.4.3, 5.6).']
+		reasons: [
+			'Class 1 section, ductile steel, hinges restrained: plastic collapse analysis ' +
+				'(EN 1993-1-1 5.4.3, 5.6).'
+		]
 	};
 }
