@@ -72,7 +72,8 @@ export function solveStaticProgram(options: {
 	let lastGood: StaticSolution | null = null;
 	for (let round = 0; round < MAX_ROUNDS; round++) {
 		const result = solveProgram(lp);
-		// A later round can only fail by rounding (it adds rows to a solved program): keep the last answer.
+		// A later round can only fail by rounding (it adds rows to a solved program): keep the last
+		// answer.
 		if (result.status !== 'optimal') return lastGood ?? { status: result.status };
 		if (result.residual > 1e-9 && lastGood) return lastGood;
 		const y = result.y;

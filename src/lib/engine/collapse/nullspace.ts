@@ -64,7 +64,7 @@ export function solveEquilibrium(E: number[][], f: number[]): SolutionSpace {
 	return { particular, basis, rank, consistent };
 }
 
-/** Solves the square system A x = b by Gaussian elimination with partial pivoting; null if singular. */
+/** Solves the square system A x = b (Gaussian elimination, partial pivoting); null if singular. */
 export function solveSquare(A: number[][], b: number[]): number[] | null {
 	const n = b.length;
 	const M = A.map((r, i) => [...r, b[i]]);

@@ -52,7 +52,8 @@ export function solveProgram(lp: LinearProgram): LinearProgramResult {
 	if (lp.warm) {
 		let result = solvePhaseTwo(lp);
 		// Verify against the data; if rounding in the tableau hid a violated row, rebuild and go
-		// on, keeping the most accurate answer (a rebuilt tableau of a near-singular basis can be worse).
+		// on, keeping the most accurate answer (a rebuilt tableau of a near-singular basis can be
+		// worse).
 		let best = result;
 		for (let k = 0; k < 3 && result.status === 'optimal' && result.residual > VERIFY_TOL; k++) {
 			if (!reinvert(lp)) break;

@@ -53,9 +53,10 @@ export function reportFixedLoadFailure(
 ): CollapseResult & { status: 'fails-under-fixed' } {
 	// With λ = 0 the program is homogeneous in the loads: 1 − slack is (fixed load)/(collapse load).
 	const overstress = assertFinite(1 - slack, 'overstress');
+	const percent = ((overstress - 1) * 100).toPrecision(3);
 	return {
 		status: 'fails-under-fixed',
-		message: `The fixed loads alone already exceed the collapse load of the beam, by ${((overstress - 1) * 100).toPrecision(3)} %.`,
+		message: `The fixed loads alone already exceed the collapse load of the beam, by ${percent} %.`,
 		overstress
 	};
 }
@@ -90,7 +91,8 @@ export function solveNormalised(
 		return {
 			status: 'unbounded',
 			message:
-				'The variable loads can never cause collapse (they relieve the beam or go straight into supports).'
+				'The variable loads can never cause collapse: they relieve the beam or go straight ' +
+				'into supports.'
 		};
 	}
 	if (sol.status !== 'optimal')

@@ -86,7 +86,7 @@ export type CapacityCurve =
 			points: CapacityPoint[];
 			/** The exact minimum of P_max and where it occurs. */
 			minimum: { x: number; Pmax: number; mechanism: string };
-			/** True when the full solve at the minimum was certified (every value is an exact static optimum). */
+			/** True when the full solve at the minimum was certified (each value is an exact optimum). */
 			certified: boolean;
 	  }
 	| { status: 'fails-under-fixed'; message: string }
