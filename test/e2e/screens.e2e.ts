@@ -1,33 +1,73 @@
 /**
- * The main screens at 360 px: screenshots for a person to look at (saved under test-results/),
- * and an accessibility scan of each with axe (WCAG 2.0/2.1/2.2 A and AA rules).
+ * The main screens at 360 px (and the check on a tablet): screenshots for a person to look at,
+ * saved under test-results/screens/, and an accessibility scan of each with axe (WCAG 2.0, 2.1
+ * and 2.2, levels A and AA).
  */
 import AxeBuilder from '@axe-core/playwright';
+import type { Page } from '@playwright/test';
+import { openCheck, readLoadFactor, saveDemo } from './check-helpers';
 import { test, expect } from './fixtures';
 
 test.use({ viewport: { width: 360, height: 780 } });
 
 const AXE_TAGS = ['wcag2a', 'wcag2aa', 'wcag21aa', 'wcag22aa'];
 
-test('the demo check: result, drawings and notice at 360 px, no axe violations', async ({ page }) => {
-	await page.goto('/check');
+async function scan(page: Page, name: string): Promise<string[]> {
+	const result = await new AxeBuilder({ page }).withTags(AXE_TAGS).analyze();
+	return result.violations.map((v) => `${name} ${v.id}: ${v.nodes.map((n) => n.target).join(' ')}`);
+}
+
+test('the saved demo check: verdict, drawings and notice, no axe violations', async ({ page }) => {
+	await saveDemo(page, 'Plant room beam (demo)');
 	await expect(page.getByTestId('verdict')).toBeVisible();
 	await expect(page.getByTestId('moment-diagram')).toBeVisible();
+	await expect(page.getByTestId('engineer-notice')).toBeVisible();
 	await page.screenshot({ path: 'test-results/screens/check-360.png', fullPage: true });
-	const scan = await new AxeBuilder({ page }).withTags(AXE_TAGS).analyze();
-	expect(scan.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target).join(' ')}`)).toEqual([]);
+	expect(await scan(page, 'check')).toEqual([]);
+
+	await page.goto('/');
+	await expect(page.getByTestId('saved-item')).toHaveCount(1);
+	await page.screenshot({ path: 'test-results/screens/saved-360.png', fullPage: true });
+	expect(await scan(page, 'saved')).toEqual([]);
 });
 
-test('saved checks, settings and about at 360 px, no axe violations', async ({ page }) => {
+test('input problems on the form, settings and about: no axe violations', async ({ page }) => {
+	await openCheck(page);
+	await readLoadFactor(page);
+	await page.getByTestId('start-blank').click();
+	await expect(page.getByTestId('result-issues')).toBeVisible();
+	await page.screenshot({ path: 'test-results/screens/check-blank-360.png', fullPage: true });
+	expect(await scan(page, 'blank check')).toEqual([]);
 	for (const [path, name] of [
-		['/', 'saved'],
 		['/settings', 'settings'],
 		['/about', 'about']
 	] as const) {
 		await page.goto(path);
 		await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
 		await page.screenshot({ path: `test-results/screens/${name}-360.png`, fullPage: true });
-		const scan = await new AxeBuilder({ page }).withTags(AXE_TAGS).analyze();
-		expect(scan.violations.map((v) => `${name} ${v.id}: ${v.nodes.map((n) => n.target).join(' ')}`)).toEqual([]);
+		expect(await scan(page, name)).toEqual([]);
 	}
 });
+
+test.describe('on a tablet', () => {
+	test.use({ viewport: { width: 820, height: 1180 } });
+
+	test('the check uses the width and stays clean for axe', async ({ page }) => {
+		await openCheck(page);
+		await readLoadFactor(page);
+		await page.screenshot({ path: 'test-results/screens/check-tablet.png', fullPage: true });
+		expect(await scan(page, 'tablet check')).toEqual([]);
+	});
+});
+
+for (const theme of ['dark', 'contrast'] as const) {
+	test(`the check in the ${theme} theme passes the contrast rules`, async ({ page }) => {
+		await page.goto('/settings');
+		await page.getByTestId(`theme-${theme}`).check();
+		await expect(page.locator('html')).toHaveAttribute('data-theme', theme);
+		await openCheck(page);
+		await readLoadFactor(page);
+		await page.screenshot({ path: `test-results/screens/check-${theme}-360.png`, fullPage: true });
+		expect(await scan(page, `${theme} check`)).toEqual([]);
+	});
+}
