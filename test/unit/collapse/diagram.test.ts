@@ -28,7 +28,7 @@ describe('momentAt / shearAt', () => {
 		expect(Math.abs(r.reactions[0] - RA) / RA).toBeLessThan(1e-9);
 		for (const x of [0, 437.5, 1000, 1999.3, 2837.7, 4123.4, 6000]) {
 			const M = RA * x - (g * x * x) / 2 - (x > 1000 ? Q * (x - 1000) : 0);
-			expect(Math.abs(momentAt(r.diagram, x) - M) / 100e6).toBeLessThan(1e-9);
+			expect(Math.abs(momentAt(r, x) - M) / 100e6).toBeLessThan(1e-9); // result or diagram
 			const V = RA - g * x - (x >= 1000 ? Q : 0); // right-hand value at the load
 			expect(Math.abs(shearAt(r.diagram, x, 'right') - V) / RA).toBeLessThan(1e-9);
 		}

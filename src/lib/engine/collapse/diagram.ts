@@ -88,24 +88,27 @@ function hermite(d: CollapseDiagram, i: number, x: number): { M: number; V: numb
 	return { M, V: dM / h };
 }
 
+/** A collapse diagram, or a solved result that carries one. */
+export type DiagramSource = CollapseDiagram | { diagram: CollapseDiagram };
+
+const toDiagram = (s: DiagramSource): CollapseDiagram => ('diagram' in s ? s.diagram : s);
+
 /**
- * Bending moment of a collapse diagram at x (mm), N·mm, sagging positive. Exact between diagram
- * points; at a jump `side` picks the value just left or right of x (default left).
- * @example momentAt(result.diagram, 3000) // ≈ 100e6 for case A1 at collapse
+ * Bending moment at x (mm), N·mm, sagging positive, from a collapse result or its diagram. Exact
+ * between diagram points; at a jump `side` picks the value just left or right of x (default left).
+ * @example momentAt(result, 3000) // ≈ 100e6 for case A1 at collapse
  */
 export function momentAt(
-	diagram: CollapseDiagram,
+	source: DiagramSource,
 	x: number,
 	side: 'left' | 'right' = 'left'
 ): number {
-	return hermite(diagram, locate(diagram, x, side), x).M;
+	const d = toDiagram(source);
+	return hermite(d, locate(d, x, side), x).M;
 }
 
-/** Shear force of a collapse diagram at x (mm), N (V = dM/dx); `side` as in `momentAt`. */
-export function shearAt(
-	diagram: CollapseDiagram,
-	x: number,
-	side: 'left' | 'right' = 'left'
-): number {
-	return hermite(diagram, locate(diagram, x, side), x).V;
+/** Shear force at x (mm), N (V = dM/dx), from a result or its diagram; `side` as in `momentAt`. */
+export function shearAt(source: DiagramSource, x: number, side: 'left' | 'right' = 'left'): number {
+	const d = toDiagram(source);
+	return hermite(d, locate(d, x, side), x).V;
 }

@@ -14,6 +14,6 @@ export type {
 } from './types';
 export { solveCollapse } from './solve';
 export { computeCapacityCurve } from './capacity-curve';
-export { momentAt, shearAt } from './diagram';
+export { momentAt, shearAt, type DiagramSource } from './diagram';
 export { validateCollapseProblem } from './validate-problem';
 export { CERTIFY_GAP } from './certified-field';
