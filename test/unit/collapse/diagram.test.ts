@@ -32,6 +32,9 @@ describe('momentAt / shearAt', () => {
 			const V = RA - g * x - (x >= 1000 ? Q : 0); // right-hand value at the load
 			expect(Math.abs(shearAt(r.diagram, x, 'right') - V) / RA).toBeLessThan(1e-9);
 		}
+		// A position that misses the end by rounding (units converted elsewhere) reads the end value.
+		expect(shearAt(r, 6000 * (1 + 1e-12))).toBe(shearAt(r, 6000));
+		expect(() => momentAt(r, 6001)).toThrow(RangeError);
 		// Shear jumps by Q at the point load.
 		expect(shearAt(r.diagram, 1000, 'left') - shearAt(r.diagram, 1000, 'right')).toBeCloseTo(Q, 3);
 	});

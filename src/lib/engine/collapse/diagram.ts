@@ -66,14 +66,18 @@ function locate(d: CollapseDiagram, x: number, side: 'left' | 'right'): number {
 			if (side === 'left' || x < d.x[i + 1]) break;
 		}
 	}
-	if (found < 0) throw new RangeError(`x = ${x} lies outside the beam`);
-	return found;
+	if (found >= 0) return found;
+	// A position given in other units may miss an end by rounding: read the end segment there.
+	const tol = 1e-9 * (d.x[n - 1] - d.x[0]);
+	if (x < d.x[0] && x >= d.x[0] - tol) return locate(d, d.x[0], side);
+	if (x > d.x[n - 1] && x <= d.x[n - 1] + tol) return locate(d, d.x[n - 1], side);
+	throw new RangeError(`x = ${x} lies outside the beam`);
 }
 
 function hermite(d: CollapseDiagram, i: number, x: number): { M: number; V: number } {
 	const [x0, x1] = [d.x[i], d.x[i + 1]];
 	const h = x1 - x0;
-	const t = (x - x0) / h;
+	const t = Math.min(1, Math.max(0, (x - x0) / h));
 	const [m0, m1, v0, v1] = [d.M[i], d.M[i + 1], d.V[i] * h, d.V[i + 1] * h];
 	const M =
 		(2 * t ** 3 - 3 * t ** 2 + 1) * m0 +

@@ -79,13 +79,22 @@ export function normaliseProblem(problem: CollapseProblem): {
 	});
 	return {
 		problem: {
-			beam: { ...problem.beam, spans: problem.beam.spans.map((x) => x / length) },
+			beam: { ...problem.beam, spans: normaliseSpans(problem.beam.spans, length) },
 			capacity,
 			fixedLoads: problem.fixedLoads.map((l) => scaleLoad(l, s)),
 			variableLoads
 		},
 		scale: { length, moment, force, lambda: lambdaScale }
 	};
+}
+
+/** Spans over the total length; the last takes up the rounding so the nodes end at exactly 1. */
+function normaliseSpans(spans: number[], length: number): number[] {
+	const out = spans.map((s) => s / length);
+	let before = 0;
+	for (let i = 0; i + 1 < out.length; i++) before += out[i];
+	if (out.length > 1) out[out.length - 1] = 1 - before;
+	return out;
 }
 
 /** The same load multiplied by a factor. */
