@@ -177,6 +177,9 @@ describe('parseCase: every problem names its field', () => {
 		['load before the beam', (c: any) => (c.loads[1].from = -1), 'loads[1].from'],
 		['from after to', (c: any) => ((c.loads[1].from = 4), (c.loads[1].to = 2)), 'loads[1].to'],
 		['load value not a number', (c: any) => (c.loads[0].value = '12'), 'loads[0].value'],
+		// Regression: 1.5e62 kN passed and overflowed to Infinity in the checks (found by fuzzing).
+		['load beyond any plausible size', (c: any) => (c.loads[0].value = 1.5e62), 'loads[0].value'],
+		['span beyond any plausible size', (c: any) => (c.beam.spans = [1e9]), 'beam.spans[0]'],
 		['missing action', (c: any) => delete c.loads[0].action, 'loads[0].action'],
 		['unknown load kind', (c: any) => (c.loads[2].kind = 'moment'), 'loads[2].kind'],
 		['fy of zero', (c: any) => (c.beam.grade = { fy: 0 }), 'beam.grade.fy'],

@@ -5,7 +5,7 @@ import { findMechanismIssues } from '../elastic/mechanism';
 import type { InputIssue } from '../model/issue';
 import type { BeamLine, JointKind, SupportKind } from '../model/types';
 import { mToMm } from '../units';
-import { addError, readChoice, readNumber } from './read-value';
+import { addError, PLAUSIBLE, readChoice, readNumber } from './read-value';
 
 const SUPPORTS: readonly SupportKind[] = ['pin', 'fixed', 'free'];
 const JOINTS: readonly JointKind[] = ['continuous', 'simple'];
@@ -61,7 +61,7 @@ function readSpans(value: unknown, issues: InputIssue[]): number[] | undefined {
 		addError(issues, 'beam.spans', 'spans-missing', message);
 		return undefined;
 	}
-	const rule = { label: 'span (m)', positive: true };
+	const rule = { label: 'span (m)', positive: true, maxAbs: PLAUSIBLE.span };
 	const out = value.map((v, i) => readNumber(v, `beam.spans[${i}]`, issues, rule));
 	return out.every((v): v is number => v !== undefined) ? out : undefined;
 }

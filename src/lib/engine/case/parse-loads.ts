@@ -8,6 +8,7 @@ import {
 	addError,
 	addWarning,
 	isRecord,
+	PLAUSIBLE,
 	readChoice,
 	readNumber,
 	warnUnknownKeys
@@ -101,7 +102,7 @@ function parseLoad(
 	const onBeam = (v: unknown, key: string): number | undefined =>
 		readPosition(v, `${path}.${key}`, length, issues);
 	const force = (key: string, label: string): number | undefined => {
-		const v = readNumber(raw[key], `${path}.${key}`, issues, { label });
+		const v = readNumber(raw[key], `${path}.${key}`, issues, { label, maxAbs: PLAUSIBLE.load });
 		if (v !== undefined && v < 0) {
 			const message = 'A negative value acts upward; check that is intended.';
 			addWarning(issues, `${path}.${key}`, 'load-upward', message);

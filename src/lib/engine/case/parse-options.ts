@@ -9,6 +9,7 @@ import {
 	addError,
 	addWarning,
 	isRecord,
+	PLAUSIBLE,
 	readChoice,
 	readNumber,
 	warnUnknownKeys
@@ -47,7 +48,7 @@ export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFact
 	let ok = true;
 	for (const key of FACTOR_KEYS) {
 		if (value[key] === undefined) continue;
-		const rule = { label: `factor ${key}`, positive: true };
+		const rule = { label: `factor ${key}`, positive: true, maxAbs: PLAUSIBLE.factor };
 		const v = readNumber(value[key], `factors.${key}`, issues, rule);
 		if (v === undefined) ok = false;
 		else out[key] = v;
@@ -55,7 +56,8 @@ export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFact
 	const extra: { xi?: number; psi0?: number; permanentFavourable?: number } = {};
 	for (const key of EXTRA_KEYS) {
 		if (value[key] === undefined) continue;
-		const v = readNumber(value[key], `factors.${key}`, issues, { label: `factor ${key}`, min: 0 });
+		const rule = { label: `factor ${key}`, min: 0, maxAbs: PLAUSIBLE.factor };
+		const v = readNumber(value[key], `factors.${key}`, issues, rule);
 		if (v === undefined) ok = false;
 		else extra[key] = v;
 	}
@@ -127,7 +129,7 @@ export function parseBearing(
 		addError(issues, 'beam.bearing', 'wrong-length', 'Give one bearing length (mm) per support.');
 		return undefined;
 	}
-	const rule = { label: 'bearing length (mm)', min: 0 };
+	const rule = { label: 'bearing length (mm)', min: 0, maxAbs: PLAUSIBLE.length };
 	const out = value.map((v, i) => readNumber(v, `beam.bearing[${i}]`, issues, rule));
 	return out.every((v): v is number => v !== undefined) ? out : undefined;
 }
@@ -167,7 +169,7 @@ export function parseCheckSettings(
 		if (v !== undefined) out.eta = v;
 	}
 	if (beam.bearingLoads !== undefined) {
-		const rule = { label: 'bearing length under loads (mm)', min: 0 };
+		const rule = { label: 'bearing length under loads (mm)', min: 0, maxAbs: PLAUSIBLE.length };
 		const v = readNumber(beam.bearingLoads, 'beam.bearingLoads', issues, rule);
 		if (v !== undefined) out.bearingLoads = v;
 	}

@@ -31,7 +31,24 @@ export interface NumberRule {
 	/** Smallest allowed value; `positive` means strictly above 0. */
 	min?: number;
 	positive?: boolean;
+	/** Largest allowed size |value|: a plausibility bound that keeps results finite. */
+	maxAbs?: number;
 }
+
+/**
+ * Plausibility bounds of case-file numbers (our choice, not code values): far beyond any beam
+ * this tool can judge, yet small enough that no product of them overflows to Infinity.
+ */
+export const PLAUSIBLE = {
+	/** Span, m. */
+	span: 1000,
+	/** Point load (kN) or line load (kN/m). */
+	load: 1e6,
+	/** Partial factor or combination value. */
+	factor: 100,
+	/** Length in mm (bearing). */
+	length: 1e5
+} as const;
 
 /**
  * Reads a finite number, or records `not-a-number` / `not-positive` / `below-minimum`.
@@ -53,6 +70,11 @@ export function readNumber(
 	}
 	if (rule.min !== undefined && value < rule.min) {
 		addError(issues, path, 'below-minimum', `The ${rule.label} must be at least ${rule.min}.`);
+		return undefined;
+	}
+	if (rule.maxAbs !== undefined && Math.abs(value) > rule.maxAbs) {
+		const message = `The ${rule.label} must not exceed ${rule.maxAbs} in size.`;
+		addError(issues, path, 'out-of-range', message);
 		return undefined;
 	}
 	return value;
