@@ -135,3 +135,33 @@ describe('load patterns on two spans (EN 1990 A1.3.1)', () => {
 		expect(out.collapse!.arrangement).toMatch(/upper/);
 	});
 });
+
+describe('regressions', () => {
+	it('a temporary point load right over a support does not inflate the shear (read beside the jump)', () => {
+		// Shipped briefly: the collapse field and the released beam put the load on different sides
+		// of the support, and the shear check reported 0.55 instead of about 0.1.
+		const m = member('UB 305x165x40', 'S275');
+		const out = runDesignChecks({
+			...simpleBeam('UB 305x165x40', 'S275', []),
+			beam: { spans: [6000, 6000], supports: ['pin', 'pin', 'pin'], joints: ['continuous'] },
+			sections: [m.section, m.section],
+			grades: [m.grade, m.grade],
+			loads: [
+				{ kind: 'point', x: 6000, value: 10e3, action: 'temporary' },
+				{ kind: 'point', x: 3000, value: 10e3, action: 'temporary' }
+			]
+		});
+		const shear = out.checks.find((c) => c.id === 'shear')!;
+		// Statics bound: no section carries more than the two factored loads together.
+		expect(shear.values.vEd).toBeLessThanOrEqual(2 * 1.5 * 10e3 * (1 + 1e-9));
+	});
+
+	it('shear above Vpl,Rd at a hinge caps ρ at 1 instead of throwing (short propped cantilever)', () => {
+		const input = simpleBeam('UB 305x165x40', 'S275', [{ kind: 'point', x: 400, value: 100e3, action: 'temporary' }]);
+		input.beam = { spans: [2000], supports: ['fixed', 'pin'], joints: [] };
+		const out = runDesignChecks(input);
+		expect(out.verdict.verdict).toBe('pass');
+		expect(out.collapse!.reductions.every((r) => r.rho <= 1)).toBe(true);
+		expect(['shear', 'web']).toContain(out.verdict.governing?.id);
+	});
+});

@@ -4,9 +4,7 @@
  * into the hinge capacities instead.) Class 3 uses (1 − ρ)·Wel·fy/γM0, a conservative
  * simplification of the elastic interaction.
  */
-import type { Side } from '../elastic/index';
-import { listPointLoadPositions, type CheckContext } from './context';
-import { spanOf } from './plastic-bending';
+import { listShearPoints, type CheckContext } from './context';
 import type { CheckResult } from './types';
 import { findWorstArrangement } from './worst-arrangement';
 
@@ -16,15 +14,7 @@ export function checkBeamInteraction(
 	o: { vRd: (number | null)[]; elastic: boolean }
 ): CheckResult | null {
 	if (o.vRd.every((v) => v === null)) return null;
-	const points: { x: number; side: Side; span: number }[] = [];
-	ctx.beam.spans.forEach((_, i) => {
-		points.push({ x: ctx.nodes[i], side: 'right', span: i });
-		points.push({ x: ctx.nodes[i + 1], side: 'left', span: i });
-	});
-	for (const x of listPointLoadPositions(ctx.loads)) {
-		const span = spanOf(ctx.nodes, x);
-		points.push({ x, side: 'left', span }, { x, side: 'right', span });
-	}
+	const points = listShearPoints(ctx);
 	const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
 		let best = { utilisation: 0, mEd: 0, vEd: 0, rho: 0, mvRd: 0, x: 0 };
 		for (const p of points) {

@@ -1,7 +1,12 @@
 /**
  * The plastic route for one load arrangement: exact collapse factor on the temporary loads,
  * with the hinge capacity reduced where the shear at a hinge exceeds half the plastic shear
- * resistance (EN 1993-1-1 6.2.8), recomputed until the reductions stop changing.
+ * resistance (EN 1993-1-1 6.2.8).
+ *
+ * The reduction depends on the shear, which grows with the load factor, so the answer is the
+ * fixed point λ* = G(λ*), where G(λ) is the collapse factor with every hinge reduced for the
+ * shear at load level λ. G does not increase with λ, so λ/G(λ) rises through 1 exactly once and
+ * the fixed point is found by the bracketed root search.
  */
 import { shearAt, solveCollapse, type CollapseResult } from '../collapse/index';
 import type { BeamLine, CapacitySegment, Load } from '../model/types';
@@ -10,9 +15,8 @@ import type { DesignBasis } from './design-basis';
 import type { LoadArrangement } from './load-arrangements';
 import type { LoadEffects } from './load-effects';
 import type { SpanMember } from './member';
-
-/** Rounds of "reduce, then solve again"; a handful settle to round-off in practice. */
-const MAX_ROUNDS = 12;
+import { findMultiplierAtCapacity } from './root-find';
+import { shiftCollapseValue, sumArrangementLoads } from './context';
 
 /** A hinge whose capacity was reduced for shear. */
 export interface HingeReduction {
@@ -45,46 +49,53 @@ export interface PlasticArrangementInput {
 	fixedLoads: Load[];
 	variableLoads: Load[];
 	effects: LoadEffects;
+	/** The load groups analysed on the released, statically determinate beam. */
+	released: LoadEffects;
 	/** Plastic shear resistance per span, N (null where unknown). */
 	vplRd: (number | null)[];
 	gammaM0: number;
 }
 
-/** Solves one arrangement with the shear reduction iterated to a fixed point. */
+/** Solves one arrangement with the shear reduction at its fixed point. */
 export function solvePlasticArrangement(o: PlasticArrangementInput): PlasticArrangement {
-	let capacity = o.capacity;
-	let reductions: HingeReduction[] = [];
-	let result = solve(o, capacity);
-	// The reduction depends on the shear at collapse, which depends on λ: iterate λ → shear →
-	// My,V,Rd → λ. Should the hinges keep moving, the smallest λ seen is kept (conservative).
-	let best = { result, capacity, reductions };
-	for (let round = 0; round < MAX_ROUNDS && result.status === 'mechanism'; round++) {
-		const next = findReductions(o, result);
-		if (next.length === 0) break;
-		const nextCapacity = next.reduce((cap, r) => {
-			const half = o.members[spanOf(o.nodes, r.x)].h / 2;
-			return reduceCapacity(cap, { from: r.x - half, to: r.x + half, value: r.myVRd });
-		}, o.capacity);
-		const nextResult = solve(o, nextCapacity);
-		const before = factorOf(result);
-		const after = factorOf(nextResult);
-		const settled = after !== null && before !== null && Math.abs(after - before) <= 1e-9 * after;
-		[result, capacity, reductions] = [nextResult, nextCapacity, next];
-		const bestFactor = factorOf(best.result) ?? Infinity;
-		if (round === 0 || settled || (after ?? Infinity) < bestFactor) {
-			best = { result, capacity, reductions };
-		}
-		if (settled) break;
-	}
-	({ result, capacity, reductions } = best);
-	return {
+	const plain = solve(o, o.capacity);
+	const pack = (
+		result: CollapseResult,
+		capacity: CapacitySegment[],
+		reductions: HingeReduction[],
+		factor = factorOf(result)
+	) => ({
 		arrangement: o.arrangement,
 		result,
-		loadFactor: factorOf(result),
+		loadFactor: factor,
 		certified: result.status === 'mechanism' ? result.certified : result.status !== 'not-certified',
 		capacity,
 		reductions
+	});
+	if (plain.status !== 'mechanism') return pack(plain, o.capacity, []);
+	const at = (lambda: number) => {
+		const reductions = findReductions(o, plain, lambda);
+		const capacity = reductions.reduce((cap, r) => {
+			const half = o.members[spanOf(o.nodes, r.x)].h / 2;
+			return reduceCapacity(cap, { from: r.x - half, to: r.x + half, value: r.myVRd });
+		}, o.capacity);
+		return { reductions, capacity, result: reductions.length ? solve(o, capacity) : plain };
 	};
+	if (at(plain.loadFactor).reductions.length === 0) return pack(plain, o.capacity, []);
+	const lambda =
+		findMultiplierAtCapacity({
+			utilisation: (l) => {
+				const g = factorOf(at(l).result) ?? Number.MAX_VALUE;
+				return g > 0 ? l / g : Number.MAX_VALUE;
+			},
+			upperLimit: plain.loadFactor,
+			tolerance: 1e-9
+		}) ?? plain.loadFactor;
+	const final = at(lambda);
+	// λ is the safe side of the bracket: G(λ) ≥ λ, within the tolerance of the fixed point.
+	const g = factorOf(final.result);
+	const factor = g === null ? null : Math.min(g, lambda);
+	return pack(final.result, final.capacity, final.reductions, factor);
 }
 
 /** λ of a result: 0 when the fixed loads fail, null when unbounded. */
@@ -97,17 +108,22 @@ function solve(o: PlasticArrangementInput, capacity: CapacitySegment[]): Collaps
 	return solveCollapse({ beam, capacity, fixedLoads, variableLoads });
 }
 
+/** Offset from a hinge to read the shear on either side of it, relative to the span. */
+const SIDE = 1e-7;
+
 /**
- * Shear at each hinge at collapse (multiplier λ): the larger of the collapse field's shear and
- * the elastic shear under the same loads. Evaluating it at λ, not at 1, makes λ itself the
- * largest temporary-load multiplier the reduced hinges allow.
+ * Shear at each hinge of the plain mechanism at load level λ: the larger of the elastic shear
+ * and the collapse field moved to λ (context.ts, shiftCollapseValue).
+ * ρ is capped at 1 (VEd ≥ Vpl,Rd is the shear check's failure, not a negative moment).
  */
 function findReductions(
 	o: PlasticArrangementInput,
-	r: Extract<CollapseResult, { status: 'mechanism' }>
+	r: Extract<CollapseResult, { status: 'mechanism' }>,
+	lambda: number
 ): HingeReduction[] {
 	const out: HingeReduction[] = [];
 	const L = o.nodes[o.nodes.length - 1];
+	const totals = sumArrangementLoads(o.released, o.arrangement);
 	for (const hinge of r.hinges) {
 		const span = spanOf(o.nodes, hinge.x);
 		const vplRd = o.vplRd[span];
@@ -115,14 +131,19 @@ function findReductions(
 		if (vplRd === null || !m.propsKnown) continue;
 		let vEd = 0;
 		for (const side of ['left', 'right'] as const) {
-			if ((side === 'left' && hinge.x <= 0) || (side === 'right' && hinge.x >= L)) continue;
-			const el =
-				o.effects.fixedAt(o.arrangement, hinge.x, side).V +
-				r.loadFactor * o.effects.variableAt(o.arrangement, hinge.x, side).V;
-			const pl = shearAt(r.diagram, hinge.x, side);
+			const x = hinge.x + (side === 'left' ? -SIDE : SIDE) * L;
+			if (x <= 0 || x >= L) continue;
+			const { fixedAt, variableAt } = o.effects;
+			const el = fixedAt(o.arrangement, x, side).V + lambda * variableAt(o.arrangement, x, side).V;
+			const free = {
+				fixed: o.released.fixedAt(o.arrangement, x, side).V,
+				variable: o.released.variableAt(o.arrangement, x, side).V
+			};
+			const collapse = shearAt(r.diagram, x, side);
+			const pl = shiftCollapseValue({ collapse, free, totals, lambda: r.loadFactor, t: lambda });
 			vEd = Math.max(vEd, Math.abs(el), Math.abs(pl));
 		}
-		const rho = o.basis.computeShearReduction({ vEd, vplRd });
+		const rho = Math.min(1, o.basis.computeShearReduction({ vEd, vplRd }));
 		if (rho <= 0) continue;
 		const myVRd = o.basis.computeReducedMomentResistance({
 			Wpl: m.Wpl,

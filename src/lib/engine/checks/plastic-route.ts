@@ -38,6 +38,7 @@ export function runPlasticRoute(
 			fixedLoads: d.fixed,
 			variableLoads: d.variable,
 			effects: ctx.effects,
+			released: ctx.released,
 			vplRd: o.vRd,
 			gammaM0: ctx.gammaM0
 		});

@@ -3,7 +3,6 @@
  * the scope gate, the bending route (plastic collapse or elastic), shear, bending with shear,
  * lateral-torsional buckling, web bearing and deflection.
  */
-import { analyseElastic } from '../elastic/index';
 import { classifySectionEN } from '../section/index';
 import { E_STEEL } from '../units';
 import { checkElasticBending } from './bending-check';
@@ -73,11 +72,9 @@ export function runDesignChecks(
 	});
 	const allKnown = members.every((m) => m.propsKnown);
 	const EI = members.map((m) => (allKnown ? E_STEEL * m.Iy : 1));
-	const temporary = input.loads.filter((l) => l.action === 'temporary');
+	// Forces on the released beam do not depend on stiffness: unit EI.
 	const unit = beam.spans.map(() => 1);
-	const released = temporary.length
-		? analyseElastic({ beam: releaseRedundants(beam), EI: unit, loads: temporary })
-		: null;
+	const released = analyseLoadGroups({ beam: releaseRedundants(beam), EI: unit, loads: input.loads });
 	const ctx: CheckContext = {
 		basis,
 		beam,
@@ -91,7 +88,7 @@ export function runDesignChecks(
 		eta: input.eta ?? 1,
 		route: early.route,
 		plastic: new Map(),
-		released: released && released.ok ? released.value : null
+		released
 	};
 	const run = runChecks(ctx, input, { scopeBase, early, EI, allKnown });
 	const loadFactor =

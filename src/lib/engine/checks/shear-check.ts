@@ -2,9 +2,7 @@
  * Shear check over the beam (EN 1993-1-1 6.2.6): the largest design shear at the span ends and
  * beside every point load, against Vpl,Rd of that span, worst load arrangement.
  */
-import type { Side } from '../elastic/index';
-import { listPointLoadPositions, readShears, type CheckContext } from './context';
-import { spanOf } from './plastic-bending';
+import { listShearPoints, readShears, type CheckContext } from './context';
 import type { CheckResult } from './types';
 import { findWorstArrangement } from './worst-arrangement';
 
@@ -23,15 +21,7 @@ export function computeSpanShearResistances(ctx: CheckContext): (number | null)[
  */
 export function checkBeamShear(ctx: CheckContext, vRd: (number | null)[]): CheckResult | null {
 	if (vRd.every((v) => v === null)) return null;
-	const points: { x: number; side: Side; span: number }[] = [];
-	ctx.beam.spans.forEach((_, i) => {
-		points.push({ x: ctx.nodes[i], side: 'right', span: i });
-		points.push({ x: ctx.nodes[i + 1], side: 'left', span: i });
-	});
-	for (const x of listPointLoadPositions(ctx.loads)) {
-		const span = spanOf(ctx.nodes, x);
-		points.push({ x, side: 'left', span }, { x, side: 'right', span });
-	}
+	const points = listShearPoints(ctx);
 	const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
 		let best = { utilisation: 0, vEd: 0, vRd: 0, x: 0 };
 		for (const p of points) {
