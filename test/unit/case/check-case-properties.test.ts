@@ -97,7 +97,7 @@ describe('checkCase on random valid cases', () => {
 				expect(out.ok).toBe(true);
 				if (out.ok) expect(collectNumbers(out.report).every(Number.isFinite)).toBe(true);
 			}),
-			{ numRuns: 60 }
+			{ numRuns: 40 }
 		);
 	});
 
@@ -115,7 +115,7 @@ describe('checkCase on random valid cases', () => {
 				}
 				expect(Math.abs(lb - la / 2)).toBeLessThanOrEqual(1e-6 * la);
 			}),
-			{ numRuns: 40 }
+			{ numRuns: 25 }
 		);
 	});
 });
