@@ -122,6 +122,10 @@ describe('unrestrained over the span (lateral restraint at the supports only)', 
 		const lambdaBar = Math.sqrt(Wfy / (ltb.mcr as number));
 		expectRel(ltb.lambdaLT as number, lambdaBar, 1e-9);
 		expectRel(ltb.mbRd as number, (ltb.chiLT as number) * Wfy, 1e-9);
+		// 6.3.2.3 is used (rolled I, curve b); 6.3.2.2 (curve a, α = 0.21) is reported beside it.
+		const phi = 0.5 * (1 + 0.21 * (lambdaBar - 0.2) + lambdaBar ** 2);
+		expectRel(ltb.chiLTGeneral as number, 1 / (phi + Math.sqrt(phi ** 2 - lambdaBar ** 2)), 1e-9);
+		expect(ltb.clause).toBe('EN 1993-1-1 6.3.2.3');
 	});
 
 	it('a top-flange load allows less than a load at the shear centre, a bottom-flange load more', () => {

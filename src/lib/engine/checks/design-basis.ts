@@ -55,7 +55,13 @@ export interface DesignBasis<Settings> {
 		fy: number;
 		mcr: number;
 		gammaM1: number;
-	}): LtbResistance & { method: string; curve: string };
+	}): LtbResistance & {
+		/** Clause used for χLT. */
+		method: string;
+		curve: string;
+		/** χLT by the general method as well, for comparison (equal when it is the one used). */
+		chiGeneral: number;
+	};
 	computeWebResistance(o: WebResistanceInput): WebResistance;
 	computeStableLength(o: {
 		fy: number;

@@ -78,6 +78,7 @@ export function checkBeamLtb(
 						mcr: d.mcr,
 						lambdaLT: d.lambdaBar,
 						chiLT: d.chiLT,
+						chiLTGeneral: d.chiGeneral,
 						mbRd: d.mbRd,
 						from: seg.from,
 						to: seg.to

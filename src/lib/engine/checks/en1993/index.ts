@@ -46,7 +46,9 @@ export const en1993: DesignBasis<FactorSettings> = {
 		const curve = selectBucklingCurve({ shape: o.shape, h: o.h, b: o.b, method });
 		const r = computeLtbResistance({ ...o, curve, method });
 		const clause = method === 'rolled' ? 'EN 1993-1-1 6.3.2.3' : 'EN 1993-1-1 6.3.2.2';
-		return { ...r, method: clause, curve };
+		const generalCurve = selectBucklingCurve({ shape: o.shape, h: o.h, b: o.b, method: 'general' });
+		const general = computeLtbResistance({ ...o, curve: generalCurve, method: 'general' });
+		return { ...r, method: clause, curve, chiGeneral: general.chiLT };
 	},
 	computeWebResistance,
 	computeStableLength
