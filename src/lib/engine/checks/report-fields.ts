@@ -10,6 +10,13 @@ import type { DesignCheckOutcome } from './inputs';
 import { writeLongSummary, writeShortSummary, type SummaryInput } from './summary';
 import type { AnalysisRoute, CheckId, CheckResult, VerdictKind } from './types';
 
+/** Factor-set names as people read them. */
+const FACTOR_SET_WORDS: Record<string, string> = {
+	'en1990-6.10': 'EN 1990 expression 6.10',
+	'en1990-6.10ab': 'EN 1990 expressions 6.10a and 6.10b (the worse)',
+	custom: 'own factors'
+};
+
 /** How each key number converts from internal units. */
 const KEY_UNITS: Record<string, (v: number) => number> = {
 	vEd: nToKN,
@@ -138,7 +145,7 @@ export function summariseCase(o: {
 			...(l.kind === 'point' ? { at: l.x } : { from: l.from, to: l.to }),
 			label: l.label ?? null
 		})),
-		factorSet: report.factorSet,
+		factorSet: FACTOR_SET_WORDS[report.factorSet] ?? report.factorSet,
 		factors: report.factors,
 		verdict: report.verdict,
 		routeReasons: report.route.reasons,
