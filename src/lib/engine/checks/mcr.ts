@@ -49,7 +49,7 @@ const GAUSS4 = [
  * Elastic critical moment of a segment.
  * @returns null when the segment carries no moment (nothing can buckle)
  * @example
- * // 305x165x40 UB, 6 m, uniform moment: ≈ 96.9e6 N·mm (EN 1993-1-1 test vector L1)
+ * // 305x165x40 UB, 6 m, uniform moment: ≈ 96.9e6 N·mm (Timoshenko & Gere closed form)
  * computeCriticalMoment({ segment: { length: 6000, momentStart: 1e6, momentEnd: 1e6, loads: [] },
  *   EIz: 210e3 * 764e4, GIt: 81e3 * 14.7e4, EIw: 210e3 * 0.164e12, zg: 0 })?.mcr
  */
