@@ -6,8 +6,6 @@ import { checkCase } from '../../src/lib/engine/index';
 import { fieldAt, openCheck, readLoadFactor, typeInto } from './check-helpers';
 import { test, expect } from './fixtures';
 
-const WORDS = { pass: 'PASS', fail: 'FAIL', 'outside-scope': 'OUTSIDE SCOPE' } as const;
-
 test('a continuous beam with a simple joint gives the engine’s λ and verdict for the same case', async ({ page }) => {
 	await openCheck(page);
 	await readLoadFactor(page);
@@ -52,8 +50,7 @@ test('a continuous beam with a simple joint gives the engine’s λ and verdict 
 	const lambda = same.report.collapse.loadFactor;
 	expect(lambda).not.toBeNull();
 	await expect.poll(() => readLoadFactor(page)).toBeCloseTo(lambda!, 3);
-	const verdict = (same.report as { verdict?: keyof typeof WORDS }).verdict;
-	if (verdict) await expect(page.getByTestId('verdict')).toHaveAttribute('data-verdict', verdict);
+	await expect(page.getByTestId('verdict')).toHaveAttribute('data-verdict', same.report.verdict);
 	await expect(page.getByTestId('beam-drawing')).toHaveAttribute('aria-label', /over 3 spans/);
 });
 
@@ -93,4 +90,43 @@ test('a load the beam cannot carry reads FAIL in words and symbol, with λ below
 	await expect(banner).toContainText('FAIL');
 	await expect(banner).toContainText('✖');
 	await expect(page.getByTestId('live-chip')).toContainText('FAIL');
+});
+
+test('restraint only at the supports: the screen names the engine’s route and its reason', async ({ page }) => {
+	await openCheck(page);
+	await readLoadFactor(page);
+	await page.getByText('Only at the supports', { exact: true }).click();
+	const demo = {
+		format: 'hingepoint.case' as const,
+		version: 1 as const,
+		beam: {
+			spans: [4.8],
+			supports: ['pin' as const, 'pin' as const],
+			joints: [],
+			section: { designation: 'UB 254x146x31' },
+			grade: 'S275',
+			sectionLoss: 0,
+			selfWeight: true,
+			restraint: { lateral: 'ends-only' as const, loadHeight: 'bottom-flange' as const },
+			bearing: [100, 100],
+			bearingLoads: 50
+		},
+		loads: [
+			{ kind: 'uniform' as const, from: 0, to: 4.8, value: 3.2, action: 'permanent' as const },
+			{ kind: 'uniform' as const, from: 0, to: 4.8, value: 1.5, action: 'imposed' as const },
+			{ kind: 'point' as const, x: 2.1, value: 12.625, action: 'temporary' as const }
+		],
+		factors: { set: 'en1990-6.10', permanent: 1.35, imposed: 1.5, temporary: 1.5, gammaM0: 1, gammaM1: 1 },
+		deflectionLimit: 200
+	};
+	const same = checkCase(demo);
+	expect(same.ok).toBe(true);
+	if (!same.ok) return;
+	const { design, verdict, governing } = same.report;
+	// Restrained only at the supports, the plastic route is not the engine's choice here.
+	expect(design.route.route).not.toBe('plastic');
+	expect(design.route.reasons.length).toBeGreaterThan(0);
+	await expect(page.getByTestId('verdict')).toHaveAttribute('data-verdict', verdict);
+	for (const reason of design.route.reasons) await expect(page.getByTestId('route')).toContainText(reason);
+	await expect(page.getByTestId('governing')).toHaveText(governing?.label ?? '—');
 });

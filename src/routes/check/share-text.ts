@@ -17,7 +17,7 @@ export function composeShareTexts(
 ): { short: string; long: string } {
 	const fallback = [
 		title || 'Beam check',
-		`Verdict: ${report.verdict ? VERDICT_WORDS[report.verdict] : 'none'}`,
+		`Verdict: ${VERDICT_WORDS[report.verdict]}`,
 		`Collapse load factor: ${report.collapse.loadFactor != null ? formatNumber(report.collapse.loadFactor, 3) : '—'}`
 	].join('\n');
 	// Place, date and who checked it are not the engine's business: they head the text here.
@@ -25,8 +25,9 @@ export function composeShareTexts(
 		.filter(Boolean)
 		.join('\n');
 	const join = (body: string) => (header ? `${header}\n${body}` : body);
-	const short = withNotice(join(report.summary?.short ?? fallback));
-	const long = withNotice(join(report.summary?.long ?? fallback));
+	// An empty summary is never sent: the verdict line stands in for it.
+	const short = withNotice(join(report.summary.short || fallback));
+	const long = withNotice(join(report.summary.long || fallback));
 	return { short, long };
 }
 

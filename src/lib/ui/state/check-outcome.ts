@@ -21,15 +21,19 @@ export interface ReportView {
 	/** λ × the proposed temporary loads: `total` in kN (characteristic). */
 	temporaryCapacity: { total: number } | null;
 	/** Largest temporary loads every check allows: `total` in kN (characteristic). */
-	allowable?: { total: number } | null;
+	allowable: { total: number } | null;
 	/** Largest characteristic point load by position: x m, p kN. */
 	capacityCurve: { points: { x: number; p: number }[]; min: { x: number; p: number } } | null;
-	checks?: { id: string; label?: string; utilisation: number; pass: boolean; level?: string }[];
-	verdict?: 'pass' | 'fail' | 'outside-scope';
-	governing?: { id: string; label: string } | string | null;
+	/** Every member check with its utilisation (demand / resistance). */
+	checks: { id: string; label: string; utilisation: number; pass: boolean; level: string }[];
+	verdict: 'pass' | 'fail' | 'outside-scope';
+	/** The check that limits the temporary load first; null outside scope. */
+	governing: { id: string; label: string } | null;
 	/** Reserve against the governing check, %. */
-	reserve?: number | null;
-	summary?: { short: string; long: string };
+	reserve: number | null;
+	summary: { short: string; long: string };
+	/** Which analysis route the verdict rests on, and why. */
+	design: { route: { route: string; reasons: string[] }; governingArrangement?: string | null };
 	notices: string[];
 	assumptions: string[];
 	engineVersion: string;
