@@ -9,7 +9,13 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { checkCase } from '../../src/lib/engine/index';
 
-const build = (o: { spans: number[]; g: number; q: number; at: number; restraint: boolean }) => ({
+const build = (o: {
+	spans: readonly number[];
+	g: number;
+	q: number;
+	at: number;
+	restraint: boolean;
+}) => ({
 	format: 'hingepoint.case',
 	version: 1,
 	beam: {
