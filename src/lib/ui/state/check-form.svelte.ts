@@ -19,8 +19,8 @@ export interface FormDraft {
 
 /** How the form runs the engine and reports changes (for the draft). */
 export interface CheckFormOptions {
-	/** Null while the engine is still loading; the form then stays pending. */
-	run: (c: CaseFile) => CheckOutcome | null;
+	/** The engine call (may answer later, e.g. from a worker); null while it is not ready yet. */
+	run: (c: CaseFile) => CheckOutcome | Promise<CheckOutcome> | null;
 	onchange?: (draft: FormDraft) => void;
 	/** Quiet time after the last keystroke before the engine runs, ms. */
 	delay?: number;
@@ -46,6 +46,7 @@ export class CheckForm {
 	generalIssues = $derived(collectGeneral(this.outcome, this.case));
 	#options: CheckFormOptions;
 	#timer: ReturnType<typeof setTimeout> | undefined;
+	#seq = 0;
 
 	constructor(options: CheckFormOptions) {
 		this.#options = options;
@@ -143,7 +144,7 @@ export class CheckForm {
 			if (!parsed.ok) this.local[path] = parsed.message;
 		}
 		this.setUnits(current);
-		this.runNow();
+		void this.runNow();
 	}
 
 	/** Switches display units: valid fields are re-shown from the SI case, which never changes. */
@@ -166,6 +167,8 @@ export class CheckForm {
 	/** Waits for a quiet moment, then runs the engine once (or clears the result while typing is wrong). */
 	schedule(): void {
 		clearTimeout(this.#timer);
+		// Any answer still on its way is for an older case now.
+		this.#seq += 1;
 		this.#options.onchange?.(this.snapshot());
 		if (Object.keys(this.local).length > 0) {
 			this.outcome = null;
@@ -173,19 +176,29 @@ export class CheckForm {
 			return;
 		}
 		this.pending = true;
-		this.#timer = setTimeout(() => this.runNow(), this.#options.delay ?? 200);
+		this.#timer = setTimeout(() => void this.runNow(), this.#options.delay ?? 200);
 	}
 
-	runNow(): void {
+	/** Runs the engine now; resolves when its answer (if still current) is in `outcome`. */
+	async runNow(): Promise<void> {
 		clearTimeout(this.#timer);
+		const seq = ++this.#seq;
 		this.pending = false;
 		if (Object.keys(this.local).length > 0) {
 			this.outcome = null;
 			return;
 		}
-		const outcome = this.#options.run($state.snapshot(this.case) as CaseFile);
-		this.pending = outcome === null;
-		if (outcome) this.outcome = outcome;
+		const answer = this.#options.run($state.snapshot(this.case) as CaseFile);
+		if (answer === null) {
+			this.pending = true;
+			return;
+		}
+		this.pending = true;
+		const outcome = await answer;
+		// Only the answer to the latest case is shown.
+		if (seq !== this.#seq) return;
+		this.outcome = outcome;
+		this.pending = false;
 	}
 
 	dispose(): void {

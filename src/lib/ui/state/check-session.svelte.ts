@@ -18,7 +18,7 @@ import { createBlankCase, createDemoCase } from './demo-case';
 import { DraftKeeper, readDraft } from './draft-keeper';
 import { ENGINE_VERSION } from './engine-version';
 import { loadEngineTools, type EngineTools } from './engine-tools';
-import { runCheck } from './run-check';
+import { EngineRunner } from './engine-runner';
 import { connectStore } from './store-connection';
 
 /** Where the form's case came from when the page opened. */
@@ -30,8 +30,9 @@ export type CheckSource = 'saved' | 'link' | 'draft' | 'demo' | 'blank';
  */
 export class CheckSession {
 	readonly drafts = new DraftKeeper();
+	readonly engine = new EngineRunner();
 	readonly form = new CheckForm({
-		run: (c) => (this.tools ? runCheck(this.tools.checkCase, c) : null),
+		run: (c) => this.engine.run(c),
 		onchange: (draft) => this.drafts.queue(draft)
 	});
 	/** The engine, once loaded. */
@@ -119,7 +120,7 @@ export class CheckSession {
 			return false;
 		}
 		this.saving = true;
-		this.form.runNow();
+		await this.form.runNow();
 		const outcome = this.form.outcome;
 		const result = outcome?.state === 'report' ? outcome.report : null;
 		const input = $state.snapshot(this.form.case) as CaseFile;

@@ -1,17 +1,24 @@
+import type { CheckOutcome as EngineOutcome } from '$lib/engine';
 import type { CaseFile } from './case-file';
 import type { CheckOutcome, ReportView } from './check-outcome';
-import type { EngineTools } from './engine-tools';
+
+/**
+ * The screen's view of the engine's answer. The assignment to ReportView is where the compiler
+ * checks that the engine's report still has every field the screens read.
+ */
+export function toCheckOutcome(result: EngineOutcome): CheckOutcome {
+	if (!result.ok) return { state: 'issues', issues: result.issues };
+	const report: ReportView = result.report;
+	return { state: 'report', report, warnings: result.warnings };
+}
 
 /**
  * Runs the engine once on a plain (snapshot) case, with the capacity curve. A thrown error is a
  * broken invariant in the engine: it is shown plainly and never as a verdict.
  */
-export function runCheck(checkCase: EngineTools['checkCase'], c: CaseFile): CheckOutcome {
+export function runCheck(checkCase: (json: unknown, options?: { curve?: boolean }) => EngineOutcome, c: CaseFile): CheckOutcome {
 	try {
-		const result = checkCase(c, { curve: true });
-		if (!result.ok) return { state: 'issues', issues: result.issues };
-		const report: ReportView = result.report;
-		return { state: 'report', report, warnings: result.warnings };
+		return toCheckOutcome(checkCase(c, { curve: true }));
 	} catch (error) {
 		return { state: 'error', message: error instanceof Error ? error.message : String(error) };
 	}
