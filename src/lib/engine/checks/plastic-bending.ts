@@ -81,16 +81,24 @@ export function solvePlasticArrangement(o: PlasticArrangementInput): PlasticArra
 		}, o.capacity);
 		return { reductions, capacity, result: reductions.length ? solve(o, capacity) : plain };
 	};
-	if (at(plain.loadFactor).reductions.length === 0) return pack(plain, o.capacity, []);
-	const lambda =
-		findMultiplierAtCapacity({
-			utilisation: (l) => {
-				const g = factorOf(at(l).result) ?? Number.MAX_VALUE;
-				return g > 0 ? l / g : Number.MAX_VALUE;
-			},
-			upperLimit: plain.loadFactor,
-			tolerance: 1e-9
-		}) ?? plain.loadFactor;
+	const first = at(plain.loadFactor);
+	if (first.reductions.length === 0) return pack(plain, o.capacity, []);
+	// G does not increase, so λ* = G(λ*) lies in [G(λ0), λ0]: search from G(λ0) upward.
+	const g0 = factorOf(first.result) ?? plain.loadFactor;
+	const span = plain.loadFactor - g0;
+	const step =
+		span > 0
+			? findMultiplierAtCapacity({
+					utilisation: (d) => {
+						const g = factorOf(at(g0 + d).result) ?? Number.MAX_VALUE;
+						return g > 0 ? (g0 + d) / g : Number.MAX_VALUE;
+					},
+					upperLimit: span,
+					start: span,
+					tolerance: 1e-7
+				})
+			: 0;
+	const lambda = g0 + (step ?? span);
 	const final = at(lambda);
 	// λ is the safe side of the bracket: G(λ) ≥ λ, within the tolerance of the fixed point.
 	const g = factorOf(final.result);

@@ -14,6 +14,8 @@ export interface MultiplierSearch {
 	upperLimit?: number;
 	/** Relative tolerance on t. */
 	tolerance?: number;
+	/** First trial value of t (default 1); a good guess saves the doubling steps. */
+	start?: number;
 }
 
 /** Most refinement steps; the Illinois method needs about ten for 1e-7. */
@@ -37,7 +39,7 @@ export function findMultiplierAtCapacity(o: MultiplierSearch): number | null {
 	let flo = f(0);
 	if (flo >= 0) return 0;
 	let lo = 0;
-	let hi = Math.min(1, upper);
+	let hi = Math.min(o.start ?? 1, upper);
 	let fhi = f(hi);
 	while (fhi < 0) {
 		if (hi >= upper) return null;

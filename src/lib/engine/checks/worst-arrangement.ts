@@ -53,7 +53,9 @@ export function findWorstArrangement<T>(
 		if (multiplier !== null && evaluate(f.arrangement, multiplier).utilisation < 1) continue;
 		const m = findMultiplierAtCapacity({
 			utilisation: (t) => evaluate(f.arrangement, t).utilisation,
-			tolerance: TOLERANCE
+			tolerance: TOLERANCE,
+			// The straight-line estimate is exact for linear checks and close for the others.
+			start: f.estimate > 0 && f.estimate < 1e6 ? f.estimate * (1 + 1e-9) : 1
 		});
 		if (m !== null && (multiplier === null || m < multiplier)) multiplier = m;
 	}
