@@ -30,7 +30,8 @@ export function factorsFromSet(set: FactorSet): NonNullable<CaseFile['factors']>
 export function applySettingsDefaults(c: CaseFile, settings: Settings, set: FactorSet): CaseFile {
 	return {
 		...c,
-		beam: { ...c.beam, restraint: { lateral: settings.defaultRestraint, loadHeight: c.beam.restraint?.loadHeight ?? 'top-flange' } },
+		// Top-flange loading is the cautious assumption for lateral-torsional buckling.
+		beam: { ...c.beam, restraint: { lateral: settings.defaultRestraint, loadHeight: 'top-flange' } },
 		factors: factorsFromSet(set),
 		deflectionLimit: settings.deflectionLimit
 	};

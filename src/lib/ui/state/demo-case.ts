@@ -41,7 +41,8 @@ export function createBlankCase(): CaseFile {
 	return {
 		...demo,
 		title: '',
-		beam: { ...demo.beam, spans: [5], section: { designation: '' }, sectionLoss: 0 },
+		// No bearing lengths: the engine's own (cautious) defaults apply until the engineer enters them.
+		beam: { ...demo.beam, spans: [5], section: { designation: '' }, sectionLoss: 0, bearing: undefined, bearingLoads: undefined },
 		loads: []
 	};
 }
