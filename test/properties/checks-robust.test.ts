@@ -74,9 +74,9 @@ describe('design checks on random valid beams', () => {
 				expect(r.notices[0]).toMatch(/engineer of record/);
 				expect(r.summary.short.length).toBeLessThan(600);
 			}),
-			{ numRuns: 40 }
+			{ numRuns: 25 }
 		);
 		// Most generated beams are valid, so the property is not vacuous.
-		expect(reported).toBeGreaterThan(20);
+		expect(reported).toBeGreaterThan(12);
 	});
 });
