@@ -4,6 +4,7 @@ import type { CaseFile, CaseLoad } from './case-file';
 import { createDemoCase } from './demo-case';
 import { describeField } from './field-kinds';
 import { readPath, shiftListKeys, writePath } from './field-path';
+import { collectGeneral, mergeMessages } from './form-messages';
 import { formatFieldValue, parseFieldText } from './field-text';
 import type { CheckOutcome } from './check-outcome';
 
@@ -205,28 +206,3 @@ export class CheckForm {
 		clearTimeout(this.#timer);
 	}
 }
-
-function isFieldPath(c: CaseFile, path: string): boolean {
-	const value = readPath(c, path);
-	return value !== undefined && (value === null || typeof value !== 'object');
-}
-
-function mergeMessages(
-	local: Record<string, string>,
-	outcome: CheckOutcome | null,
-	c: CaseFile
-): Record<string, string> {
-	const merged: Record<string, string> = {};
-	if (outcome?.state === 'issues') {
-		for (const issue of outcome.issues) {
-			if (isFieldPath(c, issue.path)) merged[issue.path] ??= issue.message;
-		}
-	}
-	return { ...merged, ...local };
-}
-
-function collectGeneral(outcome: CheckOutcome | null, c: CaseFile): { path: string; message: string }[] {
-	if (outcome?.state !== 'issues') return [];
-	return outcome.issues.filter((issue) => !isFieldPath(c, issue.path));
-}
-
