@@ -61,7 +61,12 @@ function readSpans(value: unknown, issues: InputIssue[]): number[] | undefined {
 		addError(issues, 'beam.spans', 'spans-missing', message);
 		return undefined;
 	}
-	const rule = { label: 'span (m)', positive: true, maxAbs: PLAUSIBLE.span };
+	const rule = {
+		label: 'span (m)',
+		positive: true,
+		minAbs: PLAUSIBLE.spanMin,
+		maxAbs: PLAUSIBLE.span
+	};
 	const out = value.map((v, i) => readNumber(v, `beam.spans[${i}]`, issues, rule));
 	return out.every((v): v is number => v !== undefined) ? out : undefined;
 }

@@ -102,7 +102,8 @@ function parseLoad(
 	const onBeam = (v: unknown, key: string): number | undefined =>
 		readPosition(v, `${path}.${key}`, length, issues);
 	const force = (key: string, label: string): number | undefined => {
-		const v = readNumber(raw[key], `${path}.${key}`, issues, { label, maxAbs: PLAUSIBLE.load });
+		const rule = { label, minAbs: PLAUSIBLE.loadMin, maxAbs: PLAUSIBLE.load };
+		const v = readNumber(raw[key], `${path}.${key}`, issues, rule);
 		if (v !== undefined && v < 0) {
 			const message = 'A negative value acts upward; check that is intended.';
 			addWarning(issues, `${path}.${key}`, 'load-upward', message);

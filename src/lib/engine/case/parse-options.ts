@@ -48,7 +48,12 @@ export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFact
 	let ok = true;
 	for (const key of FACTOR_KEYS) {
 		if (value[key] === undefined) continue;
-		const rule = { label: `factor ${key}`, positive: true, maxAbs: PLAUSIBLE.factor };
+		const rule = {
+			label: `factor ${key}`,
+			positive: true,
+			minAbs: PLAUSIBLE.factorMin,
+			maxAbs: PLAUSIBLE.factor
+		};
 		const v = readNumber(value[key], `factors.${key}`, issues, rule);
 		if (v === undefined) ok = false;
 		else out[key] = v;
@@ -56,7 +61,12 @@ export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFact
 	const extra: { xi?: number; psi0?: number; permanentFavourable?: number } = {};
 	for (const key of EXTRA_KEYS) {
 		if (value[key] === undefined) continue;
-		const rule = { label: `factor ${key}`, min: 0, maxAbs: PLAUSIBLE.factor };
+		const rule = {
+			label: `factor ${key}`,
+			min: 0,
+			minAbs: PLAUSIBLE.factorMin,
+			maxAbs: PLAUSIBLE.factor
+		};
 		const v = readNumber(value[key], `factors.${key}`, issues, rule);
 		if (v === undefined) ok = false;
 		else extra[key] = v;

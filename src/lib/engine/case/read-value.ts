@@ -33,6 +33,11 @@ export interface NumberRule {
 	positive?: boolean;
 	/** Largest allowed size |value|: a plausibility bound that keeps results finite. */
 	maxAbs?: number;
+	/**
+	 * Smallest size a non-zero value may have. Below it a number carries no meaning on site, and
+	 * ratios to it (e.g. allowed load ÷ entered load) could overflow to Infinity.
+	 */
+	minAbs?: number;
 }
 
 /**
@@ -42,10 +47,16 @@ export interface NumberRule {
 export const PLAUSIBLE = {
 	/** Span, m. */
 	span: 1000,
+	/** Shortest span, m. */
+	spanMin: 0.01,
 	/** Point load (kN) or line load (kN/m). */
 	load: 1e6,
+	/** Smallest non-zero load, kN or kN/m (1 N). */
+	loadMin: 1e-3,
 	/** Partial factor or combination value. */
 	factor: 100,
+	/** Smallest non-zero partial factor or combination value. */
+	factorMin: 1e-3,
 	/** Length in mm (bearing). */
 	length: 1e5
 } as const;
@@ -70,6 +81,11 @@ export function readNumber(
 	}
 	if (rule.min !== undefined && value < rule.min) {
 		addError(issues, path, 'below-minimum', `The ${rule.label} must be at least ${rule.min}.`);
+		return undefined;
+	}
+	if (rule.minAbs !== undefined && value !== 0 && Math.abs(value) < rule.minAbs) {
+		const message = `The ${rule.label} is too small to mean anything: use 0 or at least ${rule.minAbs}.`;
+		addError(issues, path, 'too-small', message);
 		return undefined;
 	}
 	if (rule.maxAbs !== undefined && Math.abs(value) > rule.maxAbs) {
