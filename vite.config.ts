@@ -36,6 +36,7 @@ export default defineConfig({
 		environment: 'node',
 		// Every test must assert something: a test that cannot fail is a defect.
 		expect: { requireAssertions: true },
+		setupFiles: ['test/support/fast-check-seed.ts'],
 		testTimeout: 60_000
 	}
 });
