@@ -1,7 +1,7 @@
 import { sveltekit } from '@sveltejs/kit/vite';
 import { SvelteKitPWA } from '@vite-pwa/sveltekit';
 import { defineConfig } from 'vitest/config';
-import { appManifest } from './src/lib/pwa/manifest';
+import { appManifest } from './src/lib/pwa/manifest.ts';
 
 export default defineConfig({
 	plugins: [
