@@ -9,6 +9,8 @@ export class PwaStatus {
 	updateReady = $state(false);
 	offlineReady = $state(false);
 	online = $state(true);
+	/** An older copy of the app in another tab keeps the saved checks from opening. */
+	storageBlocked = $state(false);
 	#update: (reload?: boolean) => Promise<void> = async () => {};
 
 	/** Starts registration; call once from the root layout on mount. */

@@ -4,12 +4,16 @@ import {
 	exportBackup,
 	importBackup,
 	listChecks,
+	purgeDeleted,
 	undoDelete,
 	type CheckRecord,
 	type DeletedCheck
 } from '$lib/storage';
 import { version as APP_VERSION } from '../../../../package.json';
 import { connectStore } from './store-connection';
+
+/** Deleted checks stay restorable this long, then go for good (keeps the database small). */
+const KEEP_DELETED_DAYS = 30;
 
 /**
  * The saved-checks screen: the list (newest first) with search, duplicate, delete with undo,
@@ -24,6 +28,7 @@ export class SavedChecks {
 	/** Plain result of the last action (import counts, a refusal, a storage failure). */
 	message = $state('');
 	available = $state(true);
+	#purged = false;
 
 	async refresh(): Promise<void> {
 		const store = await connectStore();
@@ -32,6 +37,12 @@ export class SavedChecks {
 			this.loaded = true;
 			this.message = 'This browser does not let the app store data, so saved checks are not available here.';
 			return;
+		}
+		if (!this.#purged) {
+			this.#purged = true;
+			const before = new Date(Date.now() - KEEP_DELETED_DAYS * 86_400_000);
+			// A failed purge loses nothing: the deleted checks simply stay until the next visit.
+			await purgeDeleted(store, { before });
 		}
 		const listed = await listChecks(store, { search: this.search });
 		if (listed.ok) this.records = listed.value;

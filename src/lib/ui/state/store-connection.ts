@@ -10,11 +10,16 @@ let opening: Promise<CheckStore | null> | null = null;
  */
 export function connectStore(): Promise<CheckStore | null> {
 	opening ??= openStore(undefined, {
+		// An older tab holds the database open; the upgrade waits until it is closed.
+		onBlocked: () => (pwaStatus.storageBlocked = true),
 		onStatus: (status) => {
 			if (status === 'update-needed') pwaStatus.requestReload();
 			// A closed or ended connection is reopened on the next use.
 			if (status !== 'open') opening = null;
 		}
-	}).then((result) => (result.ok ? result.store : null));
+	}).then((result) => {
+		pwaStatus.storageBlocked = false;
+		return result.ok ? result.store : null;
+	});
 	return opening;
 }
