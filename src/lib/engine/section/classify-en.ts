@@ -1,4 +1,5 @@
 import type { ChsDims, IDims, ResolvedSection, RhsDims } from './types';
+import { computeEpsilon } from '../material/epsilon';
 
 /** One compression element and its class (EN 1993-1-1 Table 5.2). */
 export interface EnElementClass {
@@ -68,7 +69,7 @@ function listElements(section: ResolvedSection, e: number): EnElementClass[] {
  * // 1 (flange 6.92 ≤ 8.32, web 44.2 ≤ 66.6)
  */
 export function classifySectionEN(section: ResolvedSection, fy: number): EnClassification {
-	const epsilon = Math.sqrt(235 / fy);
+	const epsilon = computeEpsilon(fy);
 	if (section.shape === 'known-mp' || section.dims === null) {
 		const note =
 			'Only Mp is known: the class cannot be found from the dimensions; ' +

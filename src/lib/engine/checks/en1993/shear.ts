@@ -3,6 +3,7 @@
  * buckling (EN 1993-1-5 section 5) would have to be checked.
  */
 import type { SectionShape } from '../../section/types';
+import { computeEpsilon } from '../../material/epsilon';
 
 /** Dimensions and area needed for the shear area, mm and mm². */
 export interface ShearAreaInput {
@@ -85,7 +86,7 @@ export function checkWebSlenderness(o: {
 	fy: number;
 	eta: number;
 }): WebSlenderness {
-	const epsilon = Math.sqrt(235 / o.fy);
+	const epsilon = computeEpsilon(o.fy);
 	const ratio = o.hw / o.tw;
 	const limit = (72 * epsilon) / o.eta;
 	return { ratio, limit, needsShearBucklingCheck: ratio > limit };

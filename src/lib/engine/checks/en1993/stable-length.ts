@@ -4,6 +4,7 @@
  * I sections with h/tf ≤ 40ε under linear moment and no significant axial force,
  * Lstable = 35·ε·iz for 0.625 ≤ ψ ≤ 1 and (60 − 40ψ)·ε·iz for −1 ≤ ψ ≤ 0.625.
  */
+import { computeEpsilon } from '../../material/epsilon';
 
 /** Inputs of {@link computeStableLength}; mm and N/mm². */
 export interface StableLengthInput {
@@ -22,7 +23,7 @@ export interface StableLengthInput {
  * computeStableLength({ fy: 275, iz: 38.6, h: 303.4, tf: 10.2, psi: 0 }) // ≈ 2141 mm
  */
 export function computeStableLength(o: StableLengthInput): number | null {
-	const epsilon = Math.sqrt(235 / o.fy);
+	const epsilon = computeEpsilon(o.fy);
 	if (o.h / o.tf > 40 * epsilon) return null;
 	const psi = Math.max(-1, Math.min(1, o.psi));
 	const factor = psi >= 0.625 ? 35 : 60 - 40 * psi;
