@@ -37,12 +37,18 @@ function simpleBeam(designation: string, grade: string, loads: Load[], extra: Pa
 const g4: Load = { kind: 'uniform', from: 0, to: 6000, value: 4, action: 'permanent' };
 const q10: Load = { kind: 'point', x: 3000, value: 10e3, action: 'temporary' };
 
+/**
+ * λ on the central point load of the 6 m simply supported beam above when the midspan moment
+ * reaches M: 1.5·Q·λ·L/4 + 1.35·g·L²/8 = M (statics of a simply supported beam; EN 1990 6.10 factors).
+ */
+const lambdaAtMidspanMoment = (M: number) => ((4 * M) / 6000 - (1.35 * 4 * 6000) / 2) / (1.5 * 10e3);
+
 describe('routes by section class', () => {
 	it('Class 1 restrained: plastic collapse, λ = (4Mp/L − 1.35·g·L/2)/(1.5·Q)', () => {
 		const input = simpleBeam('UB 305x165x40', 'S275', [g4, q10]);
 		const out = runDesignChecks(input);
 		const Mp = input.sections[0].props!.Wply * 275;
-		const lambda = ((4 * Mp) / 6000 - (1.35 * 4 * 6000) / 2) / (1.5 * 10e3);
+		const lambda = lambdaAtMidspanMoment(Mp);
 		expect(out.verdict.route).toBe('plastic');
 		expect(Math.abs(out.collapse!.loadFactor! / lambda - 1)).toBeLessThan(1e-6);
 		expect(out.verdict.verdict).toBe('pass');
@@ -55,7 +61,7 @@ describe('routes by section class', () => {
 		expect(out.sectionClass).toBe(2);
 		expect(out.verdict.route).toBe('elastic-plastic-section');
 		const Mp = input.sections[0].props!.Wply * input.grades[0]!.fy;
-		const lambda = ((4 * Mp) / 6000 - (1.35 * 4 * 6000) / 2) / (1.5 * 10e3);
+		const lambda = lambdaAtMidspanMoment(Mp);
 		expect(Math.abs(out.verdict.loadFactor! / lambda - 1)).toBeLessThan(1e-6);
 	});
 
@@ -65,7 +71,7 @@ describe('routes by section class', () => {
 		expect(out.sectionClass).toBe(3);
 		expect(out.verdict.route).toBe('elastic-first-yield');
 		const Mel = input.sections[0].props!.Wely * input.grades[0]!.fy;
-		const lambda = ((4 * Mel) / 6000 - (1.35 * 4 * 6000) / 2) / (1.5 * 10e3);
+		const lambda = lambdaAtMidspanMoment(Mel);
 		expect(Math.abs(out.verdict.loadFactor! / lambda - 1)).toBeLessThan(1e-6);
 	});
 });
