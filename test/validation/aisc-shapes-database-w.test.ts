@@ -10,10 +10,8 @@ import { describe, expect, it } from 'vitest';
 import { listSections } from '../../src/lib/engine/section/index';
 import { W_ROWS } from '../../src/lib/engine/section/tables/w-shapes';
 import { US } from '../../src/lib/engine/units';
+import { expectRelSoft as expectRel } from '../support/expect-rel';
 
-const expectRel = (actual: number, expected: number, rel: number): void => {
-	expect.soft(Math.abs(actual - expected), `${actual} vs ${expected}`).toBeLessThanOrEqual(rel * Math.abs(expected));
-};
 const ws = listSections().filter((s) => s.family === 'W');
 const IN = US.inToMm;
 

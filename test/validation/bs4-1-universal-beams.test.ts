@@ -10,10 +10,8 @@ import { describe, expect, it } from 'vitest';
 import { listSections } from '../../src/lib/engine/section/index';
 import { UB_ROWS } from '../../src/lib/engine/section/tables/ub';
 import type { IDims } from '../../src/lib/engine/section/types';
+import { expectRelSoft as expectRel } from '../support/expect-rel';
 
-const expectRel = (actual: number, expected: number, rel: number): void => {
-	expect.soft(Math.abs(actual - expected), `${actual} vs ${expected}`).toBeLessThanOrEqual(rel * Math.abs(expected));
-};
 const ubs = listSections().filter((s) => s.family === 'UB');
 
 describe('UB rows (BS 4-1:2005 / EN 10365:2017)', () => {

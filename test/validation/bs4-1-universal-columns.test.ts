@@ -7,10 +7,8 @@
 import { describe, expect, it } from 'vitest';
 import { listSections } from '../../src/lib/engine/section/index';
 import { UC_ROWS } from '../../src/lib/engine/section/tables/uc';
+import { expectRelSoft as expectRel } from '../support/expect-rel';
 
-const expectRel = (actual: number, expected: number, rel: number): void => {
-	expect.soft(Math.abs(actual - expected), `${actual} vs ${expected}`).toBeLessThanOrEqual(rel * Math.abs(expected));
-};
 const ucs = listSections().filter((s) => s.family === 'UC');
 
 describe('UC rows (BS 4-1:2005 / EN 10365:2017)', () => {

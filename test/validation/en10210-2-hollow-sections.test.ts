@@ -7,10 +7,8 @@
 import { describe, expect, it } from 'vitest';
 import { findSection, listSections } from '../../src/lib/engine/section/index';
 import type { RhsDims } from '../../src/lib/engine/section/types';
+import { expectRelSoft as expectRel } from '../support/expect-rel';
 
-const expectRel = (actual: number, expected: number, rel: number): void => {
-	expect.soft(Math.abs(actual - expected), `${actual} vs ${expected}`).toBeLessThanOrEqual(rel * Math.abs(expected));
-};
 const hollow = listSections().filter((s) => ['SHS', 'RHS', 'CHS'].includes(s.family));
 
 describe('hollow-section rows (EN 10210-2)', () => {

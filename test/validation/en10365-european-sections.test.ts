@@ -9,10 +9,8 @@ import { describe, expect, it } from 'vitest';
 import { listSections } from '../../src/lib/engine/section/index';
 import { HEA_ROWS, HEB_ROWS, IPE_ROWS } from '../../src/lib/engine/section/tables/european';
 import type { IDims } from '../../src/lib/engine/section/types';
+import { expectRelSoft as expectRel } from '../support/expect-rel';
 
-const expectRel = (actual: number, expected: number, rel: number): void => {
-	expect.soft(Math.abs(actual - expected), `${actual} vs ${expected}`).toBeLessThanOrEqual(rel * Math.abs(expected));
-};
 const european = listSections().filter((s) => ['IPE', 'HEA', 'HEB'].includes(s.family));
 
 describe('IPE, HEA and HEB rows (EN 10365:2017)', () => {

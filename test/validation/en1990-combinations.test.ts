@@ -14,10 +14,7 @@ import { resolveFactors } from '../../src/lib/engine/checks/en1993/factors';
 import { listLoadArrangements } from '../../src/lib/engine/checks/load-arrangements';
 import { applyArrangement } from '../../src/lib/engine/checks/factor-loads';
 import type { Load } from '../../src/lib/engine/model/types';
-
-const expectRel = (actual: number, expected: number, rel: number): void => {
-	expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
-};
+import { expectRel } from '../support/expect-rel';
 
 const L = 6000;
 const Mp = 623e3 * 275;

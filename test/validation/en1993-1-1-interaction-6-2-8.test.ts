@@ -10,10 +10,7 @@ import {
 	computeReducedMomentResistance,
 	computeShearReduction
 } from '../../src/lib/engine/checks/en1993/interaction';
-
-const expectRel = (actual: number, expected: number, rel: number): void => {
-	expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
-};
+import { expectRel } from '../support/expect-rel';
 
 const vplRd = (2006.76 * 275) / Math.sqrt(3); // eq. 6.18 with Av of 6.2.6(3)(a)
 const Aw = (303.4 - 2 * 10.2) * 6; // hw·tw = 1698 mm²

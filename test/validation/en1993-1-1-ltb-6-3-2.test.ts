@@ -18,10 +18,7 @@ import {
 	IMPERFECTION_FACTORS,
 	selectBucklingCurve
 } from '../../src/lib/engine/checks/en1993/ltb-curves';
-
-const expectRel = (actual: number, expected: number, rel: number): void => {
-	expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
-};
+import { expectRel } from '../support/expect-rel';
 
 const E = 210_000;
 const G = 81_000;

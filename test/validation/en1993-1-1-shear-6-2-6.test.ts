@@ -11,10 +11,7 @@ import {
 	computePlasticShearResistance,
 	computeShearArea
 } from '../../src/lib/engine/checks/en1993/shear';
-
-const expectRel = (actual: number, expected: number, rel: number): void => {
-	expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
-};
+import { expectRel } from '../support/expect-rel';
 
 // 305x165x40 UB: h 303.4, b 165.0, tw 6.0, tf 10.2, r 8.9 (BS 4-1), A 51.3 cm² (SCI P363, from memory).
 const ub305 = { shape: 'I' as const, A: 5130, h: 303.4, b: 165, tw: 6, tf: 10.2, r: 8.9 };

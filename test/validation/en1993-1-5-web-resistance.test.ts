@@ -10,10 +10,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { computeWebResistance } from '../../src/lib/engine/checks/en1993/web';
+import { expectRel } from '../support/expect-rel';
 
-const expectRel = (actual: number, expected: number, rel: number): void => {
-	expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
-};
 const E = 210_000;
 const ub = { hw: 303.4 - 2 * 10.2, tw: 6, bf: 165, tf: 10.2, fyw: 275, fyf: 275, E, gammaM1: 1 };
 const uc = { hw: 254.1 - 2 * 14.2, tw: 8.6, bf: 254.6, tf: 14.2, fyw: 275, fyf: 275, E, gammaM1: 1 };

@@ -19,10 +19,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { checkCase } from '../../src/lib/engine/index';
-
-const expectRel = (actual: number, expected: number, rel: number): void => {
-	expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
-};
+import { expectRel } from '../support/expect-rel';
 
 const caseFile = (extra: Record<string, unknown> = {}, beam: Record<string, unknown> = {}, q = 10) => ({
 	format: 'hingepoint.case',

@@ -8,11 +8,7 @@ import { describe, expect, it } from 'vitest';
 import { checkCase, ENGINE_VERSION, type CheckReport } from '../../../src/lib/engine/index';
 import { ENGINEER_NOTICE_SHORT } from '../../../src/lib/engine/notice';
 import { E_STEEL, GRAVITY } from '../../../src/lib/engine/units';
-
-const expectRel = (actual: number | null | undefined, expected: number, rel = 1e-9): void => {
-	expect(actual).not.toBeNull();
-	expect(Math.abs((actual as number) - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
-};
+import { expectRel } from '../../support/expect-rel';
 
 /** Simply supported beam of given Mp (kNm) and span (m) with the given loads (file units). */
 interface SimpleCase {

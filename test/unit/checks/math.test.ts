@@ -7,10 +7,11 @@ import { describe, expect, it } from 'vitest';
 import { computeSymmetricEigenvalues } from '../../../src/lib/engine/checks/symmetric-eigen';
 import { findMultiplierAtCapacity } from '../../../src/lib/engine/checks/root-find';
 import { computeSegmentMoment } from '../../../src/lib/engine/checks/segment-moment';
+import { expectRel as expectRelWithin } from '../../support/expect-rel';
 
-const expectRel = (actual: number, expected: number, rel: number): void => {
-	expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected) + 1e-12);
-};
+// Absolute slack for eigen- and root values that are exactly zero.
+const expectRel = (actual: number, expected: number, rel: number): void =>
+	expectRelWithin(actual, expected, rel, { absolute: 1e-12 });
 
 describe('computeSymmetricEigenvalues', () => {
 	it('[[2, 1], [1, 2]] has eigenvalues 1 and 3 (closed form (a ± b))', () => {

@@ -7,6 +7,7 @@ import fc from 'fast-check';
 import { formatQuantity, fromDisplay, toDisplay } from '../../../src/lib/ui/format';
 import type { Quantity } from '../../../src/lib/ui/format';
 import { US } from '../../../src/lib/engine/units';
+import { expectRel } from '../../support/expect-rel';
 
 const IN_M = 0.0254; // NIST SP 811 B.8, exact
 const FT_M = 12 * IN_M; // NIST SP 811 B.8, exact (= 0.3048)
@@ -14,10 +15,6 @@ const LBF_N = 0.45359237 * 9.80665; // NIST SP 811 B.8 (pound-force), exact by d
 const KIP_KN = (1000 * LBF_N) / 1000;
 const KSI_MPA = (1000 * LBF_N) / (IN_M * 1000) ** 2; // kip per square inch, in N/mm²
 const REL = 1e-12;
-
-function expectRel(actual: number, expected: number, rel: number): void {
-	expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
-}
 
 describe('toDisplay and fromDisplay in US units', () => {
 	it('converts one display unit of each quantity to its SI value (NIST SP 811 App. B)', () => {

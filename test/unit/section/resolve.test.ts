@@ -6,10 +6,8 @@
 import { describe, expect, it } from 'vitest';
 import { resolveSection } from '../../../src/lib/engine/section/index';
 import type { IDims, RhsDims, SectionSpec } from '../../../src/lib/engine/section/index';
+import { expectRel } from '../../support/expect-rel';
 
-const expectRel = (actual: number, expected: number, rel: number): void => {
-	expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
-};
 function resolveOk(spec: SectionSpec, loss = 0) {
 	const r = resolveSection(spec, { loss });
 	if (!r.ok) throw new Error(JSON.stringify(r.issues));
