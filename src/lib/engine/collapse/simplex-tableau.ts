@@ -106,6 +106,14 @@ export function iterate(lp: LinearProgram, phase: 1 | 2): boolean {
 		let ratio = Infinity;
 		for (let i = 0; i < d; i++) {
 			const a = T[i][enter];
+			// An artificial left in the basis at zero must stay at zero: it leaves first, whatever
+			// the sign of its entry, or the dual's equations would quietly stop holding.
+			if (phase === 2 && basis[i] < d && Math.abs(a) > PIVOT_TOL) {
+				rhs[i] = 0;
+				ratio = 0;
+				leave = i;
+				break;
+			}
 			if (a <= PIVOT_TOL) continue;
 			const q = rhs[i] / a;
 			if (q < ratio - 1e-15 || (q <= ratio + 1e-15 && leave >= 0 && basis[i] < basis[leave])) {

@@ -30,9 +30,30 @@ export type LinearProgramResult =
 			objective: number;
 			/** Largest G y − h over the rows (≤ 0 up to rounding when all is well). */
 			residual: number;
+			/** Largest relative error of the dual equations Gᵀw = c. */
+			dualError: number;
 	  }
 	| { status: 'unbounded' } /* cᵀy grows without limit (the dual has no solution) */
 	| { status: 'infeasible' }; /* no y satisfies G y ≤ h (the dual is unbounded) */
+
+/** Largest relative error of Gᵀw = c accepted from a re-inverted tableau. */
+const DUAL_TOL = 1e-9;
+
+/** Largest |Gᵀw − c| relative to the size of the terms. */
+function measureDualError(lp: LinearProgram, w: number[]): number {
+	let worst = 0;
+	for (let i = 0; i < lp.d; i++) {
+		let s = -lp.c[i];
+		let size = Math.abs(lp.c[i]);
+		for (let j = 0; j < w.length; j++) {
+			if (w[j] === 0) continue;
+			s += lp.G[j][i] * w[j];
+			size += Math.abs(lp.G[j][i] * w[j]);
+		}
+		worst = Math.max(worst, Math.abs(s) / Math.max(size, 1e-300));
+	}
+	return worst;
+}
 
 /** Most negative reduced cost h_j − G_j·y over all rows, computed from the data. */
 function findWorstRow(lp: LinearProgram, y: number[]): number {
@@ -59,6 +80,9 @@ export function solveProgram(lp: LinearProgram): LinearProgramResult {
 			if (!reinvert(lp)) break;
 			result = solvePhaseTwo(lp);
 			if (result.status !== 'optimal') break;
+			// A rebuilt near-singular basis can give a "solution" whose hinge rotations no longer
+			// balance (Gᵀw ≠ c): its objective is then no bound at all, so it never replaces one.
+			if (result.dualError > DUAL_TOL) break;
 			if (best.status !== 'optimal' || result.residual < best.residual) best = result;
 		}
 		return best;
@@ -114,7 +138,8 @@ function readSolution(lp: LinearProgram): LinearProgramResult {
 	}
 	let objective = 0;
 	for (let i = 0; i < d; i++) objective += c[i] * y[i];
-	return { status: 'optimal', y, w, objective, residual: -findWorstRow(lp, y) };
+	const dualError = measureDualError(lp, w);
+	return { status: 'optimal', y, w, objective, residual: -findWorstRow(lp, y), dualError };
 }
 
 /** Maximises cᵀy subject to G y ≤ h with y free, in one call. */
