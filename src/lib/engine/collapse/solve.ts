@@ -6,7 +6,9 @@
 import { assertFinite } from '../model/issue';
 import { certifyField } from './certified-field';
 import { measureLoadSize, normaliseProblem, type ProblemScale } from './normalise';
+import { localiseSpace } from './local-basis';
 import { solveEquilibrium } from './nullspace';
+import { isNumericalBreakdown, reportNotProved } from './not-proved';
 import { solveStaticProgram } from './lower-bound';
 import { buildFieldModel } from './statics';
 import { buildStations } from './stations';
@@ -30,7 +32,7 @@ export function findFixedLoadField(p: CollapseProblem): FixedLoadField {
 	if (p.fixedLoads.length === 0) return { z: zero, slack: 1 };
 	const grid = buildStations(model, p.capacity);
 	const lambdaRow = zero.map((_, i) => (i === model.lambdaIndex ? 1 : 0));
-	const space = solveEquilibrium([...model.E, lambdaRow], [...model.f, 0]);
+	const space = localiseSpace(model, solveEquilibrium([...model.E, lambdaRow], [...model.f, 0]));
 	const sol = solveStaticProgram({ model, space, ...grid, objective: 'margin' });
 	if (sol.status !== 'optimal') throw new Error(`invariant: margin program ${sol.status}`);
 	// The program's margin is exact once converged; the field's own slack is measured where used.
@@ -64,7 +66,7 @@ export function reportFixedLoadFailure(
 function solveLambdaProgram(p: CollapseProblem, fieldTolerance?: number) {
 	const model = buildFieldModel(p);
 	const grid = buildStations(model, p.capacity);
-	const space = solveEquilibrium(model.E, model.f);
+	const space = localiseSpace(model, solveEquilibrium(model.E, model.f));
 	const sol = solveStaticProgram({ model, space, ...grid, objective: 'lambda', fieldTolerance });
 	return { model, grid, sol, space };
 }
@@ -116,7 +118,13 @@ export function solveCollapse(problem: CollapseProblem): CollapseResult {
 		return { status: 'unbounded', message: 'There is no variable load to increase.' };
 	}
 	const { problem: p, scale } = normaliseProblem(problem);
-	const fixedField = findFixedLoadField(p);
-	if (fixedField.slack < -1e-12) return reportFixedLoadFailure(fixedField.slack);
-	return solveNormalised(p, scale, fixedField);
+	try {
+		const fixedField = findFixedLoadField(p);
+		if (fixedField.slack < -1e-12) return reportFixedLoadFailure(fixedField.slack);
+		return solveNormalised(p, scale, fixedField);
+	} catch (e) {
+		// Rounding can defeat the programs on very long beams: say so rather than throw.
+		if (isNumericalBreakdown(e)) return reportNotProved(problem);
+		throw e;
+	}
 }
