@@ -6,6 +6,14 @@
  */
 import { solveCollapse } from '../collapse/index';
 import { computeElasticLimitFactor } from '../elastic/index';
+import {
+	buildPieceGrid,
+	combineMomentPieces,
+	findPieceLimitFactor,
+	fitMomentPieces,
+	type MomentPieces
+} from '../elastic/moment-pieces';
+import { splitLoadsBySpan } from '../elastic/element-loads';
 import type { Load } from '../model/types';
 import type { CheckContext } from './context';
 import { applyArrangement } from './factor-loads';
@@ -60,12 +68,55 @@ export function describePlasticBending(ctx: CheckContext, g: PlasticArrangement)
 	};
 }
 
-/** Bending row of an elastic route; `resistance` per span, N·mm. */
-export function checkElasticBending(
+type ElasticBendingOptions = { EI: number[]; resistance: number[]; elastic: boolean };
+type Worst = { arr: LoadArrangement; u: number; factor: number | null; x?: number };
+
+/**
+ * Bending row of an elastic route; `resistance` per span, N·mm. Each load group's moment is
+ * fitted once as cubic pieces and every arrangement is a weighted sum of them (elastic analysis
+ * is linear), so no arrangement is analysed again.
+ */
+export function checkElasticBending(ctx: CheckContext, o: ElasticBendingOptions): CheckResult {
+	const groups = ctx.effects.groups;
+	const loadsBySpan = splitLoadsBySpan(ctx.beam, ctx.loads);
+	const grid = buildPieceGrid(ctx.nodes, loadsBySpan);
+	const pieces = groups.map((g) => fitMomentPieces(g.result, grid));
+	const zero = grid.breakpoints.map((bp) => bp.slice(1).map(() => [0, 0, 0, 0]));
+	const factorOf = (fixed: MomentPieces, variable: MomentPieces) => {
+		const f = findPieceLimitFactor(fixed, variable, grid, o.resistance);
+		return f.status === 'reached' ? f : f.status === 'fails-under-fixed' ? f : null;
+	};
+	const inverse = (loads: MomentPieces) => {
+		const f = factorOf(zero, loads);
+		return f && f.status === 'reached' ? 1 / f.factor : 0;
+	};
+	let worst: Worst | null = null;
+	let existing = 0;
+	for (const arr of ctx.arrangements) {
+		const fixedW = groups.map((g) => (g.kind === 'temporary' ? 0 : g.weight(arr)));
+		const allW = groups.map((g) => g.weight(arr));
+		const fixed = combineMomentPieces(pieces, fixedW);
+		const variable = combineMomentPieces(pieces, allW.map((w, i) => w - fixedW[i]));
+		const f = factorOf(fixed, variable);
+		const factor = f === null ? null : f.status === 'reached' ? f.factor : 0;
+		const u = inverse(combineMomentPieces(pieces, allW));
+		existing = Math.max(existing, inverse(fixed));
+		const lower = factor !== null && (worst?.factor == null || factor < worst.factor);
+		if (!worst || lower) worst = { arr, u, factor, x: f?.x };
+		worst.u = Math.max(worst.u, u);
+	}
+	return describeElasticBending(worst, existing, o.elastic);
+}
+
+/**
+ * The same row by analysing every arrangement afresh (the former way, kept to check the fast
+ * one against in tests).
+ */
+export function checkElasticBendingByReanalysis(
 	ctx: CheckContext,
-	o: { EI: number[]; resistance: number[]; elastic: boolean }
+	o: ElasticBendingOptions
 ): CheckResult {
-	let worst: { arr: LoadArrangement; u: number; factor: number | null; x?: number } | null = null;
+	let worst: Worst | null = null;
 	let existing = 0;
 	for (const arr of ctx.arrangements) {
 		const d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement: arr });
@@ -91,6 +142,15 @@ export function checkElasticBending(
 		if (!worst || lower) worst = { arr, u, factor, x };
 		worst.u = Math.max(worst.u, u);
 	}
+	return describeElasticBending(worst, existing, o.elastic);
+}
+
+function describeElasticBending(
+	worst: Worst | null,
+	existing: number,
+	elastic: boolean
+): CheckResult {
+	const o = { elastic };
 	if (!worst) throw new Error('invariant: at least one load arrangement');
 	return {
 		id: 'bending',

@@ -27,6 +27,8 @@ export interface LoadGroup {
 	at(x: number, side: Side): Effect;
 	/** Weight of the group in an arrangement (its partial factor, 0 when patterned off). */
 	weight(arrangement: LoadArrangement): number;
+	/** The group's characteristic analysis. */
+	result: ElasticResult;
 }
 
 /** Analysed groups, plus readers for one arrangement. */
