@@ -9,39 +9,16 @@ import { parseGeometry } from './parse-geometry';
 import { parseLoads } from './parse-loads';
 import { parseBearing, parseCheckSettings, parseFactors, parseRestraint } from './parse-options';
 import { parseSections } from './parse-section';
-import { addError, isRecord, readNumber, warnUnknownKeys } from './read-value';
-import { CASE_FORMAT, CASE_VERSION, type CaseFile, type CaseModel } from './types';
-
-const TOP_KEYS = [
-	'format',
-	'version',
-	'title',
-	'beam',
-	'loads',
-	'factors',
-	'deflectionLimit',
-	'deflectionLimitTotal',
-	'deflectionGoverns',
-	'eta',
-	'place'
-];
-const BEAM_KEYS = [
-	'spans',
-	'supports',
-	'joints',
-	'section',
-	'grade',
-	'sectionLoss',
-	'selfWeight',
-	'restraint',
-	'bearing',
-	'bearingLoads',
-	'gradeConfirmed'
-];
+import { echoFile, FILE_KEYS } from './echo-file';
+import { checkJsonShape } from './json-shape';
+import { RANGES, SIZE_LIMITS } from './limits';
+import { addError, isRecord, readNumber, readText, warnUnknownKeys } from './read-value';
+import { CASE_FORMAT, CASE_VERSION, type CaseModel } from './types';
 
 /**
  * Validates a parsed JSON value as a case file and converts it to internal units.
- * Unknown keys are warnings; everything else wrong is an error with its path.
+ * Unknown keys are warnings and are dropped; everything else wrong is an error with its path.
+ * Sizes, text lengths and number ranges are those of ./limits.ts.
  * @example
  * parseCase({ format: 'hingepoint.case', version: 1, beam: { spans: [-6], … }, loads: [] })
  * // { ok: false, issues: [{ path: 'beam.spans[0]', code: 'not-positive', … }] }
@@ -53,11 +30,13 @@ export function parseCase(json: unknown): Checked<CaseModel> {
 		addError(issues, '', 'not-an-object', message);
 		return { ok: false, issues };
 	}
-	warnUnknownKeys(json, TOP_KEYS, '', issues);
+	// Bounded before any reader walks it.
+	if (!checkJsonShape(json, issues)) return { ok: false, issues };
+	warnUnknownKeys(json, FILE_KEYS.top, '', issues);
 	checkHeader(json, issues);
 	const beam = isRecord(json.beam) ? json.beam : undefined;
 	if (!beam) addError(issues, 'beam', 'beam-missing', 'The case needs a "beam" object.');
-	else warnUnknownKeys(beam, BEAM_KEYS, 'beam', issues);
+	else warnUnknownKeys(beam, FILE_KEYS.beam, 'beam', issues);
 	const b = beam ?? {};
 	const line = beam ? parseGeometry(b, issues) : undefined;
 	const spansM = readSpanList(b.spans);
@@ -66,7 +45,7 @@ export function parseCase(json: unknown): Checked<CaseModel> {
 			? 0
 			: readNumber(b.sectionLoss, 'beam.sectionLoss', issues, {
 					label: 'section loss (mm per face)',
-					min: 0
+					range: RANGES.sectionLoss
 				});
 	if (b.selfWeight !== undefined && typeof b.selfWeight !== 'boolean')
 		addError(issues, 'beam.selfWeight', 'not-a-boolean', 'selfWeight must be true or false.');
@@ -131,8 +110,9 @@ function checkHeader(json: Record<string, unknown>, issues: InputIssue[]): void 
 	} else if (json.version !== CASE_VERSION) {
 		addError(issues, 'version', 'version-unknown', `"version" must be ${CASE_VERSION}.`);
 	}
-	if (json.title !== undefined && typeof json.title !== 'string')
-		addError(issues, 'title', 'not-a-string', 'The title must be text.');
+	if (json.title !== undefined) {
+		readText(json.title, 'title', issues, { label: 'title', max: SIZE_LIMITS.title });
+	}
 }
 
 /** The span list in m when every entry is a positive number (parseGeometry reports the rest). */
@@ -140,11 +120,4 @@ function readSpanList(value: unknown): number[] | undefined {
 	if (!Array.isArray(value) || value.length === 0) return undefined;
 	const ok = value.every((v) => typeof v === 'number' && Number.isFinite(v) && v > 0);
 	return ok ? (value as number[]) : undefined;
-}
-
-/** The known parts of the file, as read (file units), without unknown keys. */
-function echoFile(json: Record<string, unknown>): CaseFile {
-	const out: Record<string, unknown> = {};
-	for (const key of TOP_KEYS) if (json[key] !== undefined) out[key] = json[key];
-	return structuredClone(out) as unknown as CaseFile;
 }

@@ -1,11 +1,12 @@
 /**
  * Reads the beam geometry of a case file (spans in m, supports, joints) into a BeamLine in mm.
  */
-import { findMechanismIssues } from '../elastic/mechanism';
 import type { InputIssue } from '../model/issue';
+import { validateBeamLine } from '../model/validate-beam';
 import type { BeamLine, JointKind, SupportKind } from '../model/types';
 import { mToMm } from '../units';
-import { addError, PLAUSIBLE, readChoice, readNumber } from './read-value';
+import { RANGES, SIZE_LIMITS } from './limits';
+import { addError, readArray, readChoice, readNumber } from './read-value';
 
 const SUPPORTS: readonly SupportKind[] = ['pin', 'fixed', 'free'];
 const JOINTS: readonly JointKind[] = ['continuous', 'simple'];
@@ -22,7 +23,9 @@ export function parseGeometry(
 	const before = issues.length;
 	const spans = readSpans(beam.spans, issues);
 	// List lengths can be checked even when a span value is wrong.
-	const n = Array.isArray(beam.spans) && beam.spans.length > 0 ? beam.spans.length : undefined;
+	const count = Array.isArray(beam.spans) ? beam.spans.length : 0;
+	if (count > SIZE_LIMITS.spans) return undefined;
+	const n = count > 0 ? count : undefined;
 	const supportCount = n === undefined ? undefined : n + 1;
 	const supports = readList(beam.supports, 'beam.supports', supportCount, issues, (v, p) =>
 		readChoice(v, p, issues, SUPPORTS, 'support')
@@ -38,9 +41,11 @@ export function parseGeometry(
 		addError(issues, 'beam.supports', 'no-support', 'The beam needs at least one support.');
 	if (issues.length > before) return undefined;
 	const line: BeamLine = { spans: spans.map(mToMm), supports, joints };
-	const mech = findMechanismIssues(line);
-	issues.push(...mech);
-	return mech.length > 0 ? undefined : line;
+	// The same test the solvers rely on: a beam that is a mechanism under its own supports is an
+	// input problem here, before any solve.
+	const found = validateBeamLine(line);
+	issues.push(...found);
+	return found.some((i) => i.severity === 'error') ? undefined : line;
 }
 
 /** Joints as given, or all continuous when omitted. */
@@ -61,13 +66,10 @@ function readSpans(value: unknown, issues: InputIssue[]): number[] | undefined {
 		addError(issues, 'beam.spans', 'spans-missing', message);
 		return undefined;
 	}
-	const rule = {
-		label: 'span (m)',
-		positive: true,
-		minAbs: PLAUSIBLE.spanMin,
-		maxAbs: PLAUSIBLE.span
-	};
-	const out = value.map((v, i) => readNumber(v, `beam.spans[${i}]`, issues, rule));
+	const list = readArray(value, 'beam.spans', issues, { label: 'spans', max: SIZE_LIMITS.spans });
+	if (!list) return undefined;
+	const rule = { label: 'span (m)', range: RANGES.span };
+	const out = list.map((v, i) => readNumber(v, `beam.spans[${i}]`, issues, rule));
 	return out.every((v): v is number => v !== undefined) ? out : undefined;
 }
 
@@ -80,6 +82,11 @@ function readList<T>(
 ): T[] | undefined {
 	if (!Array.isArray(value)) {
 		addError(issues, path, 'not-a-list', 'This must be a list.');
+		return undefined;
+	}
+	if (length === undefined && value.length > SIZE_LIMITS.spans + 1) {
+		const message = `At most ${SIZE_LIMITS.spans + 1} entries (${SIZE_LIMITS.spans} spans).`;
+		addError(issues, path, 'too-many', message);
 		return undefined;
 	}
 	if (length !== undefined && value.length !== length) {

@@ -4,19 +4,22 @@
 import type { InputIssue } from '../model/issue';
 import type { Load } from '../model/types';
 import { kNPerMToNPerMm, kNToN, mToMm } from '../units';
+import { RANGES, SIZE_LIMITS } from './limits';
 import {
 	addError,
 	addWarning,
 	isRecord,
-	PLAUSIBLE,
+	readArray,
 	readChoice,
 	readNumber,
+	readText,
 	warnUnknownKeys
 } from './read-value';
 import type { CaseAction } from './types';
 
 const ACTIONS: readonly CaseAction[] = ['permanent', 'imposed', 'temporary'];
-const KEYS: Record<Load['kind'], readonly string[]> = {
+/** Keys of each kind of load in the file. */
+export const LOAD_KEYS: Record<Load['kind'], readonly string[]> = {
 	point: ['kind', 'x', 'value', 'action', 'label'],
 	uniform: ['kind', 'from', 'to', 'value', 'action', 'label'],
 	linear: ['kind', 'from', 'to', 'start', 'end', 'action', 'label']
@@ -35,18 +38,28 @@ export function parseLoads(
 		addError(issues, 'loads', 'not-a-list', 'The loads must be a list (it may be empty).');
 		return undefined;
 	}
+	const list = readArray(value, 'loads', issues, { label: 'loads', max: SIZE_LIMITS.loads });
+	if (!list) return undefined;
 	const before = issues.filter((i) => i.severity === 'error').length;
 	const loads: Load[] = [];
 	const labels: (string | null)[] = [];
-	value.forEach((raw, i) => {
-		const load = parseLoad(raw, `loads[${i}]`, spans ? measureBeam(spans) : undefined, issues);
-		if (load) {
+	const length = spans ? measureBeam(spans) : undefined;
+	list.forEach((raw, i) => {
+		const load = parseLoad(raw, `loads[${i}]`, length, issues);
+		const label = readLabel(raw, `loads[${i}].label`, issues);
+		if (load && label !== undefined) {
 			loads.push(load);
-			labels.push(isRecord(raw) && typeof raw.label === 'string' ? raw.label : null);
+			labels.push(label);
 		}
 	});
 	const after = issues.filter((i) => i.severity === 'error').length;
 	return after > before ? undefined : { loads, labels };
+}
+
+/** The optional label of a load: text of at most 80 characters, null when absent. */
+function readLabel(raw: unknown, path: string, issues: InputIssue[]): string | null | undefined {
+	if (!isRecord(raw) || raw.label === undefined) return null;
+	return readText(raw.label, path, issues, { label: 'load label', max: SIZE_LIMITS.label });
 }
 
 /** Beam length in m and in mm (the mm sum is the one the model's nodes use). */
@@ -98,11 +111,11 @@ function parseLoad(
 	const kind = readChoice(raw.kind, `${path}.kind`, issues, kinds, 'load kind');
 	const action = readChoice(raw.action, `${path}.action`, issues, ACTIONS, 'action');
 	if (!kind) return undefined;
-	warnUnknownKeys(raw, KEYS[kind], path, issues);
+	warnUnknownKeys(raw, LOAD_KEYS[kind], path, issues);
 	const onBeam = (v: unknown, key: string): number | undefined =>
 		readPosition(v, `${path}.${key}`, length, issues);
 	const force = (key: string, label: string): number | undefined => {
-		const rule = { label, minAbs: PLAUSIBLE.loadMin, maxAbs: PLAUSIBLE.load };
+		const rule = { label, size: kind === 'point' ? RANGES.pointLoad : RANGES.lineLoad };
 		const v = readNumber(raw[key], `${path}.${key}`, issues, rule);
 		if (v !== undefined && v < 0) {
 			const message = 'A negative value acts upward; check that is intended.';

@@ -5,13 +5,15 @@
  */
 import type { InputIssue } from '../model/issue';
 import { measureBeam, readPosition } from './parse-loads';
+import { RANGES, SIZE_LIMITS, type Range } from './limits';
 import {
 	addError,
 	addWarning,
 	isRecord,
-	PLAUSIBLE,
+	readArray,
 	readChoice,
 	readNumber,
+	readText,
 	warnUnknownKeys
 } from './read-value';
 import type { CaseModel, ResolvedFactors } from './types';
@@ -30,7 +32,21 @@ export const DEFAULT_FACTORS: Readonly<ResolvedFactors> = {
 
 const FACTOR_KEYS = ['permanent', 'imposed', 'temporary', 'gammaM0', 'gammaM1'] as const;
 /** Combination values the design checks read; passed through when given. */
-const EXTRA_KEYS = ['xi', 'psi0', 'permanentFavourable'] as const;
+const EXTRA_KEYS = ['xi', 'psi0', 'psi0Temporary', 'permanentFavourable'] as const;
+type FactorKey = (typeof FACTOR_KEYS)[number] | (typeof EXTRA_KEYS)[number];
+
+/** Plausible range of each factor (./limits.ts). */
+const FACTOR_RANGES: Record<FactorKey, Range> = {
+	permanent: RANGES.loadFactor,
+	imposed: RANGES.loadFactor,
+	temporary: RANGES.loadFactor,
+	gammaM0: RANGES.materialFactor,
+	gammaM1: RANGES.materialFactor,
+	xi: RANGES.xi,
+	psi0: RANGES.psi,
+	psi0Temporary: RANGES.psi,
+	permanentFavourable: RANGES.favourableFactor
+};
 
 /**
  * Partial factors with defaults; `temporary` defaults to the imposed-load factor in use.
@@ -48,25 +64,15 @@ export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFact
 	let ok = true;
 	for (const key of FACTOR_KEYS) {
 		if (value[key] === undefined) continue;
-		const rule = {
-			label: `factor ${key}`,
-			positive: true,
-			minAbs: PLAUSIBLE.factorMin,
-			maxAbs: PLAUSIBLE.factor
-		};
+		const rule = { label: `factor ${key}`, range: FACTOR_RANGES[key] };
 		const v = readNumber(value[key], `factors.${key}`, issues, rule);
 		if (v === undefined) ok = false;
 		else out[key] = v;
 	}
-	const extra: { xi?: number; psi0?: number; permanentFavourable?: number } = {};
+	const extra: Partial<Record<(typeof EXTRA_KEYS)[number], number>> = {};
 	for (const key of EXTRA_KEYS) {
 		if (value[key] === undefined) continue;
-		const rule = {
-			label: `factor ${key}`,
-			min: 0,
-			minAbs: PLAUSIBLE.factorMin,
-			maxAbs: PLAUSIBLE.factor
-		};
+		const rule = { label: `factor ${key}`, range: FACTOR_RANGES[key] };
 		const v = readNumber(value[key], `factors.${key}`, issues, rule);
 		if (v === undefined) ok = false;
 		else extra[key] = v;
@@ -94,13 +100,25 @@ export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFact
 	};
 }
 
-/** Reads `beam.restraint`; positions in m become mm. */
+/**
+ * Without a restraint entry: the compression flange held only at the supports, the load on the
+ * top flange (destabilising) — the cautious reading, as the app assumes for a new check.
+ */
+export const ASSUMED_RESTRAINT = { lateral: 'ends-only', loadHeight: 'top-flange' } as const;
+
+/** Reads `beam.restraint`; positions in m become mm. A missing entry takes ASSUMED_RESTRAINT. */
 export function parseRestraint(
 	value: unknown,
 	spans: number[] | undefined,
 	issues: InputIssue[]
 ): CaseModel['restraint'] {
-	if (value === undefined) return undefined;
+	if (value === undefined) {
+		const message =
+			'No restraint given: the compression flange is taken as held laterally only at the ' +
+			'supports, with the load on the top flange. Give "restraint" to change this.';
+		addWarning(issues, 'beam.restraint', 'restraint-assumed', message);
+		return { ...ASSUMED_RESTRAINT };
+	}
 	if (!isRecord(value)) {
 		const message = 'The restraint must be an object with "lateral".';
 		addError(issues, 'beam.restraint', 'not-an-object', message);
@@ -120,6 +138,10 @@ export function parseRestraint(
 		addError(issues, 'beam.restraint.lateral', 'not-one-of', message);
 		return undefined;
 	}
+	const max = SIZE_LIMITS.restraints;
+	if (!readArray(lat, 'beam.restraint.lateral', issues, { label: 'restraint positions', max })) {
+		return undefined;
+	}
 	const length = spans ? measureBeam(spans) : undefined;
 	const xs = lat.map((v, i) =>
 		readPosition(v, `beam.restraint.lateral[${i}]`, length, issues, 'off-beam')
@@ -135,11 +157,12 @@ export function parseBearing(
 	issues: InputIssue[]
 ): number[] | undefined {
 	if (value === undefined) return undefined;
-	if (!Array.isArray(value) || (supports !== undefined && value.length !== supports)) {
+	const count = supports ?? SIZE_LIMITS.spans + 1;
+	if (!Array.isArray(value) || value.length > count || (supports && value.length !== supports)) {
 		addError(issues, 'beam.bearing', 'wrong-length', 'Give one bearing length (mm) per support.');
 		return undefined;
 	}
-	const rule = { label: 'bearing length (mm)', min: 0, maxAbs: PLAUSIBLE.length };
+	const rule = { label: 'bearing length (mm)', range: RANGES.bearing };
 	const out = value.map((v, i) => readNumber(v, `beam.bearing[${i}]`, issues, rule));
 	return out.every((v): v is number => v !== undefined) ? out : undefined;
 }
@@ -168,18 +191,19 @@ export function parseCheckSettings(
 	const out: CheckSettings = {};
 	const ratio = (key: 'deflectionLimit' | 'deflectionLimitTotal') => {
 		if (file[key] === undefined) return;
-		const rule = { label: 'deflection limit (span divided by)', positive: true };
+		const rule = { label: 'deflection limit (span divided by)', range: RANGES.deflectionRatio };
 		const v = readNumber(file[key], key, issues, rule);
 		if (v !== undefined) out[key] = v;
 	};
 	ratio('deflectionLimit');
 	ratio('deflectionLimitTotal');
 	if (file.eta !== undefined) {
-		const v = readNumber(file.eta, 'eta', issues, { label: 'η (EN 1993-1-5 5.1)', positive: true });
+		const rule = { label: 'η (EN 1993-1-5 5.1)', range: RANGES.eta };
+		const v = readNumber(file.eta, 'eta', issues, rule);
 		if (v !== undefined) out.eta = v;
 	}
 	if (beam.bearingLoads !== undefined) {
-		const rule = { label: 'bearing length under loads (mm)', min: 0, maxAbs: PLAUSIBLE.length };
+		const rule = { label: 'bearing length under loads (mm)', range: RANGES.bearing };
 		const v = readNumber(beam.bearingLoads, 'beam.bearingLoads', issues, rule);
 		if (v !== undefined) out.bearingLoads = v;
 	}
@@ -192,9 +216,9 @@ export function parseCheckSettings(
 	if (governs !== undefined) out.deflectionGoverns = governs;
 	const confirmed = flag(beam.gradeConfirmed, 'beam.gradeConfirmed');
 	if (confirmed !== undefined) out.gradeConfirmed = confirmed;
-	if (typeof file.place === 'string') out.place = file.place;
-	else if (file.place !== undefined) {
-		addError(issues, 'place', 'not-a-string', 'The place must be text.');
+	if (file.place !== undefined) {
+		const place = readText(file.place, 'place', issues, { label: 'place', max: SIZE_LIMITS.place });
+		if (place !== undefined) out.place = place;
 	}
 	return out;
 }

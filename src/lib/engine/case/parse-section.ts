@@ -7,14 +7,28 @@ import type { SteelGrade } from '../material/types';
 import type { InputIssue } from '../model/issue';
 import { resolveSection } from '../section/resolve';
 import type { ResolvedSection, SectionSpec } from '../section/types';
-import { addError, isRecord } from './read-value';
+import { RANGES, SIZE_LIMITS } from './limits';
+import { addError, isRecord, readNumber, readText, warnUnknownKeys } from './read-value';
 
-const SHAPES = ['I', 'welded-I', 'RHS', 'CHS', 'flat'];
+/** The keys each shape reads; `r` is the root radius of a rolled I. */
+export const SHAPE_KEYS: Record<string, readonly string[]> = {
+	I: ['h', 'b', 'tw', 'tf', 'r'],
+	'welded-I': ['h', 'b', 'tw', 'tf'],
+	RHS: ['h', 'b', 't'],
+	CHS: ['d', 't'],
+	flat: ['h', 'b']
+};
+const SHAPES = Object.keys(SHAPE_KEYS);
 
 /** Sections and grades, one per span. */
 export interface SpanMaterials {
 	sections: ResolvedSection[];
 	grades: (SteelGrade | null)[];
+}
+
+/** Errors so far (warnings may share the list). */
+function countErrors(issues: InputIssue[]): number {
+	return issues.filter((i) => i.severity === 'error').length;
 }
 
 /** Prefixes library issue paths (`tf`, `loss`, '') with the case path. */
@@ -26,23 +40,55 @@ function relocate(list: InputIssue[], base: string): InputIssue[] {
 }
 
 /** Checks the outer form of a section entry before the library reads it. */
-function checkSpecForm(raw: unknown, path: string, issues: InputIssue[]): raw is SectionSpec {
+function checkSpecForm(
+	raw: unknown,
+	path: string,
+	issues: InputIssue[],
+	warnings: InputIssue[]
+): raw is SectionSpec {
 	if (!isRecord(raw)) {
 		const message = 'Give the section: {"designation": …}, a shape with dimensions, or {"mp": …}.';
 		addError(issues, path, 'section-missing', message);
 		return false;
 	}
+	const before = countErrors(issues);
 	if ('designation' in raw) {
-		if (typeof raw.designation === 'string') return true;
+		warnUnknownKeys(raw, ['designation'], path, warnings);
+		if (typeof raw.designation === 'string') {
+			const rule = { label: 'designation', max: SIZE_LIMITS.designation };
+			return readText(raw.designation, `${path}.designation`, issues, rule) !== undefined;
+		}
 		const message = 'The designation must be text, e.g. "UB 305x165x40".';
 		addError(issues, `${path}.designation`, 'not-a-string', message);
 		return false;
 	}
-	if ('mp' in raw) return true;
-	if (typeof raw.shape === 'string' && SHAPES.includes(raw.shape)) return true;
-	const message = `The shape must be one of: ${SHAPES.join(', ')}.`;
-	addError(issues, `${path}.shape`, 'not-one-of', message);
-	return false;
+	if ('mp' in raw) {
+		warnUnknownKeys(raw, ['mp', 'mass'], path, warnings);
+		readNumber(raw.mp, `${path}.mp`, issues, { label: 'Mp (kNm)', range: RANGES.mp });
+		if (raw.mass !== undefined) {
+			readNumber(raw.mass, `${path}.mass`, issues, { label: 'mass (kg/m)', range: RANGES.mass });
+		}
+		return countErrors(issues) === before;
+	}
+	const shape = typeof raw.shape === 'string' ? raw.shape : '';
+	if (!Object.hasOwn(SHAPE_KEYS, shape)) {
+		const message = `The shape must be one of: ${SHAPES.join(', ')}.`;
+		addError(issues, `${path}.shape`, 'not-one-of', message);
+		return false;
+	}
+	const keys = SHAPE_KEYS[shape];
+	const known = ['shape', ...keys, ...(shape === 'RHS' ? ['process'] : [])];
+	warnUnknownKeys(raw, known, path, warnings);
+	for (const key of keys) {
+		// A missing dimension is reported by the section library, which knows what each one is.
+		if (raw[key] === undefined) continue;
+		const range = key === 'r' ? RANGES.radius : RANGES.dimension;
+		readNumber(raw[key], `${path}.${key}`, issues, { label: `${key} (mm)`, range });
+	}
+	if (raw.process !== undefined && typeof raw.process !== 'string') {
+		addError(issues, `${path}.process`, 'not-one-of', 'process must be "hot" or "cold".');
+	}
+	return countErrors(issues) === before;
 }
 
 /**
@@ -58,6 +104,11 @@ export function parseSections(
 ): SpanMaterials | undefined {
 	const raw = beam.section;
 	const perSpan = Array.isArray(raw);
+	if (perSpan && (spanCount ?? SIZE_LIMITS.spans) < raw.length) {
+		const message = `Give one section for the beam or one per span (at most ${SIZE_LIMITS.spans}).`;
+		addError(issues, 'beam.section', 'wrong-length', message);
+		return undefined;
+	}
 	if (perSpan && spanCount !== undefined && raw.length !== spanCount) {
 		const message = `Give one section for the beam or one per span (${spanCount}).`;
 		addError(issues, 'beam.section', 'wrong-length', message);
@@ -67,7 +118,7 @@ export function parseSections(
 	const resolved: ResolvedSection[] = [];
 	entries.forEach((spec, i) => {
 		const path = perSpan ? `beam.section[${i}]` : 'beam.section';
-		if (!checkSpecForm(spec, path, issues)) return;
+		if (!checkSpecForm(spec, path, issues, warnings)) return;
 		const r = resolveSection(spec, { loss });
 		if (!r.ok) return void issues.push(...relocate(r.issues, path));
 		warnings.push(...relocate(r.warnings, path));
@@ -77,6 +128,25 @@ export function parseSections(
 	const sections = perSpan ? resolved : new Array<ResolvedSection>(spanCount).fill(resolved[0]);
 	const grades = resolveGrades(beam.grade, sections, issues, warnings);
 	return grades ? { sections, grades } : undefined;
+}
+
+/** Length of a grade name; range of own fy and fu (MPa), before the grade library reads them. */
+function checkGradeForm(
+	spec: string | Record<string, unknown>,
+	issues: InputIssue[],
+	warnings: InputIssue[]
+): boolean {
+	if (typeof spec === 'string') {
+		const rule = { label: 'grade name', max: SIZE_LIMITS.gradeName };
+		return readText(spec, 'beam.grade', issues, rule) !== undefined;
+	}
+	warnUnknownKeys(spec, ['fy', 'fu'], 'beam.grade', warnings);
+	const before = countErrors(issues);
+	readNumber(spec.fy, 'beam.grade.fy', issues, { label: 'fy (MPa)', range: RANGES.fy });
+	if (spec.fu !== undefined) {
+		readNumber(spec.fu, 'beam.grade.fu', issues, { label: 'fu (MPa)', range: RANGES.fu });
+	}
+	return countErrors(issues) === before;
 }
 
 function resolveGrades(
@@ -97,6 +167,7 @@ function resolveGrades(
 		addError(issues, 'beam.grade', 'grade-not-valid', message);
 		return undefined;
 	}
+	if (!checkGradeForm(spec, issues, warnings)) return undefined;
 	const out: (SteelGrade | null)[] = [];
 	for (const section of sections) {
 		const gradeSpec = spec as string | { fy: number; fu?: number };

@@ -3,6 +3,7 @@
  * of throwing, and returns undefined when the value is unusable.
  */
 import type { InputIssue } from '../model/issue';
+import { SIZE_LIMITS, type Range } from './limits';
 
 /** True for a plain object (not null, not an array). */
 export function isRecord(value: unknown): value is Record<string, unknown> {
@@ -31,38 +32,23 @@ export interface NumberRule {
 	/** Smallest allowed value; `positive` means strictly above 0. */
 	min?: number;
 	positive?: boolean;
-	/** Largest allowed size |value|: a plausibility bound that keeps results finite. */
-	maxAbs?: number;
+	/** Plausible range, inclusive (file units): see ./limits.ts. */
+	range?: Range;
 	/**
-	 * Smallest size a non-zero value may have. Below it a number carries no meaning on site, and
-	 * ratios to it (e.g. allowed load ÷ entered load) could overflow to Infinity.
+	 * Plausible range of the size |value| of a value that may also be zero or negative (loads).
+	 * Below it a number carries no meaning on site, and ratios to it could overflow to Infinity.
 	 */
-	minAbs?: number;
+	size?: Range;
+}
+
+/** A number as people read it in a message (no 17-digit tails). */
+function show(value: number): string {
+	return String(Number(value.toPrecision(6)));
 }
 
 /**
- * Plausibility bounds of case-file numbers (our choice, not code values): far beyond any beam
- * this tool can judge, yet small enough that no product of them overflows to Infinity.
- */
-export const PLAUSIBLE = {
-	/** Span, m. */
-	span: 1000,
-	/** Shortest span, m. */
-	spanMin: 0.01,
-	/** Point load (kN) or line load (kN/m). */
-	load: 1e6,
-	/** Smallest non-zero load, kN or kN/m (1 N). */
-	loadMin: 1e-3,
-	/** Partial factor or combination value. */
-	factor: 100,
-	/** Smallest non-zero partial factor or combination value. */
-	factorMin: 1e-3,
-	/** Length in mm (bearing). */
-	length: 1e5
-} as const;
-
-/**
- * Reads a finite number, or records `not-a-number` / `not-positive` / `below-minimum`.
+ * Reads a finite number, or records `not-a-number` / `not-positive` / `below-minimum` /
+ * `out-of-range` / `too-small`.
  * @example readNumber('6', 'beam.spans[0]', issues, { label: 'span (m)' }) // undefined, 1 issue
  */
 export function readNumber(
@@ -83,14 +69,63 @@ export function readNumber(
 		addError(issues, path, 'below-minimum', `The ${rule.label} must be at least ${rule.min}.`);
 		return undefined;
 	}
-	if (rule.minAbs !== undefined && value !== 0 && Math.abs(value) < rule.minAbs) {
-		const message = `The ${rule.label} is too small to mean anything: use 0 or at least ${rule.minAbs}.`;
-		addError(issues, path, 'too-small', message);
+	if (rule.range && (value < rule.range[0] || value > rule.range[1])) {
+		const [lo, hi] = rule.range;
+		const message = `The ${rule.label} must be between ${lo} and ${hi}; got ${show(value)}.`;
+		addError(issues, path, 'out-of-range', message);
 		return undefined;
 	}
-	if (rule.maxAbs !== undefined && Math.abs(value) > rule.maxAbs) {
-		const message = `The ${rule.label} must not exceed ${rule.maxAbs} in size.`;
-		addError(issues, path, 'out-of-range', message);
+	if (rule.size && value !== 0) {
+		const [lo, hi] = rule.size;
+		const size = Math.abs(value);
+		if (size < lo) {
+			const message = `The ${rule.label} is too small to mean anything: use 0 or at least ${lo}.`;
+			addError(issues, path, 'too-small', message);
+			return undefined;
+		}
+		if (size > hi) {
+			const message = `The ${rule.label} must be between −${hi} and ${hi}; got ${show(value)}.`;
+			addError(issues, path, 'out-of-range', message);
+			return undefined;
+		}
+	}
+	return value;
+}
+
+/** Reads text of at most `max` characters, or records `not-a-string` / `too-long`. */
+export function readText(
+	value: unknown,
+	path: string,
+	issues: InputIssue[],
+	rule: { label: string; max: number }
+): string | undefined {
+	if (typeof value !== 'string') {
+		addError(issues, path, 'not-a-string', `The ${rule.label} must be text.`);
+		return undefined;
+	}
+	if (value.length > rule.max) {
+		const got = value.length;
+		const message = `The ${rule.label} must be at most ${rule.max} characters; got ${got}.`;
+		addError(issues, path, 'too-long', message);
+		return undefined;
+	}
+	return value;
+}
+
+/** Reads a list of at most `max` entries, or records `not-a-list` / `too-many`. */
+export function readArray(
+	value: unknown,
+	path: string,
+	issues: InputIssue[],
+	rule: { label: string; max: number }
+): unknown[] | undefined {
+	if (!Array.isArray(value)) {
+		addError(issues, path, 'not-a-list', `The ${rule.label} must be a list.`);
+		return undefined;
+	}
+	if (value.length > rule.max) {
+		const message = `At most ${rule.max} ${rule.label} are allowed; got ${value.length}.`;
+		addError(issues, path, 'too-many', message);
 		return undefined;
 	}
 	return value;
@@ -119,8 +154,10 @@ export function warnUnknownKeys(
 ): void {
 	for (const key of Object.keys(obj)) {
 		if (known.includes(key)) continue;
-		const path = prefix ? `${prefix}.${key}` : key;
-		const message = `"${key}" is not part of the case format and was ignored.`;
+		const cut = SIZE_LIMITS.keyShown;
+		const shown = key.length > cut ? `${key.slice(0, cut)}…` : key;
+		const path = prefix ? `${prefix}.${shown}` : shown;
+		const message = `"${shown}" is not part of the case format and was ignored.`;
 		addWarning(issues, path, 'unknown-key', message);
 	}
 }

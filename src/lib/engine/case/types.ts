@@ -50,6 +50,11 @@ export interface CaseFactors {
 	xi?: number;
 	/** ψ0, combination value of accompanying imposed load (read by the checks). */
 	psi0?: number;
+	/**
+	 * ψ0 of the temporary (construction) load when another variable action leads (default 1.0,
+	 * EN 1991-1-6 Annex A1 recommended value for construction loads).
+	 */
+	psi0Temporary?: number;
 	/** `en1990-6.10` (default), `en1990-6.10ab` (the worse of 6.10a and 6.10b) or `custom`. */
 	set?: string;
 }
@@ -107,6 +112,7 @@ export interface ResolvedFactors {
 	gammaM1: number;
 	xi?: number;
 	psi0?: number;
+	psi0Temporary?: number;
 	permanentFavourable?: number;
 	set?: string;
 }

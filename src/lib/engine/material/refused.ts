@@ -27,7 +27,8 @@ export const REFUSED_MATERIALS: Record<string, { name: string; reason: string }>
  * @example explainRefusedMaterial('cast-iron')?.code // 'material-not-ductile'
  */
 export function explainRefusedMaterial(id: string): InputIssue | null {
+	// Own keys only: user text such as "constructor" must not reach Object.prototype.
+	if (!Object.hasOwn(REFUSED_MATERIALS, id)) return null;
 	const refused = REFUSED_MATERIALS[id];
-	if (!refused) return null;
 	return { path: '', code: 'material-not-ductile', message: refused.reason, severity: 'error' };
 }

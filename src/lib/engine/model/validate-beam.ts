@@ -4,6 +4,7 @@
  */
 import { solveEquilibrium } from '../collapse/nullspace';
 import { buildFieldModel } from '../collapse/statics';
+import { findMechanismIssues } from '../elastic/mechanism';
 import type { InputIssue } from './issue';
 import type { BeamLine } from './types';
 
@@ -79,7 +80,9 @@ export function validateBeamLine(beam: BeamLine): InputIssue[] {
 		}
 	});
 	if (issues.some((i) => i.severity === 'error')) return issues;
-	if (isMechanismWithoutLoad(beam)) {
+	// Both solvers must agree the beam can carry load: the collapse statics, where a fixed support
+	// at a simple joint acts as a pin, and the elastic stiffness (its own rank test).
+	if (isMechanismWithoutLoad(beam) || findMechanismIssues(beam).length > 0) {
 		issues.push(
 			error(
 				'beam.supports',

@@ -43,6 +43,7 @@ export function parseDesignation(text: string): ParsedDesignation {
 	// `HE 300 B` splits the family around the size; joining the letters puts it back together.
 	const joined = words.join('');
 	if (joined === '') return { family: null, numbers, unknownWord: null };
-	const family = FAMILY_WORDS[joined] ?? null;
+	// Own keys only: typed words such as "constructor" must not reach Object.prototype.
+	const family = Object.hasOwn(FAMILY_WORDS, joined) ? FAMILY_WORDS[joined] : null;
 	return { family, numbers, unknownWord: family ? null : joined };
 }
