@@ -1,13 +1,15 @@
 /**
  * EN 1990:2002 6.4.3.2 and Annex A1 Table A1.2(B), STR combinations with the recommended values
  * γG,sup = 1.35, γG,inf = 1.00, γQ = 1.5, ξ = 0.85 ("Steel Buildings in Europe" Part 3, Table 3.1
- * and text) and ψ0 = 0.7 for imposed loads of categories A–D (EN 1990 Table A1.1, from memory).
+ * and text) and ψ0 = 0.7 for imposed loads of categories A–D (EN 1990 Table A1.1, from memory);
+ * the temporary load is a construction load with ψ0 = 1.0 (EN 1991-1-6 Annex A1, from memory).
  * Expressions: (6.10) ΣγG·Gk + γQ·Qk,1 + ΣγQ·ψ0·Qk,i; (6.10a) ΣγG·Gk + γQ·ψ0·Qk,1 + …;
  * (6.10b) Σξ·γG·Gk + γQ·Qk,1 + … (the less favourable of 6.10a/6.10b governs).
  * Worked example: a simply supported 6 m beam, Mp,Rd = 623 cm³ × 275 N/mm² (305x165x40 UB S275),
  * gk = 4 kN/m, variable point load at midspan. Its collapse load is the textbook closed form
  * γT·Qk·L/4 + γG·gk·L²/8 = Mp (B.G. Neal, The Plastic Methods of Structural Analysis, from memory),
- * solved here for Qk: 65.34 kN by 6.10, 66.96 kN by 6.10a/b.
+ * solved here for Qk: 65.34 kN by 6.10 and by 6.10a/b with ψ0 = 1.0 on the temporary load (6.10a
+ * is then 6.10), 66.96 kN by 6.10a/b were it given ψ0 = 0.7.
  */
 import { describe, expect, it } from 'vitest';
 import { resolveFactors } from '../../src/lib/engine/checks/en1993/factors';
@@ -49,10 +51,12 @@ describe('recommended factors (EN 1990 Table A1.2(B))', () => {
 	});
 
 	it('6.10a/6.10b: ψ0·γQ on the variable action in 6.10a, ξ·γG,sup in 6.10b', () => {
-		const f = resolveFactors({ set: 'en1990-6.10ab' }, { hasImposed: false });
+		const f = resolveFactors({ set: 'en1990-6.10ab', psi0T: 0.7 }, { hasImposed: false });
 		const [a, b] = f.combinations;
 		expect(a.name).toBe('6.10a');
 		expectRel(a.gammaTemporary, 1.5 * 0.7, 1e-12);
+		const construction = resolveFactors({ set: 'en1990-6.10ab' }, { hasImposed: false });
+		expectRel(construction.combinations[0].gammaTemporary, 1.5 * 1.0, 1e-12);
 		expectRel(b.gammaGsup, 0.85 * 1.35, 1e-12);
 		expect(b.gammaTemporary).toBe(1.5);
 	});
@@ -61,7 +65,7 @@ describe('recommended factors (EN 1990 Table A1.2(B))', () => {
 		const f = resolveFactors({ set: 'en1990-6.10' }, { hasImposed: true });
 		expect(f.combinations.map((c) => [c.gammaImposed, c.gammaTemporary])).toEqual([
 			[1.5 * 0.7, 1.5],
-			[1.5, 1.5 * 0.7]
+			[1.5, 1.5 * 1.0]
 		]);
 	});
 
@@ -79,14 +83,20 @@ describe('worked example: 305x165x40 UB S275, 6 m, gk 4 kN/m, Qk at midspan', ()
 		expect(r.name).toContain('upper');
 	});
 
-	it('6.10a/b allows 66.96 kN (6.10b governs; 6.10a alone would give 93.35 kN)', () => {
+	it('6.10a/b with ψ0 = 1.0 on the construction load: 6.10a is 6.10 and governs, 65.34 kN', () => {
 		const r = largestQk('en1990-6.10ab');
+		expectRel(r.qk, 65.34, 1e-3);
+		expect(r.name.startsWith('6.10a')).toBe(true);
+	});
+
+	it('6.10a/b with ψ0 = 0.7 allows 66.96 kN (6.10b governs; 6.10a alone would give 93.35 kN)', () => {
+		const r = largestQk('en1990-6.10ab', { psi0T: 0.7 });
 		expectRel(r.qk, 66.96, 1e-3);
 		expect(r.name.startsWith('6.10b')).toBe(true);
 	});
 
-	it('with ξ = 0.925 (a National Annex value, from memory) 6.10b gives 66.15 kN', () => {
-		expectRel(largestQk('en1990-6.10ab', { xi: 0.925 }).qk, 66.15, 1e-3);
+	it('with ξ = 0.925 (a National Annex value, from memory) and ψ0 = 0.7, 6.10b gives 66.15 kN', () => {
+		expectRel(largestQk('en1990-6.10ab', { xi: 0.925, psi0T: 0.7 }).qk, 66.15, 1e-3);
 	});
 });
 

@@ -35,6 +35,7 @@ export function buildDesignCheckInput(model: CaseModel): DesignCheckInput {
 			gammaT: f.temporary,
 			xi: f.xi,
 			psi0: f.psi0,
+			psi0T: f.psi0Temporary,
 			gammaM0: f.gammaM0,
 			gammaM1: f.gammaM1
 		},

@@ -22,7 +22,7 @@ export interface FactorSettings {
 	xi?: number;
 	/** ψ0 for accompanying imposed load (0.7, categories A–D). */
 	psi0?: number;
-	/** ψ0 for the temporary action when it accompanies; defaults to psi0. */
+	/** ψ0 for the temporary action when it accompanies (recommended 1.0, construction loads). */
 	psi0T?: number;
 	/** Resistance factors γM0 and γM1 (recommended 1.00 both). */
 	gammaM0?: number;
@@ -64,6 +64,8 @@ export const RECOMMENDED_FACTORS = {
 	gammaQ: 1.5,
 	xi: 0.85,
 	psi0: 0.7,
+	// EN 1991-1-6 Annex A1 Table A1.1: ψ0 = 1.0 for construction loads (recommended value).
+	psi0T: 1.0,
 	gammaM0: 1.0,
 	gammaM1: 1.0
 } as const;
@@ -91,7 +93,7 @@ export function resolveFactors(
 		gammaT: settings.gammaT ?? gammaQ,
 		xi: settings.xi ?? r.xi,
 		psi0,
-		psi0T: settings.psi0T ?? psi0,
+		psi0T: settings.psi0T ?? r.psi0T,
 		gammaM0: settings.gammaM0 ?? r.gammaM0,
 		gammaM1: settings.gammaM1 ?? r.gammaM1
 	};
