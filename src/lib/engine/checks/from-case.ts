@@ -7,9 +7,9 @@ import type { DesignCheckInput } from './inputs';
 import type { LateralRestraint } from './restraint';
 
 /**
- * Design-check input of a case. Without a restraint entry the flange is taken as restrained
- * throughout (listed among the assumptions); the load height defaults to the top flange, the
- * destabilising (conservative) choice.
+ * Design-check input of a case. A case read from a file always has a restraint (parseCase
+ * assumes the flange held at the supports only when none is given); the load height defaults
+ * to the top flange, the destabilising (conservative) choice.
  */
 export function buildDesignCheckInput(model: CaseModel): DesignCheckInput {
 	const f = model.factors;
