@@ -9,7 +9,7 @@ import type { ShearAreaInput } from './en1993/shear';
 import type { ReducedMomentInput } from './en1993/interaction';
 import type { LtbResistance } from './en1993/ltb-curves';
 import type { SectionShape } from '../section/types';
-import type { WebResistance, WebResistanceInput } from './en1993/web';
+import type { WebForceInput, WebResistance } from './en1993/web';
 
 /** Factor settings after defaults, as a basis reports them. */
 export interface BasisFactors {
@@ -62,7 +62,8 @@ export interface DesignBasis<Settings> {
 		/** χLT by the general method as well, for comparison (equal when it is the one used). */
 		chiGeneral: number;
 	};
-	computeWebResistance(o: WebResistanceInput): WebResistance;
+	/** Web under a transverse force, its load type chosen from where the force stands. */
+	computeWebResistance(o: WebForceInput): WebResistance;
 	computeStableLength(o: {
 		fy: number;
 		iz: number;

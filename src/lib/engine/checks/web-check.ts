@@ -1,15 +1,16 @@
 /**
  * Local web resistance where a point load or a support reaction bears on an unstiffened I web
- * (EN 1993-1-5 section 6), one row per bearing point, worst load arrangement. Hollow and solid
- * sections are not checked (said in the notices); built-in ends carry no flange bearing.
+ * (EN 1993-1-5 6.2–6.6), one row per bearing point, worst load arrangement. The load type of
+ * Figure 6.1 is chosen from where the force stands (see `en1993/web.ts`). Where the loaded flange
+ * is in compression, the row also covers bending at the same section, η2 + 0.8·η1 ≤ 1.4
+ * (EN 1993-1-5 7.2(1)). Hollow and solid sections are not checked (said in the notices).
  */
+import { momentAt } from '../collapse/index';
 import { E_STEEL } from '../units';
-import { listPointLoadPositions, readReactions, type CheckContext } from './context';
-import { applyArrangement } from './factor-loads';
-import type { WebLoadType } from './en1993/web';
+import { sumArrangementLoads, shiftCollapseValue, type CheckContext } from './context';
 import type { LoadArrangement } from './load-arrangements';
-import { spanOf } from './plastic-bending';
 import type { CheckResult } from './types';
+import { listWebForces, type LoadedFlange, type WebForce } from './web-forces';
 import { findWorstArrangement } from './worst-arrangement';
 
 /** Stiff bearing lengths, mm. */
@@ -20,66 +21,27 @@ export interface BearingLengths {
 	loads: number;
 }
 
+/** Plain words for the load types of EN 1993-1-5 Figure 6.1. */
+const TYPE_WORDS = {
+	a: 'resisted by web shear',
+	b: 'passing through the web to the support',
+	c: 'next to an unstiffened end'
+} as const;
+
 /** One row per support and per point-load position on an I-section web. */
 export function checkBeamWebs(ctx: CheckContext, bearing: BearingLengths): CheckResult[] {
 	const out: CheckResult[] = [];
-	const last = ctx.nodes.length - 1;
-	const s = ctx.beam.supports;
-	const supportNodes = new Set(ctx.nodes.filter((_, i) => s[i] !== 'free'));
-	ctx.nodes.forEach((x, node) => {
-		if (s[node] !== 'pin') return;
-		const atEnd = node === 0 || node === last;
-		const row = checkPoint(ctx, {
-			x,
-			span: node === last ? node - 1 : node,
-			type: atEnd ? 'c' : 'a',
-			ss: bearing.supports[node] ?? 0,
-			label: `Web at support ${node + 1}`,
-			force: (arr, t) => Math.max(...readReactions(ctx, arr, t).map((r) => Math.abs(r[node])))
-		});
-		if (row) out.push(row);
-	});
-	const designLoads = new Map<LoadArrangement, ReturnType<typeof applyArrangement>>();
-	for (const x of listPointLoadPositions(ctx.loads)) {
-		if (supportNodes.has(x)) continue;
-		const type: WebLoadType = x === 0 || x === ctx.nodes[last] ? 'c' : 'a';
-		const row = checkPoint(ctx, {
-			x,
-			span: spanOf(ctx.nodes, x),
-			type,
-			ss: bearing.loads,
-			label: 'Web under point load',
-			force(arr, t) {
-				let d = designLoads.get(arr);
-				if (!d) {
-					d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement: arr });
-					designLoads.set(arr, d);
-				}
-				const sum = (ls: typeof d.fixed) =>
-					ls.reduce((a, l) => a + (l.kind === 'point' && l.x === x ? l.value : 0), 0);
-				return Math.abs(sum(d.fixed) + t * sum(d.variable));
-			}
-		});
+	for (const f of listWebForces(ctx, bearing)) {
+		const row = checkWebForce(ctx, f);
 		if (row) out.push(row);
 	}
 	return out;
 }
 
-function checkPoint(
-	ctx: CheckContext,
-	p: {
-		x: number;
-		span: number;
-		type: WebLoadType;
-		ss: number;
-		label: string;
-		force: (arr: LoadArrangement, t: number) => number;
-	}
-): CheckResult | null {
+function checkWebForce(ctx: CheckContext, p: WebForce): CheckResult | null {
 	const m = ctx.members[p.span];
 	if (!m.propsKnown || (m.shape !== 'I' && m.shape !== 'welded-I')) return null;
 	const web = ctx.basis.computeWebResistance({
-		type: p.type,
 		hw: m.hw,
 		tw: m.tw,
 		bf: m.b,
@@ -88,34 +50,84 @@ function checkPoint(
 		fyf: m.fy,
 		E: E_STEEL,
 		ss: p.ss,
-		c: 0,
+		throughWeb: p.throughWeb,
+		endDistance: p.endDistance,
 		gammaM1: ctx.gammaM1
 	});
-	const ss = Math.min(p.ss, m.hw);
+	const elastic = ctx.route === 'elastic-first-yield';
+	const mRd = ctx.basis.computeBendingResistance({ ...m, gammaM0: ctx.gammaM0, elastic });
 	const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
 		const fEd = p.force(arr, t);
-		return { utilisation: fEd / web.fRd, detail: fEd };
+		const mEd = readMoment(ctx, arr, p.x, t);
+		const eta2 = fEd / web.fRd;
+		const eta1 = mRd > 0 ? compressedFlangeMoment(mEd, p.flange) / mRd : 0;
+		const combined = (eta2 + 0.8 * eta1) / 1.4;
+		const detail = { fEd, mEd, eta1, eta2, combined };
+		return { utilisation: Math.max(eta2, combined), detail };
 	});
+	const d = worst.detail;
+	const ss = Math.min(p.ss, m.hw);
+	const where = describePlace(web.type, p);
+	const withBending = d.combined > d.eta2;
 	return {
 		id: 'web',
-		label: p.label,
-		clause: 'EN 1993-1-5 6 (clause numbers from memory)',
+		label: `Web ${p.flange === 'top' ? 'under' : 'at'} ${p.name} (type ${web.type}${where})`,
+		clause: withBending ? 'EN 1993-1-5 6.2–6.6, 7.2(1)' : 'EN 1993-1-5 6.2–6.6',
 		level: 'governing',
 		utilisation: worst.utilisation,
 		utilisationExisting: worst.utilisationExisting,
 		pass: worst.utilisation <= 1,
 		multiplierAtCapacity: worst.multiplier,
 		values: {
-			fEd: worst.detail,
+			fEd: d.fEd,
 			fRd: web.fRd,
 			ss,
+			c: web.c,
 			kF: web.kF,
 			ly: web.ly,
 			chiF: web.chiF,
-			lEff: web.lEff
+			lEff: web.lEff,
+			mEd: d.mEd,
+			mRd,
+			eta1: d.eta1,
+			eta2: d.eta2
 		},
 		x: p.x,
 		arrangement: worst.arrangement.name,
-		note: `Load type (${p.type}) of EN 1993-1-5 Figure 6.1, stiff bearing ${Math.round(ss)} mm.`
+		note:
+			`Load type (${web.type}) of EN 1993-1-5 Figure 6.1, ${TYPE_WORDS[web.type]}; ` +
+			`stiff bearing ${Math.round(ss)} mm.` +
+			(withBending ? ' Governed by the interaction with bending, η2 + 0.8·η1 ≤ 1.4.' : '')
 	};
+}
+
+/** Where the force stands, for the label. */
+function describePlace(type: 'a' | 'b' | 'c', p: WebForce): string {
+	if (type === 'b') return ', load over the support';
+	if (type === 'a') return '';
+	return p.flange !== 'top' && p.endDistance === 0 ? ', end support' : `, near ${p.endWord}`;
+}
+
+/** Moment of the loaded flange's sign: compression in the top flange is sagging, N·mm. */
+function compressedFlangeMoment(mEd: number, flange: LoadedFlange): number {
+	if (flange === 'both') return Math.abs(mEd);
+	return Math.max(0, flange === 'top' ? mEd : -mEd);
+}
+
+/**
+ * Moment at x for multiplier t (sagging +): on the plastic route the collapse field moved to t,
+ * the field the verdict relies on; otherwise the elastic moment.
+ */
+function readMoment(ctx: CheckContext, arr: LoadArrangement, x: number, t: number): number {
+	const p = ctx.plastic.get(arr);
+	if (p && 'diagram' in p.result && p.loadFactor !== null) {
+		const free = {
+			fixed: ctx.released.fixedAt(arr, x).M,
+			variable: ctx.released.variableAt(arr, x).M
+		};
+		const collapse = momentAt(p.result.diagram, x);
+		const totals = sumArrangementLoads(ctx.released, arr);
+		return shiftCollapseValue({ collapse, free, totals, lambda: p.loadFactor, t });
+	}
+	return ctx.effects.fixedAt(arr, x).M + t * ctx.effects.variableAt(arr, x).M;
 }

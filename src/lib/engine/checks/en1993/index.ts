@@ -7,7 +7,7 @@ import { decideRoute } from './scope';
 import { checkWebSlenderness, computePlasticShearResistance, computeShearArea } from './shear';
 import { computeReducedMomentResistance, computeShearReduction } from './interaction';
 import { computeLtbResistance, selectBucklingCurve, selectLtbMethod } from './ltb-curves';
-import { computeWebResistance } from './web';
+import { computeWebForceResistance } from './web';
 import { computeStableLength } from './stable-length';
 
 /** The Eurocode basis (recommended values; every factor editable through the settings). */
@@ -50,6 +50,6 @@ export const en1993: DesignBasis<FactorSettings> = {
 		const general = computeLtbResistance({ ...o, curve: generalCurve, method: 'general' });
 		return { ...r, method: clause, curve, chiGeneral: general.chiLT };
 	},
-	computeWebResistance,
+	computeWebResistance: computeWebForceResistance,
 	computeStableLength
 };
