@@ -1,6 +1,7 @@
 /**
  * Backup on the phone: every saved check exported as one JSON file and imported back on a fresh
- * device gives exactly the same records; a damaged or foreign file is refused and nothing changes.
+ * device gives the same records; an import only adds (a file cannot replace, hide or vouch for a
+ * check); a damaged or foreign file is refused and nothing changes.
  */
 import { readFile } from 'node:fs/promises';
 import type { Page } from '@playwright/test';
@@ -33,14 +34,16 @@ test('export then import on a fresh device gives the same records exactly', asyn
 	await fresh.goto('/');
 	await expect(fresh.getByTestId('empty-list')).toBeVisible();
 	await importText(fresh, first);
-	await expect(fresh.getByTestId('list-message')).toHaveText('Backup read: 2 added, 0 updated, 0 already here.');
+	await expect(fresh.getByTestId('import-message')).toHaveText('Added 2 checks.');
 	await expect(fresh.getByTestId('saved-item')).toHaveCount(2);
 	const again = JSON.parse(await exportFile(fresh));
-	expect(again.records).toEqual(exported.records);
+	// The same records; each phone computes its own verdicts.
+	const plain = (records: object[]) => records.map((r) => ({ ...r, computed: null }));
+	expect(plain(again.records)).toEqual(plain(exported.records));
 
 	// The same file twice adds nothing.
 	await importText(fresh, first);
-	await expect(fresh.getByTestId('list-message')).toHaveText('Backup read: 0 added, 0 updated, 2 already here.');
+	await expect(fresh.getByTestId('import-message')).toHaveText('Nothing added, 2 already here.');
 	await expect(fresh.getByTestId('saved-item')).toHaveCount(2);
 	await other.close();
 });
@@ -51,9 +54,48 @@ test('a damaged or foreign backup is refused and nothing changes', async ({ page
 	const good = JSON.stringify({ ...JSON.parse(await exportFile(page)) });
 
 	await importText(page, good.slice(0, Math.floor(good.length / 2)));
-	await expect(page.getByTestId('list-message')).toContainText('Backup refused, nothing changed');
+	await expect(page.getByTestId('import-message')).toContainText('Backup refused, nothing changed');
 	await importText(page, JSON.stringify({ format: 'someone-else', records: [] }));
-	await expect(page.getByTestId('list-message')).toContainText('Backup refused, nothing changed');
+	await expect(page.getByTestId('import-message')).toContainText('Backup refused, nothing changed');
+	await importText(page, good.replace(/"records":\s*\[/, '"__proto__":{},"records":['));
+	await expect(page.getByTestId('import-message')).toContainText('__proto__');
 	await expect(page.getByTestId('saved-item')).toHaveCount(1);
 	expect(JSON.parse(await exportFile(page)).records).toEqual(before);
+});
+
+test('a backup cannot replace, hide or vouch for a check: it is added beside and checked again', async ({ page }) => {
+	await saveDemo(page, 'Kept here');
+	const file = JSON.parse(await exportFile(page));
+	const [mine] = file.records;
+	await expect(page.getByTestId('saved-verdict')).toHaveText('✔ Pass');
+	const overloaded = JSON.parse(await readFile('test/fixtures/cases/demo-overloaded.json', 'utf8'));
+	const claim = { verdict: 'pass', answer: { verdict: 'pass' } };
+	file.records = [
+		// Same id, far-future date, an old deletion mark and a pass it does not have.
+		{
+			...mine,
+			input: overloaded,
+			result: claim,
+			computed: { verdict: 'pass', computedBy: file.engineVersion },
+			updatedAt: '2999-01-01T00:00:00.000Z',
+			deletedAt: '2000-01-01T00:00:00.000Z'
+		},
+		{ ...mine, id: 'broken-1', title: 'Broken', input: { ...mine.input, beam: { spans: [-1] } }, result: claim }
+	];
+	await importText(page, JSON.stringify(file));
+	const message = page.getByTestId('import-message');
+	await expect(message).toHaveAttribute('aria-live', 'polite');
+	await expect(message).toHaveText(
+		'Added 2 checks, 1 kept beside an existing one with the same id. 1 check needs attention: the inputs did not pass validation, so no verdict is shown.'
+	);
+	await page.reload();
+	const items = page.getByTestId('saved-item');
+	await expect(items).toHaveCount(3);
+	await expect(items.filter({ hasText: 'Kept here (imported)' }).getByTestId('saved-verdict')).toHaveText('✖ Fail');
+	await expect(items.filter({ hasText: 'Broken' }).getByTestId('saved-verdict')).toHaveText('⚠ Needs attention');
+	const original = items.filter({ has: page.getByTestId('saved-title').getByText('Kept here', { exact: true }) });
+	await expect(original.getByTestId('saved-verdict')).toHaveText('✔ Pass');
+	// The original opens as it was.
+	const now = JSON.parse(await exportFile(page)).records.find((r: { id: string }) => r.id === mine.id);
+	expect(now).toEqual({ ...mine, computed: { verdict: 'pass', computedBy: file.engineVersion } });
 });

@@ -2,7 +2,7 @@
  * Saved checks on the phone: saving with title and place, the list after a reload, search, edits
  * that keep revisions, duplicate, and delete with undo.
  */
-import { fieldAt, readLoadFactor, saveDemo, typeInto } from './check-helpers';
+import { fieldAt, openCheck, readLoadFactor, saveDemo, typeInto } from './check-helpers';
 import { test, expect } from './fixtures';
 
 test('a saved check is listed after a reload and found by search', async ({ page }) => {
@@ -66,4 +66,22 @@ test('delete takes a check off the list and undo brings it back exactly', async 
 	await items.filter({ hasText: 'Second beam' }).getByRole('button', { name: /Duplicate/ }).click();
 	await expect(items).toHaveCount(3);
 	await expect(page.getByTestId('saved-title').filter({ hasText: 'Second beam (copy)' })).toHaveCount(1);
+});
+
+test('with no IndexedDB (private mode) the app opens, computes, and says checks cannot be saved', async ({ page }) => {
+	await page.addInitScript(() => {
+		delete (window as { indexedDB?: IDBFactory }).indexedDB;
+	});
+	await page.goto('/');
+	expect(await page.evaluate(() => typeof indexedDB)).toBe('undefined');
+	await expect(page.getByTestId('list-message')).toContainText('Checks cannot be saved on this device right now');
+	await expect(page.getByTestId('export-backup')).toBeDisabled();
+	await expect(page.getByTestId('import-backup')).toBeDisabled();
+
+	await openCheck(page);
+	// The demo's own verdict, computed on this device (generous wait: a cold engine on a slow phone).
+	await expect(page.getByTestId('verdict')).toHaveAttribute('data-verdict', /^(pass|fail|outside-scope)$/, {
+		timeout: 30_000
+	});
+	await expect(page.getByTestId('session-message')).toContainText('checks cannot be saved');
 });

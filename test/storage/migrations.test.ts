@@ -13,7 +13,8 @@ import {
 	openStore,
 	saveCheck,
 	updateCheck,
-	DB_VERSION
+	DB_VERSION,
+	RECORD_SCHEMA_VERSION
 } from '../../src/lib/storage';
 import { demoCase, plainCheck, uniqueDbName } from './support';
 
@@ -32,7 +33,7 @@ async function writeV1Fixture(name: string, extra: unknown[] = []): Promise<void
 	db.close();
 }
 
-describe('v1 → v2 migration', () => {
+describe('v1 → v2 → v3 migration', () => {
 	it('splits the place out, keeps every field and revision, and adds the newest-first index', async () => {
 		const name = uniqueDbName('v1v2');
 		await writeV1Fixture(name);
@@ -48,8 +49,9 @@ describe('v1 → v2 migration', () => {
 		expect(first.ok).toBe(true);
 		if (!first.ok) return;
 		const { place, schemaVersion, ...rest } = fixture.records[0];
-		expect(first.value.schemaVersion).toBe(2);
+		expect(first.value.schemaVersion).toBe(RECORD_SCHEMA_VERSION);
 		expect(first.value.place).toEqual({ building: place, level: '', grid: '' });
+		expect(first.value.computed).toBeNull();
 		expect(first.value).toMatchObject(rest);
 		expect(first.value.revisions).toEqual(fixture.records[0].revisions);
 		expect(schemaVersion).toBe(1);
@@ -103,7 +105,7 @@ describe('v1 → v2 migration', () => {
 		const future = {
 			...fixture.records[1],
 			id: 'future-1',
-			schemaVersion: 3,
+			schemaVersion: RECORD_SCHEMA_VERSION + 1,
 			place: { site: 'X' }
 		};
 		await writeV1Fixture(name, [future]);

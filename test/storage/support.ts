@@ -1,5 +1,11 @@
 import 'fake-indexeddb/auto';
-import { openStore, type CaseFile, type CheckStore, type NewCheck } from '../../src/lib/storage';
+import {
+	openStore,
+	type CaseFile,
+	type CheckStore,
+	type ComputedVerdict,
+	type NewCheck
+} from '../../src/lib/storage';
 
 let counter = 0;
 
@@ -53,4 +59,20 @@ export function stubWritesQuota(okWrites = 0): () => void {
 		proto.put = original.put;
 		proto.add = original.add;
 	};
+}
+
+/**
+ * A stand-in for the engine in import tests (the real one is exercised where the verdict itself
+ * matters): a first span over 10 m fails, a span that is not a positive number needs attention,
+ * anything else passes. Counts its calls.
+ */
+export function stubEngine(engineVersion = 'stub-1') {
+	const calls: unknown[] = [];
+	const recompute = (input: unknown): ComputedVerdict => {
+		calls.push(input);
+		const span = (input as { beam?: { spans?: unknown[] } }).beam?.spans?.[0];
+		if (typeof span !== 'number' || !(span > 0)) return 'needs-attention';
+		return span > 10 ? 'fail' : 'pass';
+	};
+	return { engineVersion, recompute, calls };
 }

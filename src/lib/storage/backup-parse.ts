@@ -1,7 +1,13 @@
+import { findHostileShape } from './backup-guard';
 import { isPlainObject } from './case-file';
-import { BACKUP_FORMAT, BACKUP_VERSION } from './constants';
+import {
+	BACKUP_FORMAT,
+	BACKUP_VERSION,
+	MAX_BACKUP_CHARS,
+	MAX_BACKUP_RECORDS
+} from './constants';
 import { upgradeRecord } from './record-upgrade';
-import type { CheckRecord } from './types';
+import type { CheckRecord, Revision } from './types';
 import { findRecordProblem } from './validate-record';
 
 /** Why a backup file was refused. */
@@ -12,10 +18,15 @@ export type ParsedBackup = { ok: true; records: CheckRecord[] } | BackupRefusal;
 
 /**
  * Reads a backup file's text and checks all of it before anything is written: damaged (not
- * JSON, cut short, a bad record), foreign (another format) and newer files are refused.
- * Pure; no storage is touched.
+ * JSON, cut short, a bad record, too big, hostile keys), foreign (another format) and newer files
+ * are refused. Records come back with only the fields we know, no deletion mark and no computed
+ * verdict: nothing in a file may hide a check or claim a verdict. Pure; no storage is touched.
  */
 export function parseBackup(text: string): ParsedBackup {
+	if (text.length > MAX_BACKUP_CHARS) {
+		const mb = Math.round(MAX_BACKUP_CHARS / 1e6);
+		return refuse('damaged', `This file is larger than any backup (over ${mb} MB). Nothing was imported.`);
+	}
 	let data: unknown;
 	try {
 		data = JSON.parse(text);
@@ -23,6 +34,13 @@ export function parseBackup(text: string): ParsedBackup {
 		return refuse(
 			'damaged',
 			'This file is damaged or cut short: it is not readable JSON. Nothing was imported.'
+		);
+	}
+	const hostile = findHostileShape(data);
+	if (hostile) {
+		return refuse(
+			'damaged',
+			`This file holds something no Hingepoint backup has (${hostile}). Nothing was imported.`
 		);
 	}
 	if (!isPlainObject(data) || data.format !== BACKUP_FORMAT) {
@@ -45,6 +63,12 @@ export function parseBackup(text: string): ParsedBackup {
 	}
 	if (!Array.isArray(data.records)) {
 		return refuse('damaged', 'This backup has no list of checks. Nothing was imported.');
+	}
+	if (data.records.length > MAX_BACKUP_RECORDS) {
+		return refuse(
+			'damaged',
+			`This backup lists more than ${MAX_BACKUP_RECORDS} checks, more than any phone holds. Nothing was imported.`
+		);
 	}
 	return readRecords(data.records);
 }
@@ -72,9 +96,33 @@ function readRecords(raw: unknown[]): ParsedBackup {
 			return refuse('damaged', `This backup lists check ${i + 1} twice. Nothing was imported.`);
 		}
 		seen.add(upgraded.record.id);
-		records.push(upgraded.record);
+		records.push(pickRecord(upgraded.record));
 	}
 	return { ok: true, records };
+}
+
+// Only the fields we know, so nothing unexpected is stored. The deletion mark is dropped (an
+// imported check is always live) and the verdict is left for this app to compute.
+function pickRecord(r: CheckRecord): CheckRecord {
+	return {
+		id: r.id,
+		schemaVersion: r.schemaVersion,
+		title: r.title,
+		place: { building: r.place.building, level: r.place.level, grid: r.place.grid },
+		notes: r.notes,
+		createdAt: r.createdAt,
+		updatedAt: r.updatedAt,
+		engineVersion: r.engineVersion,
+		input: r.input,
+		result: r.result,
+		computed: null,
+		revisions: r.revisions.map(pickRevision),
+		deletedAt: null
+	};
+}
+
+function pickRevision(r: Revision): Revision {
+	return { savedAt: r.savedAt, input: r.input, result: r.result, engineVersion: r.engineVersion };
 }
 
 function refuse(reason: BackupRefusal['reason'], message: string): BackupRefusal {

@@ -1,10 +1,12 @@
-import { BACKUP_FORMAT, BACKUP_VERSION, RECORD_SCHEMA_VERSION } from './constants';
+import { planImport, type ImportCounts } from './backup-merge';
+import { parseBackup } from './backup-parse';
+import { BACKUP_FORMAT, BACKUP_VERSION } from './constants';
 import type { CheckStore } from './db';
 import { FAILURE_MESSAGES } from './errors';
-import { stampNow } from './ids';
-import { parseBackup } from './backup-parse';
+import { createId, stampNow } from './ids';
 import { readFrom, writeTo } from './tx';
-import type { CheckRecord, ClockOptions, StoreResult } from './types';
+import type { CheckRecord, ClockOptions, ComputedVerdict, StoreResult } from './types';
+import type { Recompute } from './verdicts';
 
 /** The backup file: every saved check, in our own format. */
 export interface BackupFile {
@@ -23,9 +25,17 @@ export interface ExportOptions extends ClockOptions {
 	engineVersion: string;
 }
 
+/** What an import needs from the UI: the engine's verdict, and which engine gave it. */
+export interface ImportOptions {
+	recompute: Recompute;
+	engineVersion: string;
+	/** Makes ids for checks kept beside; tests pass a counter. */
+	newId?: () => string;
+}
+
 /** Outcome of an import: counts, or why nothing changed. */
 export type ImportResult =
-	| { ok: true; added: number; updated: number; skipped: number }
+	| ({ ok: true } & ImportCounts)
 	| { ok: false; reason: 'damaged' | 'foreign' | 'newer' | 'storage'; message: string };
 
 /** Writes every saved check (deleted ones left out) as one JSON text, oldest first. */
@@ -51,26 +61,27 @@ export async function exportBackup(
 }
 
 /**
- * Merges a backup into the store: a new id is added, a newer `updatedAt` replaces the stored
- * record, anything else (identical, older, or same date) is skipped. The whole file is checked
- * before writing, and the write is one transaction, so a refusal or a failure changes nothing.
+ * Adds a backup's checks to the store without changing any check already here (see
+ * `planImport` for the rule). Each imported case is checked again by `recompute` before it is
+ * stored; the file's own results and verdicts are never listed. The whole file is checked
+ * before writing and the write is one transaction, so a refusal or a failure (a full disk)
+ * changes nothing.
  */
-export async function importBackup(store: CheckStore, text: string): Promise<ImportResult> {
+export async function importBackup(
+	store: CheckStore,
+	text: string,
+	options: ImportOptions
+): Promise<ImportResult> {
 	const parsed = parseBackup(text);
 	if (!parsed.ok) return parsed;
+	// Computed before the transaction opens: it may await, and a transaction must not.
+	const records = await withVerdicts(parsed.records, options);
 	const outcome = await writeTo(store, ['checks'], async (tx) => {
 		const checks = tx.objectStore('checks');
-		const counts = { added: 0, updated: 0, skipped: 0 };
-		for (const incoming of parsed.records) {
-			const existing = await checks.get(incoming.id);
-			const action = decideMerge(existing, incoming);
-			if (action === 'skip') counts.skipped += 1;
-			else {
-				await checks.put(incoming);
-				counts[action === 'add' ? 'added' : 'updated'] += 1;
-			}
-		}
-		return { ok: true, value: counts };
+		const plan = planImport(await checks.getAll(), records, options.newId ?? createId);
+		// add, never put: a clash with a stored id aborts rather than replaces.
+		for (const record of plan.writes) await checks.add(record);
+		return { ok: true, value: plan.counts };
 	});
 	if (outcome.ok) return { ok: true, ...outcome.value };
 	const known = ['read-only', 'quota', 'closed'].includes(outcome.reason);
@@ -78,17 +89,19 @@ export async function importBackup(store: CheckStore, text: string): Promise<Imp
 	return { ok: false, reason: 'storage', message };
 }
 
-/**
- * What a merge does with one incoming record. Pure.
- * @example
- * decideMerge(undefined, record) // 'add'
- */
-export function decideMerge(
-	existing: CheckRecord | undefined,
-	incoming: CheckRecord
-): 'add' | 'update' | 'skip' {
-	if (!existing) return 'add';
-	// A record written by a newer app version is never rewritten.
-	if (existing.schemaVersion > RECORD_SCHEMA_VERSION) return 'skip';
-	return incoming.updatedAt > existing.updatedAt ? 'update' : 'skip';
+async function withVerdicts(
+	records: readonly CheckRecord[],
+	options: ImportOptions
+): Promise<CheckRecord[]> {
+	const out: CheckRecord[] = [];
+	for (const record of records) {
+		let verdict: ComputedVerdict;
+		try {
+			verdict = await options.recompute(record.input);
+		} catch {
+			verdict = 'needs-attention';
+		}
+		out.push({ ...record, computed: { verdict, computedBy: options.engineVersion } });
+	}
+	return out;
 }

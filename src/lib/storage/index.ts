@@ -10,6 +10,7 @@ export {
 	BACKUP_VERSION,
 	DB_NAME,
 	DB_VERSION,
+	MAX_BACKUP_CHARS,
 	RECORD_SCHEMA_VERSION
 } from './constants';
 export type { OpenStoreOptions, OpenStoreResult, StoreStatus } from './db';
@@ -17,10 +18,12 @@ export { CheckStore, openStore } from './db';
 export type {
 	CheckRecord,
 	ClockOptions,
+	ComputedVerdict,
 	Place,
 	Revision,
 	StoreFailureReason,
-	StoreResult
+	StoreResult,
+	VerdictStamp
 } from './types';
 export type { CheckChanges, ListOptions, NewCheck, SavedCheck } from './records';
 export { duplicateCheck, getCheck, listChecks, saveCheck, updateCheck } from './records';
@@ -28,8 +31,11 @@ export type { DeletedCheck } from './deletion';
 export { deleteCheck, purgeDeleted, undoDelete } from './deletion';
 export type { DraftInput, DraftRecord } from './drafts';
 export { clearDraft, loadDraft, saveDraft } from './drafts';
-export type { BackupFile, ExportOptions, ImportResult } from './backup';
+export type { BackupFile, ExportOptions, ImportOptions, ImportResult } from './backup';
 export { exportBackup, importBackup } from './backup';
+export type { ImportCounts } from './backup-merge';
+export type { Recompute, VerdictUpdate } from './verdicts';
+export { needsVerdict, storeVerdicts } from './verdicts';
 export type { PersistenceAnswer } from './persist';
 export {
 	markInstallExplained,

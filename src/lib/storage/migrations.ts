@@ -11,6 +11,8 @@ export interface StoreMigration {
 	version: number;
 	reason: string;
 	up: (db: UpgradeDB, tx: UpgradeTx) => void;
+	/** Records change shape at this step: rewrite them (once, however many steps ask). */
+	rewritesRecords?: boolean;
 }
 
 /** Ordered store migrations. Each awaits nothing but IndexedDB. */
@@ -28,10 +30,15 @@ export const STORE_MIGRATIONS: readonly StoreMigration[] = [
 		version: 2,
 		reason: 'newest-first list index; records rewritten with the place split out',
 		up: (_db, tx) => {
-			const checks = tx.objectStore('checks');
-			checks.createIndex('by-updated', 'updatedAt');
-			void rewriteRecords(tx).catch(() => abortQuietly(tx));
-		}
+			tx.objectStore('checks').createIndex('by-updated', 'updatedAt');
+		},
+		rewritesRecords: true
+	},
+	{
+		version: 3,
+		reason: 'records rewritten with an empty computed-verdict slot, filled by the current engine',
+		up: () => undefined,
+		rewritesRecords: true
 	}
 ];
 
@@ -45,9 +52,14 @@ export function applyStoreMigrations(
 	oldVersion: number,
 	newVersion: number
 ): void {
+	let rewrite = false;
 	for (const step of STORE_MIGRATIONS) {
-		if (step.version > oldVersion && step.version <= newVersion) step.up(db, tx);
+		if (step.version <= oldVersion || step.version > newVersion) continue;
+		step.up(db, tx);
+		// A new database has no records; an old one is walked once, to the current shape.
+		rewrite ||= oldVersion > 0 && step.rewritesRecords === true;
 	}
+	if (rewrite) void rewriteRecords(tx).catch(() => abortQuietly(tx));
 }
 
 // Walks the checks with a cursor and rewrites each older record in place. Records already at

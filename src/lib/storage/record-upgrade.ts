@@ -1,6 +1,6 @@
 import { isPlainObject } from './case-file';
 import { RECORD_SCHEMA_VERSION } from './constants';
-import type { CheckRecordV1 } from './schema';
+import type { CheckRecordV1, CheckRecordV2 } from './schema';
 import type { CheckRecord } from './types';
 
 /** One pure record-shape upgrade, from `from` to `from + 1`. */
@@ -20,6 +20,12 @@ export const RECORD_UPGRADERS: readonly RecordUpgrader[] = [
 		reason: 'place split into building, level and grid so each can be filled and searched',
 		up: (record) =>
 			upgradeRecordV1(record as unknown as CheckRecordV1) as unknown as Record<string, unknown>
+	},
+	{
+		from: 2,
+		reason: 'lists show only a verdict this app computed, never a stored result it did not check',
+		up: (record) =>
+			upgradeRecordV2(record as unknown as CheckRecordV2) as unknown as Record<string, unknown>
 	}
 ];
 
@@ -63,7 +69,15 @@ export function upgradeRecord(raw: unknown): RecordUpgrade {
 /**
  * v1 → v2: the free-text place moves whole into `building` (nothing is guessed or lost).
  */
-export function upgradeRecordV1(record: CheckRecordV1): CheckRecord {
+export function upgradeRecordV1(record: CheckRecordV1): CheckRecordV2 {
 	const { place, ...rest } = record;
 	return { ...rest, schemaVersion: 2, place: { building: place, level: '', grid: '' } };
+}
+
+/**
+ * v2 → v3: an empty computed-verdict slot; the list recomputes it with the current engine. The
+ * stored result stays as it was (nothing is lost), it is just no longer what the list shows.
+ */
+export function upgradeRecordV2(record: CheckRecordV2): CheckRecord {
+	return { ...record, schemaVersion: 3, computed: null };
 }

@@ -6,7 +6,14 @@ import { createId, stampNow } from './ids';
 import { requestPersistenceOnce, type PersistenceAnswer } from './persist';
 import { matchesSearch } from './search';
 import { readFrom, writeTo } from './tx';
-import type { CheckRecord, ClockOptions, Place, Revision, StoreResult } from './types';
+import type {
+	CheckRecord,
+	ClockOptions,
+	Place,
+	Revision,
+	StoreResult,
+	VerdictStamp
+} from './types';
 
 /** What the form hands over when a check is saved for the first time. */
 export interface NewCheck extends ClockOptions {
@@ -18,6 +25,8 @@ export interface NewCheck extends ClockOptions {
 	/** The report as computed (structured-cloneable), or null. */
 	result: unknown;
 	engineVersion: string;
+	/** The verdict the app computed for `input`, if known; else the list computes it later. */
+	computed?: VerdictStamp | null;
 }
 
 /** A saved record and, on the first save only, whether persistent storage was granted. */
@@ -47,6 +56,7 @@ export async function saveCheck(
 		engineVersion: check.engineVersion,
 		input: check.input,
 		result: check.result,
+		computed: check.computed ?? null,
 		revisions: [],
 		deletedAt: null
 	};
@@ -113,7 +123,7 @@ export async function duplicateCheck(
 
 /** Fields an edit may change. A new `input` or `result` keeps the previous pair as a revision. */
 export type CheckChanges = Partial<
-	Pick<CheckRecord, 'title' | 'notes' | 'input' | 'result' | 'engineVersion'>
+	Pick<CheckRecord, 'title' | 'notes' | 'input' | 'result' | 'engineVersion' | 'computed'>
 > & {
 	place?: Partial<Place>;
 };
@@ -157,6 +167,13 @@ function applyChanges(current: CheckRecord, changes: CheckChanges, at: string): 
 		input: changes.input ?? current.input,
 		result: changes.result !== undefined ? changes.result : current.result,
 		engineVersion: changes.engineVersion ?? current.engineVersion,
+		// A verdict belongs to its inputs: new inputs wait for a new one.
+		computed:
+			changes.computed !== undefined
+				? changes.computed
+				: changes.input !== undefined
+					? null
+					: current.computed,
 		updatedAt: at,
 		revisions
 	};

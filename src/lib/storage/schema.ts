@@ -1,6 +1,6 @@
 import type { DBSchema } from 'idb';
 import type { CaseFile } from './case-file';
-import type { CheckRecord, Revision } from './types';
+import type { CheckRecord, Place, Revision } from './types';
 
 /** A check record as version 1 wrote it: the place was one free-text string. */
 export interface CheckRecordV1 {
@@ -8,6 +8,22 @@ export interface CheckRecordV1 {
 	schemaVersion: 1;
 	title: string;
 	place: string;
+	notes: string;
+	createdAt: string;
+	updatedAt: string;
+	engineVersion: string;
+	input: CaseFile;
+	result: unknown;
+	revisions: Revision[];
+	deletedAt: string | null;
+}
+
+/** A check record as version 2 wrote it: no computed verdict, lists read the stored result. */
+export interface CheckRecordV2 {
+	id: string;
+	schemaVersion: 2;
+	title: string;
+	place: Place;
 	notes: string;
 	createdAt: string;
 	updatedAt: string;
@@ -40,7 +56,14 @@ export interface HingepointDBv1 extends DBSchema {
 	meta: { key: string; value: MetaRecord };
 }
 
-/** Database version 2 (current): place split out, newest-first index on `updatedAt`. */
+/** Database version 2: place split out, newest-first index on `updatedAt`. */
+export interface HingepointDBv2 extends DBSchema {
+	checks: { key: string; value: CheckRecordV2; indexes: { 'by-updated': string } };
+	drafts: { key: string; value: DraftRecord };
+	meta: { key: string; value: MetaRecord };
+}
+
+/** Database version 3 (current): same stores; records carry the verdict the app computed. */
 export interface HingepointDB extends DBSchema {
 	checks: { key: string; value: CheckRecord; indexes: { 'by-updated': string } };
 	drafts: { key: string; value: DraftRecord };

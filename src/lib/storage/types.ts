@@ -18,7 +18,19 @@ export interface Revision {
 	engineVersion: string;
 }
 
-/** A saved check (record schema version 2). Dates are ISO 8601 strings in UTC. */
+/**
+ * What this app's own engine made of a check's inputs: a verdict, 'no-load' (valid, but no proposed
+ * load to judge), or 'needs-attention' (the inputs did not pass validation, or the engine failed).
+ */
+export type ComputedVerdict = 'pass' | 'fail' | 'outside-scope' | 'no-load' | 'needs-attention';
+
+/** A verdict with the engine version that computed it, so a newer engine knows to recompute. */
+export interface VerdictStamp {
+	verdict: ComputedVerdict;
+	computedBy: string;
+}
+
+/** A saved check (record schema version 3). Dates are ISO 8601 strings in UTC. */
 export interface CheckRecord {
 	id: string;
 	schemaVersion: number;
@@ -31,8 +43,13 @@ export interface CheckRecord {
 	engineVersion: string;
 	/** The inputs, as a case file in SI (m, kN, kN/m, kNm). */
 	input: CaseFile;
-	/** The report as computed (structured-cloneable), or null if none was computed. */
+	/**
+	 * The report as computed (structured-cloneable), or null. From a backup file it is the file's
+	 * claim: kept, never shown; lists read `computed` instead.
+	 */
 	result: unknown;
+	/** The verdict this app computed for `input`; null until computed (or after `input` changed). */
+	computed: VerdictStamp | null;
 	/** Earlier states, oldest first. */
 	revisions: Revision[];
 	/** Set when deleted (soft delete, so undo restores the record exactly); null otherwise. */

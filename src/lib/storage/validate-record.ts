@@ -4,7 +4,7 @@ import { isCaseLike, isPlainObject } from './case-file';
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{3}Z$/;
 
 /**
- * Checks the shape of a stored check record of schema version 1 or 2 (callers refuse newer
+ * Checks the shape of a stored check record of schema version 1 to 3 (callers refuse newer
  * versions first). Returns a message naming the first bad field, or null when the record is sound.
  * @param path where the record sits, e.g. 'records[3]', for the message
  */

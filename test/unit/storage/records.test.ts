@@ -38,7 +38,8 @@ describe('saving and reading checks', () => {
 		});
 		expect(record.title).toBe('Trimmer to lift shaft');
 		expect(record.createdAt).toBe('2026-05-01T10:00:00.000Z');
-		expect(record.schemaVersion).toBe(2);
+		expect(record.schemaVersion).toBe(3);
+		expect(record.computed).toBeNull();
 		const read = await getCheck(store, record.id);
 		expect(read).toEqual({ ok: true, value: record });
 		store.close();
@@ -106,6 +107,22 @@ describe('editing keeps a revision history', () => {
 		]);
 		const retitled = await updateCheck(store, v1.id, { title: 'Renamed' });
 		expect(retitled.ok && retitled.value.revisions.length).toBe(1);
+		store.close();
+	});
+
+	it('clears the computed verdict when the inputs change, keeps it for a rename', async () => {
+		const store = await openFreshStore('verdict-follows-input');
+		const computed = { verdict: 'pass' as const, computedBy: '1' };
+		const saved = await saveCheck(store, { ...plainCheck('Beam'), computed });
+		if (!saved.ok) throw new Error(saved.message);
+		const { id } = saved.value.record;
+		expect(saved.value.record.computed).toEqual(computed);
+		const renamed = await updateCheck(store, id, { title: 'Renamed' });
+		expect(renamed.ok && renamed.value.computed).toEqual(computed);
+		const edited = await updateCheck(store, id, { input: demoCase('IPE 300', 9) });
+		expect(edited.ok && edited.value.computed).toBeNull();
+		const stamped = await updateCheck(store, id, { input: demoCase('IPE 300', 8), computed });
+		expect(stamped.ok && stamped.value.computed).toEqual(computed);
 		store.close();
 	});
 
