@@ -21,7 +21,7 @@ import { expectRel } from '../support/expect-rel';
 
 const arbitraryCase = fc
 	.record({
-		spans: fc.array(fc.integer({ min: 1500, max: 9000 }), { minLength: 1, maxLength: 4 }),
+		spans: fc.array(fc.integer({ min: 1500, max: 9000 }), { minLength: 1, maxLength: 3 }),
 		left: fc.constantFrom<SupportKind>('pin', 'fixed', 'free'),
 		right: fc.constantFrom<SupportKind>('pin', 'fixed', 'free'),
 		EI: fc.array(fc.integer({ min: 5, max: 50 }), { minLength: 4, maxLength: 4 }),
@@ -101,5 +101,6 @@ describe('elastic bending by superposed pieces', () => {
 			}),
 			{ numRuns: 200 }
 		);
-	});
+		// The exhaustive side analyses every arrangement afresh: slow by design.
+	}, 300_000);
 });
