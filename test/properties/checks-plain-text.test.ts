@@ -4,8 +4,8 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { isPlainText, toPlainText } from '../../src/lib/engine/checks/plain-text';
-import { SHORT_SUMMARY_LIMIT, writeLongSummary, writeShortSummary } from '../../src/lib/engine/checks/summary';
+import { isPlainText, toPlainText } from '../../src/lib/engine/report/plain-text';
+import { SHORT_SUMMARY_LIMIT, writeLongSummary, writeShortSummary } from '../../src/lib/engine/report/summary';
 
 describe('plain text', () => {
 	it('toPlainText leaves no markup character in any string', () => {
@@ -33,9 +33,8 @@ describe('plain text', () => {
 					verdict: 'fail' as const,
 					routeReasons: ['Class 2 section'],
 					governing: { label: 'Lateral-torsional buckling, segment 1', utilisation: 1.2 },
-					loadFactor: 0.83,
 					reserve: -17,
-					allowable: labels.map((label) => ({ name: label, value: 8.3, unit: 'kN' })),
+					allowable: labels.map((label, i) => `8.3 kN (load ${i + 1}, ${label})`),
 					checks: [],
 					notice: 'Screening aid only.',
 					notices: [],

@@ -1,5 +1,5 @@
 import { readFile } from 'node:fs/promises';
-import { checkCase, type CheckReport } from '../../lib/engine/index';
+import { checkCase, describeAllowable, type CheckReport } from '../../lib/engine/index';
 import type { InputIssue } from '../../lib/engine/model/issue';
 import type { CliCommand } from './index';
 
@@ -9,42 +9,62 @@ function fmt(v: number | null | undefined, digits = 4): string {
 	return Number(v.toPrecision(digits)).toString();
 }
 
-/** The readable summary `check` prints without --json. */
+const VERDICT_WORDS = {
+	pass: 'PASS',
+	fail: 'FAIL',
+	'outside-scope': 'OUTSIDE SCOPE'
+} as const;
+
+/** The readable summary `check` prints without --json: the answer first, then what it rests on. */
 function formatCheckText(r: CheckReport, warnings: { path: string; message: string }[]): string {
-	const c = r.collapse;
+	const a = r.answer;
 	const lines = [r.title ? `Case: ${r.title}` : 'Case (untitled)', ''];
+	lines.push(`Verdict: ${a.verdict === null ? 'NO VERDICT' : VERDICT_WORDS[a.verdict]}`);
+	lines.push(`  ${a.message}`);
+	if (a.governing) {
+		const u = a.utilisation === null ? '' : `, utilisation ${fmt(a.utilisation * 100, 3)} %`;
+		lines.push(`  governing: ${a.governing.label}${u}`);
+	}
+	if (a.multiplier !== null) {
+		lines.push(`  multiplier on the proposed loads ${fmt(a.multiplier)}; reserve ${fmt(a.reserve! * 100, 3)} %`);
+	}
+	for (const t of a.allowable) lines.push(`  largest proposed load: ${describeAllowable(t)}`);
+	for (const reason of a.reasons) lines.push(`  - ${reason}`);
+	lines.push('', `Route: ${r.design.route.route}`, ...r.design.route.reasons.map((t) => `  ${t}`));
+	lines.push(`  ${r.design.basis}; factor set ${r.design.factorSet}, ${r.design.arrangementsTried} load arrangements tried`);
+	if (r.design.governingArrangement) lines.push(`  governing arrangement: ${r.design.governingArrangement}`);
 	r.sections.forEach((s, i) => {
 		const g = r.grades[i];
 		const cls = s.class === null ? 'class not known' : `Class ${s.class}`;
 		const fy = g ? `, ${g.name}, fy ${g.fy} MPa` : '';
-		lines.push(`Span ${i + 1}: ${s.designation}${fy}, ${cls}; Mp,Rd ${fmt(r.mpRd[i])} kNm`);
+		lines.push(`Span ${i + 1}: ${s.designation}${fy}, ${cls}`);
 	});
-	const scope = c.appliesTo === 'temporary' ? 'on the temporary loads' : 'on all loads';
-	lines.push('', `Plastic collapse (factor ${scope}):`);
-	if (c.loadFactor === null) lines.push(`  no load factor: ${c.message ?? c.status}`);
-	else {
-		const proof = c.certified ? ' (certified: bounds meet)' : ' — NOT CERTIFIED';
-		lines.push(`  load factor λ = ${fmt(c.loadFactor)}${proof}`);
-		if (c.mechanism) lines.push(`  mechanism: ${c.mechanism.name}`);
-		for (const h of c.hinges) lines.push(`  hinge at x = ${fmt(h.x)} m, M = ${fmt(h.moment)} kNm`);
-		if (c.message) lines.push(`  ${c.message}`);
-	}
-	if (r.temporaryCapacity) {
-		lines.push('', 'Largest temporary loads (characteristic, the other loads present):');
-		for (const t of r.temporaryCapacity.loads) {
-			const name = t.label ?? `load ${t.index + 1} (${t.kind})`;
-			const entered = `${fmt(t.entered)} ${t.unit}`;
-			lines.push(`  ${name}: entered ${entered}, capacity ${fmt(t.capacity)} ${t.unit}`);
+	if (r.checks.length > 0) {
+		lines.push('', 'Checks (each a partial result; the verdict takes the worst):');
+		for (const c of r.checks) {
+			const mark = c.pass ? 'ok' : c.level === 'warning' ? 'over (warning)' : 'FAILS';
+			lines.push(`  ${c.label}: ${fmt(c.utilisation * 100, 3)} % ${mark} [${c.clause}]`);
 		}
-		const { total, enteredTotal } = r.temporaryCapacity;
-		lines.push(`  total: ${fmt(total)} kN (entered ${fmt(enteredTotal)} kN)`);
 	}
-	if (r.capacityCurve) {
+	const c = r.collapse;
+	if (c) {
+		const role = c.decides ? 'the bending check of the plastic route' : 'for information, it does not decide';
+		lines.push('', `Plastic collapse in bending (partial result; ${role}):`);
+		if (c.loadFactor === null) lines.push(`  no load factor: ${c.message ?? c.status}`);
+		else {
+			const proof = c.certified ? ' (certified: bounds meet)' : ' — NOT CERTIFIED';
+			lines.push(`  load factor λ = ${fmt(c.loadFactor)}${proof}`);
+			if (c.mechanism) lines.push(`  mechanism: ${c.mechanism.name}`);
+			for (const h of c.hinges) lines.push(`  hinge at x = ${fmt(h.x)} m, M = ${fmt(h.moment)} kNm`);
+			if (c.message) lines.push(`  ${c.message}`);
+		}
+	}
+	if (r.capacityCurve?.min) {
 		const m = r.capacityCurve.min;
-		const where = `x = ${fmt(m.x)} m (${m.mechanism})`;
-		lines.push('', `Single temporary point load: least ${fmt(m.p)} kN at ${where}`);
+		const by = m.governing ? `, governed by ${m.governing.label}` : '';
+		lines.push('', `Single proposed point load anywhere on the beam: least ${fmt(m.p)} kN at x = ${fmt(m.x)} m${by}`);
 	}
-	const e = r.elastic;
+	const e = r.effects;
 	lines.push('', 'Elastic, unfactored loads:');
 	for (const [word, v] of [
 		['sagging', e.maxMoment?.maxSagging],
@@ -57,44 +77,13 @@ function formatCheckText(r: CheckReport, warnings: { path: string; message: stri
 		lines.push(`  largest deflection ${fmt(total.value, 3)} mm at ${fmt(total.x)} m`);
 		if (temporary) lines.push(`  from the temporary loads alone ${fmt(temporary.value, 3)} mm`);
 	}
-	if (e.firstYield) lines.push(`  first yield at factor ${fmt(e.firstYield.factor)}`);
-	if (e.firstHinge) lines.push(`  first plastic hinge at factor ${fmt(e.firstHinge.factor)}`);
-	lines.push('', ...formatVerdictText(r));
 	lines.push('', 'Notices:', ...r.notices.map((n) => `  - ${n}`));
+	lines.push('', 'Assumptions:', ...r.assumptions.map((n) => `  - ${n}`));
 	if (warnings.length > 0) {
 		lines.push('', 'Input warnings:', ...warnings.map((w) => `  - ${w.path}: ${w.message}`));
 	}
 	lines.push('', `Engine ${r.engineVersion}`);
 	return lines.join('\n');
-}
-
-/** Verdict, governing check, reserve, allowable loads and every check row. */
-function formatVerdictText(r: CheckReport): string[] {
-	const d = r.design;
-	const lines = [
-		`Verdict: ${r.verdict.toUpperCase()} (${d.route.route})`,
-		...d.route.reasons.map((t) => `  ${t}`)
-	];
-	if (r.governing) {
-		const u = fmt(r.governing.utilisation, 3);
-		lines.push(`  governing: ${r.governing.label}, utilisation ${u}`);
-	}
-	if (d.loadFactor !== null) {
-		lines.push(`  load factor on the temporary loads ${fmt(d.loadFactor)}`);
-	}
-	if (r.reserve !== null) lines.push(`  reserve ${fmt(r.reserve, 3)} %`);
-	lines.push(`  factor set ${d.factorSet}, ${d.arrangementsTried} load arrangements tried`);
-	if (d.governingArrangement) lines.push(`  governing arrangement: ${d.governingArrangement}`);
-	for (const t of r.allowable?.loads ?? []) {
-		const name = t.label ?? `load ${t.index + 1}`;
-		lines.push(`  largest ${name}: ${fmt(t.capacity)} ${t.unit} (entered ${fmt(t.entered)})`);
-	}
-	lines.push('', 'Checks:');
-	for (const c of r.checks) {
-		const mark = c.pass ? 'ok' : c.level === 'warning' ? 'over (warning)' : 'FAILS';
-		lines.push(`  ${c.label}: ${fmt(c.utilisation * 100, 3)} % ${mark} [${c.clause}]`);
-	}
-	return lines;
 }
 
 /** One entry of the `errors` list printed for bad input. */
@@ -113,6 +102,9 @@ function failInput(errors: CliError[], json: boolean): number {
 	}
 	return 2;
 }
+
+/** Largest case file read, characters: 200 loads and 50 spans fit in well under 100 000. */
+const MAX_CASE_CHARS = 1_000_000;
 
 const toError = (i: InputIssue) => ({ path: i.path, message: i.message, code: i.code });
 
@@ -141,6 +133,11 @@ export const checkCommand: CliCommand = {
 		} catch (error) {
 			const reason = error instanceof Error ? error.message : String(error);
 			return failInput([{ path: '', message: `cannot read ${files[0]}: ${reason}` }], json);
+		}
+		// A valid case is a few kB; refuse a huge file before parsing it.
+		if (text.length > MAX_CASE_CHARS) {
+			const message = `the case file is larger than ${MAX_CASE_CHARS} characters`;
+			return failInput([{ path: '', message }], json);
 		}
 		let data: unknown;
 		try {

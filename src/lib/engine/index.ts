@@ -3,6 +3,7 @@
  * Pure TypeScript; the same call serves the phone app and the command line.
  */
 import { parseCase } from './case/parse-case';
+import { runDesign } from './checks/run-design';
 import type { InputIssue } from './model/issue';
 import { buildCheckReport, type ReportOptions } from './report/build-report';
 import type { CheckReport } from './report/types';
@@ -10,6 +11,8 @@ import type { CheckReport } from './report/types';
 export { ENGINE_VERSION } from './report/version';
 export { parseCase } from './case/parse-case';
 export { CASE_FORMAT, CASE_VERSION } from './case/types';
+export { REPORT_FORMAT, REPORT_VERSION } from './report/types';
+export { describeAllowable } from './report/answer-report';
 export type * from './case/types';
 export type * from './report/types';
 export type { ReportOptions } from './report/build-report';
@@ -25,18 +28,18 @@ export type CheckOutcome =
  * Validates a case file and, when it is valid, computes its report. Never throws for bad input
  * (that comes back as issues); a throw means a broken invariant inside the engine.
  * @param json the parsed case file (`format: 'hingepoint.case'`)
- * @param options `curve: true` adds the capacity curve
+ * @param options `curve: true` adds the governing capacity curve
  * @example
  * const out = checkCase({ format: 'hingepoint.case', version: 1,
- *   beam: { spans: [6], supports: ['pin', 'pin'], section: { mp: 100 } },
- *   loads: [{ kind: 'point', x: 3, value: 10, action: 'temporary' }],
- *   factors: { temporary: 1 } });
- * out.ok && out.report.collapse.loadFactor // 6.667 (= 4·Mp/(L·W), simple plastic theory)
+ *   beam: { spans: [6], supports: ['pin', 'pin'], section: 'UB 305x165x40', grade: 'S275' },
+ *   loads: [{ kind: 'point', x: 3, value: 10, action: 'temporary' }] });
+ * out.ok && out.report.answer.multiplier // the factor every deciding check allows
  */
 export function checkCase(json: unknown, options: ReportOptions = {}): CheckOutcome {
 	const parsed = parseCase(json);
 	if (!parsed.ok) return { ok: false, issues: parsed.issues };
-	const built = buildCheckReport(parsed.value, options);
-	if (!built.ok) return { ok: false, issues: built.issues };
-	return { ok: true, report: built.report, warnings: parsed.warnings };
+	const design = runDesign(parsed.value, { curve: options.curve });
+	if (!design.ok) return { ok: false, issues: design.issues };
+	const report = buildCheckReport(parsed.value, design.value, options);
+	return { ok: true, report, warnings: parsed.warnings };
 }

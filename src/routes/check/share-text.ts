@@ -1,8 +1,12 @@
 import { ENGINEER_NOTICE_SHORT } from '$lib/engine/notice';
-import { formatNumber } from '$lib/ui/format';
 import type { ReportView } from '$lib/ui/state/check-outcome';
 
 const VERDICT_WORDS = { pass: 'PASS', fail: 'FAIL', 'outside-scope': 'OUTSIDE SCOPE' } as const;
+
+/** The verdict in capitals, or NO VERDICT when no proposed load was entered. */
+export function verdictWord(verdict: ReportView['answer']['verdict']): string {
+	return verdict === null ? 'NO VERDICT' : VERDICT_WORDS[verdict];
+}
 
 /**
  * The short and long texts to share: the engine's own summary when it gives one, always ending
@@ -17,8 +21,8 @@ export function composeShareTexts(
 ): { short: string; long: string } {
 	const fallback = [
 		title || 'Beam check',
-		`Verdict: ${VERDICT_WORDS[report.verdict]}`,
-		`Collapse load factor: ${report.collapse.loadFactor != null ? formatNumber(report.collapse.loadFactor, 3) : '—'}`
+		`Verdict: ${verdictWord(report.answer.verdict)}`,
+		report.answer.message
 	].join('\n');
 	// Place, date and who checked it are not the engine's business: they head the text here.
 	const header = [context.place ? `Place: ${context.place}` : '', context.date ? `Date: ${context.date}` : '', context.by ? `By: ${context.by}` : '']

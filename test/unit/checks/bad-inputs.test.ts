@@ -28,7 +28,7 @@ function issuesOf(json: unknown): string[] {
 describe('bad inputs name their field and give no verdict', () => {
 	it('the good case gives a verdict (control)', () => {
 		const out = checkCase(good());
-		expect(out.ok && out.report.verdict).toBe('pass');
+		expect(out.ok && out.report.answer.verdict).toBe('pass');
 	});
 
 	it('negative span', () => {

@@ -3,13 +3,13 @@
  * characters a messaging app renders as markup). Demo data, invented.
  */
 import { describe, expect, it } from 'vitest';
-import { isPlainText, toPlainText } from '../../../src/lib/engine/checks/plain-text';
+import { isPlainText, toPlainText } from '../../../src/lib/engine/report/plain-text';
 import {
 	SHORT_SUMMARY_LIMIT,
 	writeLongSummary,
 	writeShortSummary,
 	type SummaryInput
-} from '../../../src/lib/engine/checks/summary';
+} from '../../../src/lib/engine/report/summary';
 
 const demo: SummaryInput = {
 	title: 'Demo: hoist on the *old* [store] beam_1',
@@ -28,9 +28,8 @@ const demo: SummaryInput = {
 	verdict: 'pass',
 	routeReasons: ['Class 1 section > plastic collapse'],
 	governing: { label: 'Bending', utilisation: 0.27 },
-	loadFactor: 6.54,
 	reserve: 554,
-	allowable: [{ name: 'hoist', value: 65.4, unit: 'kN' }],
+	allowable: ['65.4 kN (load 2, hoist)'],
 	checks: [{ label: 'Shear', clause: 'EN 1993-1-1 6.2.6', utilisation: 0.07, pass: true, level: 'governing', details: ['VEd 23.7 kN'] }],
 	notice: 'Screening aid only. The engineer of record decides.',
 	notices: [],

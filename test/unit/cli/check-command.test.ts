@@ -27,7 +27,14 @@ describe('check command', () => {
 		const report = JSON.parse(r.out);
 		const [Mp, L, W] = [100, 6, 10]; // as in the fixture
 		expect(Math.abs(report.collapse.loadFactor - (4 * Mp) / L / W)).toBeLessThan(1e-9 * 6.67);
-		const keys = ['mpRd', 'collapse', 'temporaryCapacity', 'elastic', 'section', 'grade'];
+		// Bending is the only check a known Mp allows: the answer is the same number.
+		expect(report.answer.multiplier).toBe(report.collapse.loadFactor);
+		expect(report.answer.allowable[0]).toMatchObject({ load: 0, unit: 'kN' });
+		expect(report).toMatchObject({ format: 'hingepoint.report', version: 2 });
+		for (const gone of ['mpRd', 'temporaryCapacity', 'allowable', 'reserve', 'verdict', 'governing']) {
+			expect(report).not.toHaveProperty(gone);
+		}
+		const keys = ['answer', 'checks', 'design', 'collapse', 'effects', 'sections', 'grades'];
 		for (const key of [...keys, 'notices', 'assumptions', 'engineVersion']) {
 			expect(report).toHaveProperty(key);
 		}
@@ -73,7 +80,12 @@ describe('check command', () => {
 				format: 'hingepoint.case',
 				version: 1,
 				title: 'DEMO — invented text case',
-				beam: { spans: [4], supports: ['fixed', 'free'], section: { mp: 40 } },
+				beam: {
+					spans: [4],
+					supports: ['fixed', 'free'],
+					section: { mp: 40 },
+					restraint: { lateral: 'continuous' }
+				},
 				loads: [{ kind: 'point', x: 4, value: 2, action: 'temporary' }]
 			})
 		);
@@ -81,6 +93,10 @@ describe('check command', () => {
 		expect(r.code).toBe(0);
 		// Cantilever tip load: W = Mp/L (Neal) → λ = 40/(4 · 2 · 1.5) = 3.333 with γ temporary 1.5.
 		expect(r.out).toContain('load factor λ = 3.333');
+		// The verdict and the governing answer come first; λ is labelled as the partial result it is.
+		expect(r.out.indexOf('Verdict: PASS')).toBeLessThan(r.out.indexOf('load factor λ'));
+		expect(r.out).toContain('Largest proposed load: 6.67 kN (load 1)'); // Mp/(L·γ) = 40/(4·1.5)
+		expect(r.out).toContain('Plastic collapse in bending (partial result');
 		expect(r.out).toContain('Screening aid only.');
 	});
 });

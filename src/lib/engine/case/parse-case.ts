@@ -90,6 +90,7 @@ export function parseCase(json: unknown): Checked<CaseModel> {
 		sectionLoss: loss,
 		factors,
 		...(restraint ? { restraint } : {}),
+		restraintAssumed: b.restraint === undefined,
 		...(bearing ? { bearing } : {}),
 		...settings,
 		file: echoFile(json)

@@ -137,6 +137,8 @@ export interface CaseModel {
 	/** Section loss per face, mm. */
 	sectionLoss: number;
 	factors: ResolvedFactors;
+	/** True when the file gave no restraint and the cautious default was taken. */
+	restraintAssumed?: boolean;
 	/** Lateral restraint positions converted to mm. */
 	restraint?: { lateral: 'continuous' | 'ends-only' | number[]; loadHeight?: CaseRestraint['loadHeight'] };
 	/** Stiff bearing length per support, mm. */

@@ -1,8 +1,10 @@
 /**
  * Inputs and outcome of the design checks, in internal units.
  */
+import type { CollapseResult } from '../collapse/index';
+import type { LocatedValue } from '../elastic/index';
 import type { SteelGrade } from '../material/types';
-import type { BeamLine, Load } from '../model/types';
+import type { BeamLine, CapacitySegment, Load } from '../model/types';
 import type { ResolvedSection } from '../section/types';
 import type { BasisFactors } from './design-basis';
 import type { FactorSettings } from './en1993/factors';
@@ -48,6 +50,23 @@ export interface CollapseSummary {
 	hinges: { x: number; moment: number }[];
 	arrangement: string;
 	reductions: HingeReduction[];
+	/** The governing arrangement's collapse, solved with the shear-reduced hinge moments. */
+	result: CollapseResult;
+	/** The hinge resistance it was solved with (Mp,Rd reduced for shear at hinges), N·mm. */
+	capacity: CapacitySegment[];
+}
+
+/** Elastic effects of the unfactored (characteristic) loads; null parts have a reason. */
+export interface CharacteristicEffects {
+	/** Largest sagging and hogging moment, N·mm. */
+	maxMoment: { maxSagging: LocatedValue | null; maxHogging: LocatedValue | null } | null;
+	/** Largest deflection, mm, downward positive: all loads, the temporary loads alone, per span. */
+	maxDeflection: {
+		total: LocatedValue & { span: number };
+		temporary: (LocatedValue & { span: number }) | null;
+		spans: LocatedValue[];
+	} | null;
+	notAvailable: string[];
 }
 
 /** Everything the checks found. */
@@ -60,6 +79,10 @@ export interface DesignCheckOutcome {
 	bendingArrangement: LoadArrangement | null;
 	sectionClass: SectionClass | null;
 	collapse: CollapseSummary | null;
+	/** Design plastic moment resistance per span, Mp/γM0, N·mm. */
+	mpRd: number[];
+	/** Unfactored elastic effects; null when the check stopped before any analysis. */
+	effects: CharacteristicEffects | null;
 	checks: CheckResult[];
 	verdict: Verdict;
 	notices: string[];

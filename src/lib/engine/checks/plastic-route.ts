@@ -76,7 +76,9 @@ export function runPlasticRoute(
 			mechanism: 'mechanism' in r ? r.mechanism.name : null,
 			hinges: hinges.map((h) => ({ x: h.x, moment: h.moment })),
 			arrangement: g.arrangement.name,
-			reductions: g.reductions
+			reductions: g.reductions,
+			result: r,
+			capacity: g.capacity
 		},
 		bending: describePlasticBending(ctx, g)
 	};

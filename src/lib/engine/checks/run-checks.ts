@@ -8,6 +8,7 @@ import { E_STEEL } from '../units';
 import { checkElasticBending } from './bending-check';
 import type { CheckContext } from './context';
 import { DEFAULT_DEFLECTION_LIMIT } from './deflection';
+import { summariseCharacteristicEffects } from './characteristic-effects';
 import { checkBeamDeflections } from './deflection-check';
 import type { DesignBasis } from './design-basis';
 import { releaseRedundants } from './determinate';
@@ -58,11 +59,18 @@ export function runDesignChecks(
 		hollow: members.some((m) => m.shape !== 'I' && m.shape !== 'welded-I'),
 		bearingGiven: input.bearing !== null
 	});
-	const base = { basis: basis.name, factors, sectionClass, ...notes };
+	const mpRd = members.map((m) => m.mp / factors.gammaM0);
+	const base = { basis: basis.name, factors, sectionClass, mpRd, ...notes };
 	const early = basis.decideRoute(scopeBase);
 	if (early.route === 'outside-scope') {
 		const verdict = decideVerdict({ scope: early, checks: [], loadFactor: null });
-		const none = { arrangementCount: 0, bendingArrangement: null, collapse: null, checks: [] };
+		const none = {
+			arrangementCount: 0,
+			bendingArrangement: null,
+			collapse: null,
+			effects: null,
+			checks: []
+		};
 		return { ...base, ...none, verdict };
 	}
 	const arrangements = listLoadArrangements({
@@ -101,6 +109,7 @@ export function runDesignChecks(
 		arrangementCount: arrangements.length,
 		bendingArrangement,
 		collapse: run.collapse,
+		effects: summariseCharacteristicEffects(ctx.effects, members, allKnown),
 		checks: run.checks,
 		verdict
 	};

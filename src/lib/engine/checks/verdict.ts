@@ -57,9 +57,7 @@ export function decideVerdict(o: {
 	}
 	const counted = checks.filter((c) => c.level === 'governing');
 	const governing = pickGoverning(counted);
-	const multipliers = counted
-		.map((c) => c.multiplierAtCapacity)
-		.filter((m): m is number => m !== null);
+	const multipliers = counted.map(rank).filter((m) => m !== Number.MAX_VALUE);
 	const allowable = multipliers.length > 0 ? Math.min(...multipliers) : null;
 	return {
 		verdict: counted.every((c) => c.pass) ? 'pass' : 'fail',
@@ -90,8 +88,13 @@ function pickGoverning(checks: CheckResult[]): CheckResult | null {
 	return best;
 }
 
+/**
+ * The multiplier a check allows. A check the temporary load does not affect allows any
+ * multiplier while it passes, and none (0) when the other loads already fail it.
+ */
 function rank(c: CheckResult): number {
-	return c.multiplierAtCapacity ?? Number.MAX_VALUE;
+	if (c.multiplierAtCapacity !== null) return Math.max(0, c.multiplierAtCapacity);
+	return c.pass ? Number.MAX_VALUE : 0;
 }
 
 function collectWarnings(checks: CheckResult[]): string[] {

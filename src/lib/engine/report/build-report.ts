@@ -1,129 +1,185 @@
 /**
- * Assembles the CheckReport of a validated case: resistances, design loads, the exact plastic
- * collapse, the temporary-load capacity, the optional capacity curve and the elastic results.
+ * Assembles the CheckReport of a case from its one design run: converts units and writes words.
+ * Nothing here analyses or checks anything (a test enforces that this folder imports no solver),
+ * so every figure a surface shows is the one the checks decided.
  */
 import type { CaseModel } from '../case/types';
-import { applyArrangement } from '../checks/factor-loads';
-import { buildDesignCheckInput } from '../checks/from-case';
-import { reportDesignChecks, summariseCase } from '../checks/report-fields';
-import { runDesignChecks } from '../checks/run-checks';
-import {
-	computeCapacityCurve,
-	solveCollapse,
-	validateCollapseProblem,
-	type CollapseProblem
-} from '../collapse/index';
-import type { InputIssue } from '../model/issue';
-import { nPerMmToKNPerM } from '../units';
-import { reportCapacityCurve, reportTemporaryCapacity } from './capacity-report';
+import type { DesignOutcome } from '../checks/run-design';
+import type { LateralRestraint, LoadHeight } from '../checks/restraint';
+import { mmToM, nPerMmToKNPerM } from '../units';
+import { describeAllowable, reportAnswer } from './answer-report';
+import { FACTOR_SET_WORDS, reportCheckRow, reportDesignChecks } from './check-rows';
 import { reportCollapse } from './collapse-report';
-import { buildDesignLoads, listCharacteristicLoads, type DesignLoadSet } from './design-loads';
-import { reportElastic } from './elastic-report';
+import { reportCapacityCurve } from './curve-report';
+import { reportEffects } from './effects-report';
 import { assertAllFinite } from './finite';
-import { computeSpanResistances } from './resistance';
 import { reportGrade, reportSection } from './section-report';
+import { writeLongSummary, writeShortSummary } from './summary';
 import { writeAssumptions, writeNotices } from './texts';
-import type { CheckReport } from './types';
-import type { DesignCheckOutcome } from '../checks/inputs';
+import { REPORT_FORMAT, REPORT_VERSION, type CheckReport } from './types';
 import { ENGINE_VERSION } from './version';
 
-/** Options of `buildCheckReport`. */
+/** Options of the report. */
 export interface ReportOptions {
-	/** Also compute the capacity curve (largest single temporary point load along the beam). */
+	/** Also compute the governing capacity curve. */
 	curve?: boolean;
 	/** Date shown in the shared summary, as the user reads it (the engine has no clock). */
 	date?: string;
 }
 
-/**
- * The report of a validated case. Returns issues only when the collapse solver refuses the
- * problem (its own validation); every number in a report is finite.
- */
+/** The report of a validated case and its design run; every number in it is finite. */
 export function buildCheckReport(
 	model: CaseModel,
+	design: DesignOutcome,
 	options: ReportOptions = {}
-): { ok: true; report: CheckReport } | { ok: false; issues: InputIssue[] } {
-	const res = computeSpanResistances(model);
-	const checked = runDesignChecks(buildDesignCheckInput(model));
-	const design = designLoadsOf(model, checked.bendingArrangement);
-	const problem: CollapseProblem = {
-		beam: model.beam,
-		capacity: res.capacity,
-		fixedLoads: design.fixed,
-		variableLoads: design.variable
-	};
-	const refused = validateCollapseProblem(problem).filter((i) => i.severity === 'error');
-	if (refused.length > 0) return { ok: false, issues: refused };
-	const collapse = reportCollapse(solveCollapse(problem), design.appliesTo);
-	const usable = collapse.certified && collapse.loadFactor !== null && design.appliesTo === 'temporary';
-	const curveFixed = design.appliesTo === 'temporary' ? design.fixed : design.variable;
-	const capacityCurve = options.curve
-		? reportCapacityCurve(
-				computeCapacityCurve({ beam: model.beam, capacity: res.capacity, fixedLoads: curveFixed }),
-				model.factors.temporary
-			)
-		: null;
-	const elastic = reportElastic(model, design, res);
-	const sections = model.sections.map((s, e) => reportSection(s, model.grades[e]));
-	const grades = model.grades.map(reportGrade);
-	const selfWeight = model.beam.spans.map((_, e) => {
-		const load = model.selfWeightLoads.find((l) => l.kind === 'uniform' && l.from === spanStart(model, e));
-		return load && load.kind === 'uniform' ? nPerMmToKNPerM(load.value) : 0;
-	});
+): CheckReport {
+	const { checked } = design;
+	const outside = checked.verdict.verdict === 'outside-scope';
+	const answer = reportAnswer(design.answer, model.loadLabels);
+	const route = checked.verdict.route;
+	const hasTemporary = model.loads.some((l) => l.action === 'temporary');
+	const collapse =
+		outside || !checked.collapse
+			? null
+			: reportCollapse(checked.collapse, {
+					decides: route === 'plastic',
+					appliesTo: hasTemporary ? 'temporary' : 'all',
+					capacity: checked.collapse.capacity
+				});
+	const designPart = reportDesignChecks(checked);
+	// Outside scope no figure from the checks may appear, warnings included.
+	if (outside) designPart.warnings = [];
+	const notices = [
+		...new Set([
+			...writeNotices(model, collapse),
+			...checked.notices,
+			...designPart.warnings,
+			...(checked.effects?.notAvailable ?? [])
+		])
+	];
+	const assumptions = [...new Set([...writeAssumptions(model), ...checked.assumptions])];
+	const restraint = describeRestraint(design.input.restraint, design.input.loadHeight);
 	const report: CheckReport = {
+		format: REPORT_FORMAT,
+		version: REPORT_VERSION,
 		title: model.title,
 		engineVersion: ENGINE_VERSION,
 		units: { length: 'm', force: 'kN', lineLoad: 'kN/m', moment: 'kNm', deflection: 'mm', section: 'mm', stress: 'MPa' },
-		mpRd: res.mpRd.map((m) => m / 1e6),
-		factors: { ...model.factors },
+		answer,
+		checks: outside ? [] : checked.checks.map(reportCheckRow),
+		design: designPart,
 		collapse,
-		temporaryCapacity: usable ? reportTemporaryCapacity(model, collapse.loadFactor!) : null,
-		capacityCurve,
-		elastic,
-		section: sections[0],
-		sections,
-		grade: grades[0],
-		grades,
-		selfWeight,
-		case: structuredClone(model.file),
-		...reportChecks(model, checked, { collapse, elastic, date: options.date })
-	};
-	return { ok: true, report: assertAllFinite(report, 'report') };
-}
-
-/** Design loads of the arrangement that governs bending (EN 1990 patterns), else the case's own. */
-function designLoadsOf(model: CaseModel, arrangement: DesignCheckOutcome['bendingArrangement']): DesignLoadSet {
-	const own = buildDesignLoads(model);
-	if (!arrangement || own.appliesTo !== 'temporary') return own;
-	const d = applyArrangement({ loads: listCharacteristicLoads(model), spans: model.beam.spans, arrangement });
-	return { fixed: d.fixed, variable: d.variable, appliesTo: 'temporary' };
-}
-
-/** Checks, verdict, allowable loads, notices, assumptions and the shared summary. */
-function reportChecks(
-	model: CaseModel,
-	checked: DesignCheckOutcome,
-	o: { collapse: CheckReport['collapse']; elastic: CheckReport['elastic']; date?: string }
-): Pick<CheckReport, 'checks' | 'verdict' | 'governing' | 'reserve' | 'design' | 'allowable' | 'notices' | 'assumptions' | 'summary'> {
-	const design = reportDesignChecks(checked);
-	const own = writeNotices(model, o.collapse, o.elastic);
-	const notices = [...new Set([...own, ...checked.notices, ...design.warnings])];
-	if (design.verdict === 'outside-scope') notices.push(...design.route.reasons);
-	const assumptions = [...new Set([...writeAssumptions(model), ...checked.assumptions])];
-	const m = design.allowableMultiplier;
-	return {
-		checks: design.checks,
-		verdict: design.verdict,
-		governing: design.governing,
-		reserve: design.reserve,
-		design,
-		allowable: m === null ? null : reportTemporaryCapacity(model, m),
+		capacityCurve: design.curve && !outside ? reportCapacityCurve(design.curve) : null,
+		effects: reportEffects(checked.effects),
+		factors: { ...model.factors },
+		sections: model.sections.map((s, e) =>
+			reportSection(s, model.grades[e], design.sectionClasses[e])
+		),
+		grades: model.grades.map(reportGrade),
+		selfWeight: model.beam.spans.map((_, e) => selfWeightOf(model, e)),
+		summary: { short: '', long: '' },
 		notices,
-		assumptions,
-		summary: summariseCase({ model, report: design, notices, assumptions, date: o.date })
+		assumptions: [`Restraint: ${restraint}.`, ...assumptions],
+		case: structuredClone(model.file)
 	};
+	report.summary = summarise(model, report, restraint, options.date);
+	return assertAllFinite(report, 'report');
 }
 
-function spanStart(model: CaseModel, e: number): number {
-	return model.beam.spans.slice(0, e).reduce((s, L) => s + L, 0);
+/** Self-weight line load of span e, kN/m (0 where not included). */
+function selfWeightOf(model: CaseModel, e: number): number {
+	const from = model.beam.spans.slice(0, e).reduce((s, L) => s + L, 0);
+	const load = model.selfWeightLoads.find((l) => l.kind === 'uniform' && l.from === from);
+	return load && load.kind === 'uniform' ? nPerMmToKNPerM(load.value) : 0;
+}
+
+/** Restraint and load height in words. */
+export function describeRestraint(r: LateralRestraint | null, height: LoadHeight): string {
+	const at: Record<LoadHeight, string> = {
+		'top-flange': 'load applied at the top flange',
+		'shear-centre': 'load applied at the shear centre',
+		'bottom-flange': 'load hung from the bottom flange'
+	};
+	const held =
+		r === null || r.kind === 'continuous'
+			? 'compression flange restrained laterally throughout'
+			: r.kind === 'ends-only'
+				? 'compression flange held laterally only at the supports'
+				: `compression flange held laterally at the supports and at ${r.at
+						.map((x) => `${Number(mmToM(x).toPrecision(4))} m`)
+						.join(', ')}`;
+	return `${held}; ${at[height]}`;
+}
+
+/** Short and long plain-text summaries, written from the report itself. */
+function summarise(
+	model: CaseModel,
+	r: CheckReport,
+	restraint: string,
+	date?: string
+): { short: string; long: string } {
+	const a = r.answer;
+	const input = {
+		title: model.title,
+		place: model.place,
+		date,
+		spans: model.beam.spans.map(mmToM),
+		supports: model.beam.supports,
+		section: [...new Set(model.sections.map((s) => s.designation))].join(' / '),
+		grade: [...new Set(model.grades.map((g) => g?.name ?? 'given Mp'))].join(' / '),
+		loads: model.file.loads.map((l) => ({
+			action: l.action,
+			kind: l.kind,
+			value: l.kind === 'linear' ? (Math.abs(l.end) > Math.abs(l.start) ? l.end : l.start) : l.value,
+			...(l.kind === 'point' ? { at: l.x } : { from: l.from, to: l.to }),
+			label: l.label ?? null
+		})),
+		factorSet: FACTOR_SET_WORDS[r.design.factorSet] ?? r.design.factorSet,
+		factors: r.design.factors,
+		verdict: a.verdict,
+		message: a.message,
+		routeReasons: r.design.route.reasons,
+		governing:
+			a.governing && a.utilisation !== null
+				? { label: a.governing.label, utilisation: a.utilisation }
+				: null,
+		reserve: a.reserve === null ? null : a.reserve * 100,
+		allowable: a.allowable.map(describeAllowable),
+		restraint,
+		checks: r.checks.map((c) => ({
+			label: c.label,
+			clause: c.clause,
+			utilisation: c.utilisation,
+			pass: c.pass,
+			level: c.level,
+			details: describeKeys(c)
+		})),
+		governingArrangement: r.design.governingArrangement ?? undefined,
+		notice: r.notices[0] ?? '',
+		notices: r.notices.slice(1),
+		assumptions: r.assumptions
+	};
+	return { short: writeShortSummary(input), long: writeLongSummary(input) };
+}
+
+const KEY_LABELS: Record<string, [string, string]> = {
+	vEd: ['VEd', 'kN'],
+	vRd: ['Vpl,Rd', 'kN'],
+	mEd: ['MEd', 'kNm'],
+	mcr: ['Mcr', 'kNm'],
+	chiLT: ['χLT', ''],
+	mbRd: ['Mb,Rd', 'kNm'],
+	myVRd: ['My,V,Rd', 'kNm'],
+	fEd: ['FEd', 'kN'],
+	fRd: ['FRd', 'kN'],
+	deflection: ['deflection', 'mm'],
+	allowed: ['allowed', 'mm']
+};
+
+function describeKeys(c: Record<string, unknown>): string[] {
+	return Object.entries(KEY_LABELS).flatMap(([k, [name, unit]]) => {
+		const v = c[k];
+		if (typeof v !== 'number') return [];
+		return [`${name} ${Number(v.toPrecision(3))}${unit ? ` ${unit}` : ''}`];
+	});
 }

@@ -1,20 +1,35 @@
 /**
- * Converts the collapse solver's result (mm, N, N·mm) into the report's collapse part (m, kN, kNm).
+ * Converts the design run's collapse (the governing arrangement, shear-reduced hinge moments)
+ * into the report's partial result "plastic collapse in bending" (m, kN, kNm).
  */
-import type { CollapseResult } from '../collapse/index';
-import { mmToM, nToKN, nmmToKNm } from '../units';
+import type { CollapseSummary } from '../checks/inputs';
+import type { CapacitySegment } from '../model/types';
+import { mmToM, nmmToKNm, nToKN } from '../units';
 import type { CollapseReport, LambdaScope } from './types';
 
+const LABEL = 'plastic collapse in bending';
+
 /**
- * The report's view of a collapse result. Only a certified mechanism carries a usable λ; a
+ * The report's view of the collapse. Only a certified mechanism carries a usable λ; a
  * not-certified one keeps its numbers for inspection but is flagged.
  */
-export function reportCollapse(result: CollapseResult, appliesTo: LambdaScope): CollapseReport {
+export function reportCollapse(
+	c: CollapseSummary,
+	o: { decides: boolean; appliesTo: LambdaScope; capacity: CapacitySegment[] }
+): CollapseReport {
+	const result = c.result;
+	const resistance = o.capacity.map((s) => ({
+		from: mmToM(s.from),
+		to: mmToM(s.to),
+		sagging: nmmToKNm(s.sagging),
+		hogging: nmmToKNm(s.hogging)
+	}));
+	const base = { label: LABEL, decides: o.decides, appliesTo: o.appliesTo, arrangement: c.arrangement, resistance } as const;
 	if (result.status === 'fails-under-fixed' || result.status === 'unbounded') {
 		return {
+			...base,
 			status: result.status,
 			loadFactor: null,
-			appliesTo,
 			lowerBound: null,
 			upperBound: null,
 			certified: false,
@@ -25,15 +40,15 @@ export function reportCollapse(result: CollapseResult, appliesTo: LambdaScope): 
 			message:
 				result.status === 'fails-under-fixed'
 					? 'The existing loads alone, without any temporary load, exceed the plastic ' +
-						`capacity of the beam. ${result.message}`
+						`capacity of the beam in bending. ${result.message}`
 					: result.message
 		};
 	}
 	const certified = result.status === 'mechanism' && result.certified;
 	return {
+		...base,
 		status: result.status,
-		loadFactor: result.loadFactor,
-		appliesTo,
+		loadFactor: c.loadFactor,
 		lowerBound: result.lowerBound,
 		upperBound: result.upperBound,
 		certified,

@@ -1,8 +1,6 @@
 /**
- * The check report: assembly of a plain, structured-cloneable CheckReport from a validated case.
+ * The check report: a plain, structured-cloneable CheckReport written from one design run.
  */
-export { buildCheckReport, type ReportOptions } from './build-report';
-export { buildDesignLoads, type DesignLoadSet } from './design-loads';
-export { computeSpanResistances, type SpanResistances } from './resistance';
+export { buildCheckReport, describeRestraint, type ReportOptions } from './build-report';
 export { ENGINE_VERSION } from './version';
 export type * from './types';

@@ -1,14 +1,17 @@
 /**
- * Section and grade summaries for the report, with the EN 1993-1-1 Table 5.2 class.
+ * Section and grade summaries for the report; the class comes from the design run.
  */
+import type { SectionClassReading } from '../checks/run-design';
 import type { SteelGrade } from '../material/types';
-import { classifySectionEN } from '../section/classify-en';
 import type { ResolvedSection } from '../section/types';
 import type { GradeReport, SectionReport } from './types';
 
-/** The report entry of one span's section, classified with that span's fy (235 MPa if none). */
-export function reportSection(section: ResolvedSection, grade: SteelGrade | null): SectionReport {
-	const cls = classifySectionEN(section, grade?.fy ?? 235);
+/** The report entry of one span's section. */
+export function reportSection(
+	section: ResolvedSection,
+	grade: SteelGrade | null,
+	cls: SectionClassReading
+): SectionReport {
 	return {
 		designation: section.designation,
 		shape: section.shape,

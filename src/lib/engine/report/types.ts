@@ -4,7 +4,7 @@
  * JSON output: keep them.
  */
 import type { CaseFile, ResolvedFactors } from '../case/types';
-import type { CheckRowReport, DesignCheckReport } from '../checks/report-fields';
+import type { CheckRowReport, DesignCheckReport } from './check-rows';
 import type { VerdictKind } from '../checks/types';
 import type { SectionDims, SectionProps, SectionShape } from '../section/types';
 
@@ -21,84 +21,102 @@ export interface HingeReport {
 	rotation: number;
 }
 
-/** Plastic collapse result. `loadFactor` is null unless a mechanism was found. */
+/** What one proposed temporary load may grow to, in the units it was entered in. */
+export interface AllowableLoadReport {
+	/** Index in the case's `loads` list (0-based; "load 1" is index 0). */
+	load: number;
+	label: string | null;
+	kind: 'point' | 'uniform' | 'linear';
+	/** As entered, signed, downward positive: kN for a point load, kN/m (peak) for a line load. */
+	entered: number;
+	/** Largest size every deciding check allows, in `unit`, as a magnitude; null when unlimited. */
+	value: number | null;
+	unit: 'kN' | 'kN/m';
+	direction: 'down' | 'up';
+	/** `limited`, `relieves` (acts upward, nothing limits it) or `not-limited`. */
+	effect: 'limited' | 'relieves' | 'not-limited';
+}
+
+/**
+ * The governing answer: the first thing to read. Every capacity in the report that is not here
+ * is a partial result and says so.
+ */
+export interface AnswerReport {
+	/** `pass`, `fail`, `outside-scope`, or null when no non-zero proposed load was entered. */
+	verdict: VerdictKind | null;
+	/** One plain sentence saying what the verdict means. */
+	message: string;
+	/** The check that limits the proposed loads first; null outside scope. */
+	governing: { id: string; label: string } | null;
+	/** Largest factor on the proposed temporary loads that every deciding check allows. */
+	multiplier: number | null;
+	/** multiplier − 1 (0.25 means 25 % more than proposed). */
+	reserve: number | null;
+	/** Utilisation of the governing check at the loads as entered. */
+	utilisation: number | null;
+	/** One entry per proposed temporary load. */
+	allowable: AllowableLoadReport[];
+	/** Why the beam is outside scope and what would bring it in; empty otherwise. */
+	reasons: string[];
+}
+
+/**
+ * Plastic collapse in bending alone, solved with the shear-reduced hinge moments the bending
+ * check uses. A partial result: it is the answer only when `decides` is true and bending governs.
+ */
 export interface CollapseReport {
+	label: 'plastic collapse in bending';
+	/** True when the verdict rests on the plastic route (else shown for information only). */
+	decides: boolean;
 	status: 'mechanism' | 'not-certified' | 'fails-under-fixed' | 'unbounded';
-	/** Collapse load factor λ on the design loads it applies to; null when there is none. */
+	/** Collapse load factor λ on the proposed temporary loads; null when there is none. */
 	loadFactor: number | null;
 	appliesTo: LambdaScope;
 	lowerBound: number | null;
 	upperBound: number | null;
 	/** True only when the static and kinematic bounds meet: only then may the result count. */
 	certified: boolean;
+	/** The load arrangement it is for (the one that governs bending). */
+	arrangement: string;
 	hinges: HingeReport[];
 	mechanism: { name: string; spans: number[] } | null;
 	/** Vertical reactions at collapse per node, kN, upward positive. */
 	reactions: number[];
 	/** Moment and shear at collapse: x in m, M in kNm, V in kN (a repeated x marks a jump). */
 	diagram: { x: number[]; M: number[]; V: number[] } | null;
+	/** Hinge resistance at each end of the beam's capacity segments, kNm (after shear reduction). */
+	resistance: { from: number; to: number; sagging: number; hogging: number }[];
 	/** Plain-language explanation when there is no certified mechanism. */
 	message: string | null;
 }
 
-/** λ applied to one proposed temporary load, in the units it was entered in. */
-export interface TemporaryLoadCapacity {
-	/** Index in the case's `loads` list. */
-	index: number;
-	label: string | null;
-	kind: 'point' | 'uniform' | 'linear';
-	/** As entered (characteristic): kN for a point load, kN/m for line loads (peak for linear). */
-	entered: number;
-	/** Largest characteristic value with the other loads present: λ × entered. */
-	capacity: number;
-	unit: 'kN' | 'kN/m';
-}
-
-/** Capacity of the proposed temporary loads (characteristic values). */
-export interface TemporaryCapacityReport {
-	loads: TemporaryLoadCapacity[];
-	/** λ × the total force of the temporary loads, kN. */
-	total: number;
-	/** Total force of the temporary loads as entered, kN. */
-	enteredTotal: number;
-}
-
-/** Largest single temporary point load along the beam with the other loads present. */
+/**
+ * The governing capacity curve: the largest single proposed point load at each position, with
+ * the existing loads present and the other proposed loads removed, over every deciding check.
+ */
 export interface CapacityCurveReport {
-	/** x in m; p the largest characteristic point load there (design value ÷ γ temporary), kN. */
-	points: { x: number; p: number }[];
-	min: { x: number; p: number; mechanism: string };
-	certified: boolean;
+	label: string;
+	/** x in m; p in kN (characteristic), null where nothing limits it or it is outside scope. */
+	points: { x: number; p: number | null; governing: string | null; outsideScope: boolean }[];
+	/** Stretches of the beam where one check governs: from and to in m. */
+	stretches: { from: number; to: number; governing: { id: string; label: string } }[];
+	/** The least value along the beam and the check that governs there. */
+	min: { x: number; p: number; governing: { id: string; label: string } | null } | null;
 }
 
-/** An elastic load factor with where it is reached. */
-export interface ElasticFactorReport {
-	status: 'reached' | 'fails-under-fixed' | 'never';
-	/** Factor on the loads λ applies to; null unless reached. */
-	factor: number | null;
-	/** Position, m; null when never reached. */
-	x: number | null;
-}
-
-/** Elastic results; a null part has its reason in `notAvailable`. */
-export interface ElasticReport {
-	/** Under the unfactored (characteristic) loads, kNm. */
+/** Elastic action effects under the unfactored (characteristic) loads; null parts say why. */
+export interface EffectsReport {
+	/** kNm, x in m. */
 	maxMoment: {
 		maxSagging: { x: number; value: number } | null;
 		maxHogging: { x: number; value: number } | null;
 	} | null;
-	/** Under the unfactored loads, mm, downward positive: all loads, and the temporary loads alone. */
+	/** mm, downward positive, x in m: all loads, and the temporary loads alone. */
 	maxDeflection: {
 		total: { x: number; value: number; span: number };
 		temporary: { x: number; value: number; span: number } | null;
-		/** Largest per span under all loads. */
 		spans: { x: number; value: number }[];
 	} | null;
-	/** λ at first yield (|M| = Wel·fy/γM0) on the design loads, fixed loads held. */
-	firstYield: ElasticFactorReport | null;
-	/** λ at the first plastic hinge (|M| = Mp,Rd). */
-	firstHinge: ElasticFactorReport | null;
-	/** Reasons for the parts that are null. */
 	notAvailable: string[];
 }
 
@@ -133,38 +151,43 @@ export interface GradeReport {
 	note: string | null;
 }
 
+/** Format tag and version of the report (see src/lib/engine/README.md, "The report"). */
+export const REPORT_FORMAT = 'hingepoint.report';
+export const REPORT_VERSION = 2;
+
 /** The whole report of one case. */
 export interface CheckReport {
+	format: typeof REPORT_FORMAT;
+	version: typeof REPORT_VERSION;
 	title: string;
 	engineVersion: string;
-	units: { length: 'm'; force: 'kN'; lineLoad: 'kN/m'; moment: 'kNm'; deflection: 'mm'; section: 'mm'; stress: 'MPa' };
-	/** Design plastic moment resistance per span, Wpl,y·fy/γM0 (or the given Mp/γM0), kNm. */
-	mpRd: number[];
-	factors: ResolvedFactors;
-	collapse: CollapseReport;
-	temporaryCapacity: TemporaryCapacityReport | null;
+	units: {
+		length: 'm';
+		force: 'kN';
+		lineLoad: 'kN/m';
+		moment: 'kNm';
+		deflection: 'mm';
+		section: 'mm';
+		stress: 'MPa';
+	};
+	/** The governing answer. Read this first. */
+	answer: AnswerReport;
+	/** Member checks, worst load arrangement each; empty outside scope. */
+	checks: CheckRowReport[];
+	/** Route, reasons, factor set, load arrangements and warnings behind the verdict. */
+	design: DesignCheckReport;
+	/** Plastic collapse in bending (partial result); null outside scope or off the plastic path. */
+	collapse: CollapseReport | null;
+	/** The governing capacity curve, when asked for; null outside scope. */
 	capacityCurve: CapacityCurveReport | null;
-	elastic: ElasticReport;
-	/** Section of the first span; `sections` has one per span. */
-	section: SectionReport;
+	/** Elastic moments and deflections under the unfactored loads (action effects). */
+	effects: EffectsReport;
+	factors: ResolvedFactors;
 	sections: SectionReport[];
-	/** Grade of the first span (null for a known Mp without grade); `grades` has one per span. */
-	grade: GradeReport | null;
+	/** One per span (null for a known Mp without grade). */
 	grades: (GradeReport | null)[];
 	/** Self-weight line load per span, kN/m (0 where not included). */
 	selfWeight: number[];
-	/** Member checks (bending, shear, interaction, ltb, web, deflection), worst load arrangement each. */
-	checks: CheckRowReport[];
-	/** `pass`, `fail` or `outside-scope`. */
-	verdict: VerdictKind;
-	/** The check that limits the temporary load first; null outside scope. */
-	governing: { id: string; label: string; utilisation: number } | null;
-	/** (allowable multiplier − 1) × 100, %; null outside scope or when the temporary load never governs. */
-	reserve: number | null;
-	/** Route, reasons, factor set, load arrangements and warnings behind the verdict. */
-	design: DesignCheckReport;
-	/** Largest temporary loads as entered: the smallest multiplier over all governing checks. */
-	allowable: TemporaryCapacityReport | null;
 	/** Plain-text summaries for sharing: short (< 600 characters) and long. */
 	summary: { short: string; long: string };
 	/** Always starts with the engineer-of-record notice. */

@@ -1,2 +1,2 @@
 /** Version of the engine, recorded in every report (semantic versioning). */
-export const ENGINE_VERSION = '0.1.0';
+export const ENGINE_VERSION = '0.2.0';

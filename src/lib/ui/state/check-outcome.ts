@@ -6,31 +6,46 @@ import type { InputIssue } from '$lib/engine/model/issue';
  * stay assignable to it (checked where the engine is called).
  */
 export interface ReportView {
-	/** Design plastic moment per span, kNm. */
-	mpRd: number[];
+	/** The governing answer: read first, shown first. */
+	answer: {
+		verdict: 'pass' | 'fail' | 'outside-scope' | null;
+		message: string;
+		governing: { id: string; label: string } | null;
+		multiplier: number | null;
+		reserve: number | null;
+		utilisation: number | null;
+		allowable: {
+			load: number;
+			label: string | null;
+			kind: string;
+			entered: number;
+			value: number | null;
+			unit: 'kN' | 'kN/m';
+			direction: 'down' | 'up';
+			effect: string;
+		}[];
+		reasons: string[];
+	};
+	/** Plastic collapse in bending: a partial result, shown as the answer only where it decides. */
 	collapse: {
+		decides: boolean;
 		status: string;
 		loadFactor: number | null;
-		appliesTo: 'temporary' | 'all';
 		certified: boolean;
 		hinges: { x: number; moment: number }[];
 		mechanism: { name: string } | null;
 		diagram: { x: number[]; M: number[] } | null;
+		resistance: { from: number; to: number; sagging: number; hogging: number }[];
 		message: string | null;
-	};
-	/** λ × the proposed temporary loads: `total` in kN (characteristic). */
-	temporaryCapacity: { total: number } | null;
-	/** Largest temporary loads every check allows: `total` in kN (characteristic). */
-	allowable: { total: number } | null;
-	/** Largest characteristic point load by position: x m, p kN. */
-	capacityCurve: { points: { x: number; p: number }[]; min: { x: number; p: number } } | null;
-	/** Every member check with its utilisation (demand / resistance). */
+	} | null;
+	/** The governing capacity curve: x m, p kN (null where nothing limits it). */
+	capacityCurve: {
+		points: { x: number; p: number | null; governing: string | null }[];
+		stretches: { from: number; to: number; governing: { id: string; label: string } }[];
+		min: { x: number; p: number; governing: { id: string; label: string } | null } | null;
+	} | null;
+	/** Every member check with its utilisation (demand / resistance); empty outside scope. */
 	checks: { id: string; label: string; utilisation: number; pass: boolean; level: string }[];
-	verdict: 'pass' | 'fail' | 'outside-scope';
-	/** The check that limits the temporary load first; null outside scope. */
-	governing: { id: string; label: string } | null;
-	/** Reserve against the governing check, %. */
-	reserve: number | null;
 	summary: { short: string; long: string };
 	/** Which analysis route the verdict rests on, and why. */
 	design: { route: { route: string; reasons: string[] }; governingArrangement?: string | null };

@@ -48,14 +48,22 @@ export function decideRoute(s: ScopeInput): ScopeDecision {
 	if (!s.ductile) {
 		out.push('The material is not ductile steel (cast or wrought iron): not assessed here.');
 	}
-	if (!s.gradeConfirmed) out.push('The steel grade is unknown and has not been confirmed.');
+	if (!s.gradeConfirmed) {
+		out.push(
+			'The steel grade is unknown and has not been confirmed: confirm the assumed strength ' +
+				'(or enter a grade from drawings or tests) to bring the beam into scope.'
+		);
+	}
 	if (s.sectionClass === 4) {
-		out.push('The section is Class 4 (EN 1993-1-1 5.5): local buckling is outside this tool.');
+		out.push(
+			'The section is Class 4 (EN 1993-1-1 5.5): local buckling is outside this tool. ' +
+				'Only a stockier section (Class 3 or better) comes into scope.'
+		);
 	}
 	if (s.needsShearBucklingCheck) {
 		out.push(
 			'The web needs a shear buckling check (hw/tw > 72ε/η, EN 1993-1-1 6.2.6(6)): ' +
-				'outside this tool.'
+				'outside this tool; an engineer must check the web (EN 1993-1-5 §5).'
 		);
 	}
 	out.push(...(s.otherReasons ?? []));
@@ -91,7 +99,10 @@ export function decideRoute(s: ScopeInput): ScopeDecision {
 	if (!s.collapseCertified) {
 		return {
 			route: 'outside-scope',
-			reasons: ['The plastic collapse solution could not be verified by statics.']
+			reasons: [
+				'The plastic collapse solution could not be verified by statics (its bounds do not ' +
+					'meet), so no capacity is given.'
+			]
 		};
 	}
 	return {

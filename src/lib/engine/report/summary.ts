@@ -4,7 +4,7 @@
  * engine has no clock. Numbers arrive in output units (m, kN, kN/m, kNm, mm).
  */
 import { toPlainText } from './plain-text';
-import type { VerdictKind } from './types';
+import type { VerdictKind } from '../checks/types';
 
 /** Longest short message, characters. */
 export const SHORT_SUMMARY_LIMIT = 600;
@@ -48,14 +48,18 @@ export interface SummaryInput {
 	/** Name of the factor set and its values. */
 	factorSet: string;
 	factors: Record<string, number>;
-	verdict: VerdictKind;
+	/** null when no non-zero proposed load was entered. */
+	verdict: VerdictKind | null;
+	/** The answer's one sentence (used when there is no verdict). */
+	message?: string;
 	routeReasons: string[];
 	governing: { label: string; utilisation: number } | null;
-	loadFactor: number | null;
-	/** %. */
+	/** %: (multiplier − 1) × 100 of the governing answer. */
 	reserve: number | null;
-	/** Largest temporary loads, as entered: e.g. `{ text: 'T1', value: 65.3, unit: 'kN' }`. */
-	allowable: { name: string; value: number; unit: string }[];
+	/** Largest proposed loads, already in words: e.g. `19.3 kN (load 3, hoist)`. */
+	allowable: string[];
+	/** Lateral restraint and load height, in words. */
+	restraint?: string;
 	checks: SummaryCheck[];
 	governingArrangement?: string;
 	notice: string;
@@ -64,9 +68,9 @@ export interface SummaryInput {
 }
 
 const VERDICT_WORDS: Record<VerdictKind, string> = {
-	pass: 'PASS',
+	pass: 'PASS (within capacity for the inputs entered; screening only)',
 	fail: 'FAIL',
-	'outside-scope': 'OUTSIDE SCOPE'
+	'outside-scope': 'OUTSIDE SCOPE (no capacity given)'
 };
 
 /** Rounds to 3 significant figures, plain notation. */
@@ -89,12 +93,12 @@ function describeBeam(s: SummaryInput): string {
 }
 
 function describeResult(s: SummaryInput): string {
+	if (s.verdict === null) return `NO VERDICT: ${s.message ?? 'no proposed load'}`;
 	const parts = [VERDICT_WORDS[s.verdict]];
 	if (s.governing) {
 		const u = Math.round(s.governing.utilisation * 100);
 		parts.push(`governed by ${s.governing.label} at ${u} %`);
 	}
-	if (s.loadFactor !== null) parts.push(`load factor ${formatNumber(s.loadFactor)}`);
 	if (s.reserve !== null) parts.push(`reserve ${Math.round(s.reserve)} %`);
 	if (s.verdict === 'outside-scope' && s.routeReasons[0]) parts.push(s.routeReasons[0]);
 	return parts.join(', ');
@@ -109,13 +113,14 @@ function describeResult(s: SummaryInput): string {
 export function writeShortSummary(s: SummaryInput): string {
 	const head = [s.title || 'Beam check', [s.place, s.date].filter(Boolean).join(', ')];
 	const loads = `Loads: ${s.loads.map(describeLoad).join('; ')}`;
-	const allowed = s.allowable.map((a) => `${a.name} ${formatNumber(a.value)} ${a.unit}`);
-	const allow = allowed.length ? `Largest temporary load: ${allowed.join(', ')}` : '';
+	const many = s.allowable.length > 1 ? 's, together' : '';
+	const allow = s.allowable.length ? `Largest proposed load${many}: ${s.allowable.join('; ')}` : '';
 	const build = (withLoads: boolean, withAllow: boolean, withPlace: boolean) =>
 		toPlainText(
 			[
 				withPlace ? head.join(', ').replace(/, $/, '') : head[0],
 				`Beam: ${describeBeam(s)}`,
+				s.restraint ? `Restraint: ${s.restraint}` : '',
 				withLoads ? loads : '',
 				`Factors: ${s.factorSet}`,
 				`Result: ${describeResult(s)}`,
@@ -150,6 +155,7 @@ export function writeLongSummary(s: SummaryInput): string {
 		[s.place, s.date].filter(Boolean).join(', '),
 		'',
 		`Beam: ${describeBeam(s)}`,
+		s.restraint ? `Restraint: ${s.restraint}` : '',
 		'Loads (characteristic):',
 		...s.loads.map((l) => `  • ${describeLoad(l)}`),
 		`Factors: ${s.factorSet}; ${Object.entries(s.factors).map(([k, v]) => `${k} ${v}`).join(', ')}`,
@@ -157,7 +163,7 @@ export function writeLongSummary(s: SummaryInput): string {
 		'',
 		`Result: ${describeResult(s)}`,
 		...s.routeReasons.map((r) => `Route: ${r}`),
-		...s.allowable.map((a) => `Largest temporary ${a.name}: ${formatNumber(a.value)} ${a.unit}`),
+		...s.allowable.map((a) => `Largest proposed load: ${a}`),
 		'',
 		'Checks:',
 		...s.checks.map(describeCheck),
