@@ -3,6 +3,9 @@ import { existsSync } from 'node:fs';
 
 /** Debian's chromium by default; CHROMIUM_PATH points elsewhere. No browser download is ever made. */
 const executablePath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+// A private copy of the build on another port keeps repeat runs apart from other work on the machine.
+const port = process.env.E2E_PORT ?? '4173';
+const buildDir = process.env.BUILD_DIR ?? 'build';
 if (!existsSync(executablePath)) {
 	throw new Error(
 		`No browser at ${executablePath}. Install Debian's chromium (apt-get install chromium) ` +
@@ -22,7 +25,7 @@ export default defineConfig({
 	timeout: 60_000,
 	use: {
 		...devices['Pixel 7'],
-		baseURL: 'http://localhost:4173',
+		baseURL: `http://localhost:${port}`,
 		serviceWorkers: 'allow',
 		launchOptions: {
 			executablePath,
@@ -38,8 +41,8 @@ export default defineConfig({
 	},
 	webServer: {
 		command: 'npx tsx src/cli/serve-build.ts',
-		url: 'http://localhost:4173',
+		url: `http://localhost:${port}`,
 		reuseExistingServer: !process.env.CI,
-		env: { PORT: '4173', HOST: '127.0.0.1' }
+		env: { PORT: port, HOST: '127.0.0.1', BUILD_DIR: buildDir }
 	}
 });

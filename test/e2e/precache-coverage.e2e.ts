@@ -6,7 +6,7 @@ import { test, expect } from '@playwright/test';
 import { readFileSync, readdirSync, statSync } from 'node:fs';
 import { join, relative } from 'node:path';
 
-const BUILD = 'build';
+const BUILD = process.env.BUILD_DIR ?? 'build';
 
 function listFiles(dir: string): string[] {
 	return readdirSync(dir).flatMap((name) => {

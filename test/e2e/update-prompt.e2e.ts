@@ -5,7 +5,7 @@
 import { appendFileSync, readFileSync, writeFileSync } from 'node:fs';
 import { test, expect, waitForServiceWorkerControl } from './fixtures';
 
-const WORKER = 'build/sw.js';
+const WORKER = `${process.env.BUILD_DIR ?? 'build'}/sw.js`;
 
 test('a waiting new version shows the update notice and reloads only on tap', async ({ page }) => {
 	const original = readFileSync(WORKER);
@@ -26,6 +26,13 @@ test('a waiting new version shows the update notice and reloads only on tap', as
 
 		await Promise.all([page.waitForEvent('load'), toast.getByRole('button', { name: 'Reload now' }).click()]);
 		expect(await page.evaluate(() => (window as unknown as { marker?: string }).marker)).toBeUndefined();
+		// The reload came after the hand-over: the new version is in charge and nothing waits.
+		const after = await page.evaluate(async () => {
+			const registration = await navigator.serviceWorker.getRegistration();
+			return { waiting: registration?.waiting ?? null, controlled: navigator.serviceWorker.controller !== null };
+		});
+		expect(after).toEqual({ waiting: null, controlled: true });
+		await expect(toast).toBeHidden();
 	} finally {
 		writeFileSync(WORKER, original);
 	}
