@@ -71,4 +71,21 @@ describe('CheckForm', () => {
 		// The point load is not moved.
 		expect(form.case.loads[2]).toMatchObject({ kind: 'point', x: 2.1 });
 	});
+
+	it('shows a message instead of waiting forever when the engine call fails', async () => {
+		const throwing = new CheckForm({
+			run: () => {
+				throw new Error('no engine here');
+			}
+		});
+		throwing.load(createDemoCase());
+		await vi.advanceTimersByTimeAsync(0);
+		expect(throwing.outcome).toEqual({ state: 'error', message: 'no engine here' });
+		expect(throwing.pending).toBe(false);
+		const rejecting = new CheckForm({ run: () => Promise.reject(new Error('worker gone')) });
+		rejecting.load(createDemoCase());
+		await vi.advanceTimersByTimeAsync(0);
+		expect(rejecting.outcome).toEqual({ state: 'error', message: 'worker gone' });
+		expect(rejecting.pending).toBe(false);
+	});
 });

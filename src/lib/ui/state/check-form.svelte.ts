@@ -189,13 +189,19 @@ export class CheckForm {
 			this.outcome = null;
 			return;
 		}
-		const answer = this.#options.run($state.snapshot(this.case) as CaseFile);
-		if (answer === null) {
+		let outcome: CheckOutcome;
+		try {
+			const answer = this.#options.run($state.snapshot(this.case) as CaseFile);
+			if (answer === null) {
+				this.pending = true;
+				return;
+			}
 			this.pending = true;
-			return;
+			outcome = await answer;
+		} catch (error) {
+			// Whatever went wrong, the form shows it instead of waiting forever.
+			outcome = { state: 'error', message: error instanceof Error ? error.message : String(error) };
 		}
-		this.pending = true;
-		const outcome = await answer;
 		// Only the answer to the latest case is shown.
 		if (seq !== this.#seq) return;
 		this.outcome = outcome;

@@ -1,7 +1,8 @@
 /// <reference lib="webworker" />
 /**
  * Runs the engine off the main thread, so typing and scrolling stay smooth while a beam of
- * several spans is checked. One message in (a case), one message out (the outcome).
+ * several spans is checked. One message in (a case), one message out (the outcome). The page
+ * sends one request at a time and terminates this worker when a check runs too long.
  */
 import { checkCase } from '$lib/engine';
 
@@ -11,16 +12,35 @@ export interface EngineRequest {
 	json: unknown;
 }
 
-/** The answer: the engine's outcome, or the message of a broken invariant. */
-export type EngineReply = { seq: number; result: ReturnType<typeof checkCase> } | { seq: number; error: string };
+/**
+ * The answer: the engine's outcome, or a plain message when the engine threw. `seq` 0 answers
+ * the request in progress when its own number could not be read.
+ */
+export type EngineReply =
+	| { seq: number; result: ReturnType<typeof checkCase> }
+	| { seq: number; error: string };
+
+function describe(error: unknown): string {
+	return error instanceof Error ? error.message : String(error);
+}
 
 self.onmessage = (event: MessageEvent<EngineRequest>) => {
-	const { seq, json } = event.data;
+	const seq = typeof event.data?.seq === 'number' ? event.data.seq : 0;
 	let reply: EngineReply;
 	try {
-		reply = { seq, result: checkCase(json, { curve: true }) };
+		reply = { seq, result: checkCase(event.data.json, { curve: true }) };
 	} catch (error) {
-		reply = { seq, error: error instanceof Error ? error.message : String(error) };
+		reply = { seq, error: describe(error) };
 	}
+	try {
+		self.postMessage(reply);
+	} catch (error) {
+		// A result that cannot be copied back must still end the wait on the page.
+		self.postMessage({ seq, error: `the result could not be passed back (${describe(error)})` });
+	}
+};
+
+self.onmessageerror = () => {
+	const reply: EngineReply = { seq: 0, error: 'the case could not be read by the engine.' };
 	self.postMessage(reply);
 };
