@@ -2,8 +2,12 @@
 export {
 	buildShareLink,
 	decodeCaseFromFragment,
+	describeIncomplete,
 	encodeCaseToFragment,
-	LINK_VERSION
+	LINK_LIMITS,
+	LINK_VERSION,
+	openSharedCase
 } from './fragment';
+export { findShapeProblem, type ShapeProblem } from './case-shape';
 export { compactCase, expandCase, KEY_CODES, VALUE_CODES } from './compact';
 export { decodeBase64Url, encodeBase64Url } from './base64url';

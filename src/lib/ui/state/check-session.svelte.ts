@@ -1,4 +1,4 @@
-import { decodeCaseFromFragment } from '$lib/share';
+import { describeIncomplete, findShapeProblem, openSharedCase } from '$lib/share';
 import {
 	getCheck,
 	loadDraft,
@@ -51,6 +51,11 @@ export class CheckSession {
 	async open(url: URL, defaults: { settings: Settings; set: FactorSet }): Promise<void> {
 		try {
 			await this.#open(url, defaults);
+		} catch (error) {
+			// Never leave the screen without a case: say what failed and start from the demo.
+			this.message = `The check could not be opened: ${error instanceof Error ? error.message : String(error)}`;
+			this.source = 'demo';
+			this.form.load(createDemoCase());
 		} finally {
 			this.ready = true;
 		}
@@ -64,18 +69,20 @@ export class CheckSession {
 		const id = url.searchParams.get('id');
 		if (id && store) {
 			const found = await getCheck(store, id);
-			if (found.ok) {
+			const problem = found.ok ? findShapeProblem(found.value.input) : null;
+			if (found.ok && problem) {
+				this.message = describeIncomplete(problem, 'record');
+			} else if (found.ok) {
 				this.record = found.value;
 				this.source = 'saved';
 				// Edits in progress on this very check (e.g. before a reload) win over the stored copy.
 				if (restored?.savedId === id) this.form.load(restored.case, { savedId: id, texts: restored.texts, units: restored.units });
 				else this.form.load(asCaseFile(found.value.input), { savedId: id });
 				return;
-			}
-			this.message = found.message;
+			} else this.message = found.message;
 		}
 		if (url.hash.includes('c=')) {
-			const decoded = decodeCaseFromFragment(url.hash);
+			const decoded = openSharedCase(url.hash);
 			if (decoded.ok) {
 				this.source = 'link';
 				this.form.load(asCaseFile(decoded.value));
