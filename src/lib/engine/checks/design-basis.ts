@@ -3,13 +3,18 @@
  * elastic solvers know nothing of codes; everything code-specific sits behind this interface so
  * a second basis (e.g. AISC 360 LRFD with ASCE 7 combinations) can be added beside `en1993`.
  */
-import type { Combination } from './en1993/factors';
-import type { ScopeDecision, ScopeInput } from './en1993/scope';
-import type { ShearAreaInput } from './en1993/shear';
-import type { ReducedMomentInput } from './en1993/interaction';
-import type { LtbResistance } from './en1993/ltb-curves';
-import type { SectionShape } from '../section/types';
-import type { WebForceInput, WebResistance } from './en1993/web';
+import type {
+	Combination,
+	LtbResistance,
+	ReducedMomentInput,
+	ScopeDecision,
+	ScopeInput,
+	SectionClass,
+	ShearAreaInput,
+	WebForceInput,
+	WebResistance
+} from './basis-types';
+import type { ResolvedSection, SectionShape } from '../section/types';
 
 /** Factor settings after defaults, as a basis reports them. */
 export interface BasisFactors {
@@ -30,6 +35,8 @@ export interface DesignBasis<Settings> {
 	name: string;
 	resolveFactors(settings: Settings, options: { hasImposed: boolean }): BasisFactors;
 	decideRoute(input: ScopeInput): ScopeDecision;
+	/** Section class for major-axis bending (null when it cannot be found, e.g. a known Mp). */
+	classifySection(section: ResolvedSection, fy: number): { class: SectionClass | null; note?: string };
 	/** Bending resistance for the route, N·mm. */
 	computeBendingResistance(o: {
 		Wpl: number;

@@ -2,7 +2,7 @@
  * Builds the design-check input from a validated case model (internal units already).
  */
 import type { CaseModel } from '../case/types';
-import type { FactorSetName } from './en1993/factors';
+import type { FactorSetName } from './basis-types';
 import type { DesignCheckInput } from './inputs';
 import type { LateralRestraint } from './restraint';
 

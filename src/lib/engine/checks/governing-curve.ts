@@ -12,7 +12,7 @@ import type { DesignCheckInput, DesignCheckOutcome } from './inputs';
 /** Size of the trial point load, N, when no proposed point load gives one. */
 const UNIT_TRIAL = 1000;
 /** Evenly spaced positions per span (ends excluded), before refinement. */
-const POINTS_PER_SPAN = 12;
+const POINTS_PER_SPAN = 8;
 /** Distance from a support at which the first and last positions of a span sit, share of span. */
 const END_GAP = 0.01;
 
@@ -110,6 +110,6 @@ function refineMinimum(
 		if (p.p !== null && p.p < (last.p ?? Infinity)) last = p;
 		return p.p ?? Number.MAX_VALUE;
 	};
-	minimiseOnInterval(f, a, b, (b - a) * 1e-3);
+	minimiseOnInterval(f, a, b, (b - a) * 1e-2);
 	return last;
 }

@@ -7,7 +7,7 @@
 import { momentAt, type Hinge, type CollapseDiagram } from '../collapse/index';
 import { mmToM } from '../units';
 import type { DesignBasis } from './design-basis';
-import { computeEndMomentRatio } from './en1993/stable-length';
+import { computeEndMomentRatio } from './end-moment-ratio';
 import type { SpanMember } from './member';
 import { spanOf } from './plastic-bending';
 import type { RestraintSegment } from './restraint';

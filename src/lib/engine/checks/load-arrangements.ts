@@ -4,7 +4,7 @@
  * or lower factor over the whole beam (single-source rule). To be exact without knowing which
  * spans are unfavourable for which check, every pattern is listed and the worst one governs.
  */
-import type { Combination } from './en1993/factors';
+import type { Combination } from './basis-types';
 
 /** Most spans (overhangs included) whose imposed load is patterned: 2^6 × 2 arrangements. */
 export const MAX_PATTERNED_SPANS = 6;

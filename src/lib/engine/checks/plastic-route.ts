@@ -6,9 +6,10 @@ import { applyArrangement } from './factor-loads';
 import { describePlasticBending, pickGoverningCollapse } from './bending-check';
 import { buildCapacity } from './capacity';
 import type { CheckContext } from './context';
-import type { ScopeDecision, ScopeInput } from './en1993/scope';
+import type { ScopeDecision, ScopeInput } from './basis-types';
 import { checkHingeRestraint } from './hinge-restraint';
 import type { CollapseSummary } from './inputs';
+import type { LoadArrangement } from './load-arrangements';
 import { solvePlasticArrangement, type PlasticArrangement } from './plastic-bending';
 import type { RestraintSegment } from './restraint';
 import type { CheckResult } from './types';
@@ -18,6 +19,64 @@ export interface PlasticRouteOutcome {
 	scope: ScopeDecision;
 	collapse: CollapseSummary;
 	bending: CheckResult;
+}
+
+/** Why no plastic hinge can be restrained, when that follows from the restraint alone. */
+export const HINGES_UNRESTRAINABLE =
+	'the flange is held only at the supports and every mechanism of this beam needs a hinge ' +
+	'inside a span';
+
+/**
+ * True when the restraint alone rules the plastic route out: with the compression flange held
+ * only at the supports and no free end, every span that moves in a mechanism needs a hinge inside
+ * it, away from any restraint. (A hinge within h/2 of a support would need a shear far above
+ * Vpl,Rd to reach Mp so close to it; treating that case elastically is on the safe side.)
+ */
+export function cannotRestrainHinges(ctx: CheckContext, restraint: { kind: string }): boolean {
+	return restraint.kind === 'ends-only' && !ctx.beam.supports.includes('free');
+}
+
+/**
+ * The collapse of one arrangement, for information where another route decides: solved with the
+ * shear reduction at its hinges, as the plastic route would, without entering ctx.plastic.
+ */
+export function solveCollapseForInformation(
+	ctx: CheckContext,
+	o: { arrangement: LoadArrangement; vRd: (number | null)[] }
+): CollapseSummary {
+	const capacity = buildCapacity(ctx.beam.spans, ctx.members.map((m) => m.mp / ctx.gammaM0));
+	const d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement: o.arrangement });
+	const p = solvePlasticArrangement({
+		basis: ctx.basis,
+		beam: ctx.beam,
+		members: ctx.members,
+		nodes: ctx.nodes,
+		capacity,
+		arrangement: o.arrangement,
+		fixedLoads: d.fixed,
+		variableLoads: d.variable,
+		effects: ctx.effects,
+		released: ctx.released,
+		vplRd: o.vRd,
+		gammaM0: ctx.gammaM0
+	});
+	return summariseCollapse(p);
+}
+
+/** The report's view of one arrangement's collapse. */
+function summariseCollapse(g: PlasticArrangement): CollapseSummary {
+	const r = g.result;
+	const hinges = 'hinges' in r ? r.hinges : [];
+	return {
+		loadFactor: g.loadFactor,
+		certified: g.certified,
+		mechanism: 'mechanism' in r ? r.mechanism.name : null,
+		hinges: hinges.map((h) => ({ x: h.x, moment: h.moment })),
+		arrangement: g.arrangement.name,
+		reductions: g.reductions,
+		result: r,
+		capacity: g.capacity
+	};
 }
 
 /** Solves the plastic route (fills ctx.plastic with every arrangement's collapse). */
@@ -70,16 +129,7 @@ export function runPlasticRoute(
 	});
 	return {
 		scope,
-		collapse: {
-			loadFactor: g.loadFactor,
-			certified: g.certified,
-			mechanism: 'mechanism' in r ? r.mechanism.name : null,
-			hinges: hinges.map((h) => ({ x: h.x, moment: h.moment })),
-			arrangement: g.arrangement.name,
-			reductions: g.reductions,
-			result: r,
-			capacity: g.capacity
-		},
+		collapse: summariseCollapse(g),
 		bending: describePlasticBending(ctx, g)
 	};
 }

@@ -3,7 +3,6 @@
  * the scope gate, the bending route (plastic collapse or elastic), shear, bending with shear,
  * lateral-torsional buckling, web bearing and deflection.
  */
-import { classifySectionEN } from '../section/index';
 import { E_STEEL } from '../units';
 import { checkElasticBending } from './bending-check';
 import type { CheckContext } from './context';
@@ -12,9 +11,9 @@ import { summariseCharacteristicEffects } from './characteristic-effects';
 import { checkBeamDeflections } from './deflection-check';
 import type { DesignBasis } from './design-basis';
 import { releaseRedundants } from './determinate';
-import type { FactorSettings } from './en1993/factors';
-import { en1993 } from './en1993/index';
-import type { ScopeDecision, ScopeInput, SectionClass } from './en1993/scope';
+import type { FactorSettings } from './basis-types';
+import { DEFAULT_BASIS } from './bases';
+import type { ScopeDecision, ScopeInput, SectionClass } from './basis-types';
 import type { DesignCheckInput, DesignCheckOutcome } from './inputs';
 import { checkBeamInteraction } from './interaction-check';
 import { listLoadArrangements, MAX_PATTERNED_SPANS } from './load-arrangements';
@@ -22,7 +21,12 @@ import { analyseLoadGroups } from './load-effects';
 import { checkBeamLtb } from './ltb-check';
 import { describeMember, type SpanMember } from './member';
 import { listNotices } from './notices';
-import { runPlasticRoute } from './plastic-route';
+import {
+	cannotRestrainHinges,
+	HINGES_UNRESTRAINABLE,
+	runPlasticRoute,
+	solveCollapseForInformation
+} from './plastic-route';
 import { listRestraintSegments } from './restraint';
 import { checkBeamShear, computeSpanShearResistances } from './shear-check';
 import type { CheckResult } from './types';
@@ -38,11 +42,11 @@ type Basis = DesignBasis<FactorSettings>;
  */
 export function runDesignChecks(
 	input: DesignCheckInput,
-	basis: Basis = en1993
+	basis: Basis = DEFAULT_BASIS
 ): DesignCheckOutcome {
 	const { beam } = input;
 	const members = input.sections.map((s, i) => describeMember(s, input.grades[i]?.fy ?? 0));
-	const classes = input.sections.map((s, i) => classifySectionEN(s, members[i].fy || 235).class);
+	const classes = input.sections.map((s, i) => basis.classifySection(s, members[i].fy || 235).class);
 	const sectionClass = Math.max(...classes.map((c) => c ?? 1)) as SectionClass;
 	const hasImposed = input.loads.some((l) => l.action === 'imposed');
 	const factors = basis.resolveFactors(input.factors, { hasImposed });
@@ -56,7 +60,7 @@ export function runDesignChecks(
 	const scopeBase = buildScopeInput(input, basis, { members, sectionClass, imposedSpans });
 	const notes = listNotices({
 		restraintGiven: input.restraint !== null,
-		hollow: members.some((m) => m.shape !== 'I' && m.shape !== 'welded-I'),
+		hollow: members.some((m) => m.propsKnown && m.shape !== 'I' && m.shape !== 'welded-I'),
 		bearingGiven: input.bearing !== null
 	});
 	const mpRd = members.map((m) => m.mp / factors.gammaM0);
@@ -156,7 +160,16 @@ function runChecks(
 	const checks: CheckResult[] = [];
 	let route = o.early;
 	let collapse: DesignCheckOutcome['collapse'] = null;
-	if (route.route === 'plastic') {
+	let informationOnly = false;
+	if (route.route === 'plastic' && cannotRestrainHinges(ctx, restraint)) {
+		// Exact shortcut: no arrangement's mechanism could use the plastic route.
+		route = ctx.basis.decideRoute({
+			...o.scopeBase,
+			hingesRestrained: false,
+			hingeRestraintNote: HINGES_UNRESTRAINABLE
+		});
+		informationOnly = true;
+	} else if (route.route === 'plastic') {
 		const plastic = runPlasticRoute(ctx, { segments, vRd, scopeBase: o.scopeBase });
 		route = plastic.scope;
 		collapse = plastic.collapse;
@@ -174,7 +187,13 @@ function runChecks(
 		const resistance = members.map((m) =>
 			ctx.basis.computeBendingResistance({ ...m, gammaM0: ctx.gammaM0, elastic })
 		);
-		checks.push(checkElasticBending(ctx, { EI: o.EI, resistance, elastic }));
+		const bending = checkElasticBending(ctx, { EI: o.EI, resistance, elastic });
+		checks.push(bending);
+		if (informationOnly) {
+			// The collapse is shown for information, for the arrangement that governs bending.
+			const arrangement = ctx.arrangements.find((a) => a.name === bending.arrangement);
+			if (arrangement) collapse = solveCollapseForInformation(ctx, { arrangement, vRd });
+		}
 		const inter = checkBeamInteraction(ctx, { vRd, elastic });
 		if (inter) checks.push(inter);
 	}

@@ -6,11 +6,10 @@
 import type { CaseModel } from '../case/types';
 import { validateCollapseProblem } from '../collapse/index';
 import type { InputIssue } from '../model/issue';
-import { classifySectionEN } from '../section/index';
 import { buildCapacity } from './capacity';
 import type { DesignBasis } from './design-basis';
-import type { FactorSettings } from './en1993/factors';
-import { en1993 } from './en1993/index';
+import type { FactorSettings } from './basis-types';
+import { DEFAULT_BASIS } from './bases';
 import { buildDesignCheckInput } from './from-case';
 import { computeGoverningCurve, type GoverningCurve } from './governing-curve';
 import type { DesignCheckInput, DesignCheckOutcome } from './inputs';
@@ -51,7 +50,7 @@ export function runDesign(
 	model: CaseModel,
 	options: DesignOptions = {}
 ): { ok: true; value: DesignOutcome } | { ok: false; issues: InputIssue[] } {
-	const basis = options.basis ?? en1993;
+	const basis = options.basis ?? DEFAULT_BASIS;
 	const input = buildDesignCheckInput(model);
 	const refused = validateCollapseProblem({
 		beam: input.beam,
@@ -66,7 +65,7 @@ export function runDesign(
 	const inScope = checked.verdict.verdict !== 'outside-scope';
 	const curve = options.curve && inScope ? computeGoverningCurve(input, run) : null;
 	const sectionClasses = model.sections.map((sec, e) =>
-		classifySectionEN(sec, model.grades[e]?.fy ?? 235)
+		basis.classifySection(sec, model.grades[e]?.fy ?? 235)
 	);
 	return { ok: true, value: { input, sectionClasses, checked, answer, curve } };
 }

@@ -3,7 +3,7 @@
  * `governing`-level checks decide; `warning`-level checks (deflection by default) are reported.
  */
 import { assertFinite } from '../model/issue';
-import type { ScopeDecision } from './en1993/scope';
+import type { ScopeDecision } from './basis-types';
 import type { AnalysisRoute, CheckResult, VerdictKind } from './types';
 
 /**

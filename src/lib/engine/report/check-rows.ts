@@ -91,8 +91,8 @@ export function reportCheckRow(c: CheckResult): CheckRowReport {
 /** The design-check part of the report. */
 export function reportDesignChecks(o: DesignCheckOutcome): DesignCheckReport {
 	const v = o.verdict;
-	const governingArrangement =
-		o.collapse?.arrangement ?? o.checks.find((c) => c.id === v.governing?.id)?.arrangement ?? null;
+	const fromCheck = o.checks.find((c) => c.id === v.governing?.id)?.arrangement ?? null;
+	const governingArrangement = v.route === 'plastic' ? (o.collapse?.arrangement ?? fromCheck) : fromCheck;
 	return {
 		basis: o.basis,
 		route: { route: v.route, reasons: v.routeReasons },

@@ -3,44 +3,8 @@
  * (STR, recommended values). The temporary action is the load being checked; existing imposed
  * load on the beam is a second variable action. Each variable action leads in turn.
  */
-
-/** Name of a factor set as written in a case file. */
-export type FactorSetName = 'en1990-6.10' | 'en1990-6.10ab' | 'custom';
-
-/** Factor settings as entered; missing values take the recommended ones. */
-export interface FactorSettings {
-	set: FactorSetName;
-	/** γG,sup, unfavourable permanent action (recommended 1.35). */
-	gammaGsup?: number;
-	/** γG,inf, favourable permanent action (recommended 1.00). */
-	gammaGinf?: number;
-	/** γQ for existing imposed load (recommended 1.5). */
-	gammaQ?: number;
-	/** Factor on the temporary action; defaults to γQ. */
-	gammaT?: number;
-	/** Reduction ξ on unfavourable permanent action in 6.10b (recommended 0.85). */
-	xi?: number;
-	/** ψ0 for accompanying imposed load (0.7, categories A–D). */
-	psi0?: number;
-	/** ψ0 for the temporary action when it accompanies (recommended 1.0, construction loads). */
-	psi0T?: number;
-	/** Resistance factors γM0 and γM1 (recommended 1.00 both). */
-	gammaM0?: number;
-	gammaM1?: number;
-}
-
-/** One combination expression with its factors resolved. */
-export interface Combination {
-	/** `6.10`, `6.10a`, `6.10b` or `custom`, plus which action leads. */
-	name: string;
-	/** Factor on permanent action where unfavourable / favourable. */
-	gammaGsup: number;
-	gammaGinf: number;
-	/** Factor on existing imposed load where present. */
-	gammaImposed: number;
-	/** Factor on the temporary action. */
-	gammaTemporary: number;
-}
+import type { FactorSetName, FactorSettings, Combination } from '../basis-types';
+export type { FactorSetName, FactorSettings, Combination } from '../basis-types';
 
 /** Factors resolved from settings, with the combinations to try. */
 export interface ResolvedFactors {

@@ -3,6 +3,7 @@
  */
 import type { DesignBasis } from '../design-basis';
 import { resolveFactors, type FactorSettings } from './factors';
+import { classifySectionEN } from '../../section/index';
 import { decideRoute } from './scope';
 import { checkWebSlenderness, computePlasticShearResistance, computeShearArea } from './shear';
 import { computeReducedMomentResistance, computeShearReduction } from './interaction';
@@ -35,6 +36,7 @@ export const en1993: DesignBasis<FactorSettings> = {
 		};
 	},
 	decideRoute,
+	classifySection: classifySectionEN,
 	computeBendingResistance: (o) => ((o.elastic ? o.Wel : o.Wpl) * o.fy) / o.gammaM0,
 	computeShearArea,
 	computeShearResistance: computePlasticShearResistance,

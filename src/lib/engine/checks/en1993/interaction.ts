@@ -2,6 +2,8 @@
  * Bending and shear interaction, EN 1993-1-1 6.2.8: above half the plastic shear resistance the
  * shear area works at a reduced yield strength (1 − ρ)·fy.
  */
+import type { ReducedMomentInput } from '../basis-types';
+export type { ReducedMomentInput } from '../basis-types';
 
 /**
  * ρ = (2·VEd/Vpl,Rd − 1)² where VEd > 0.5·Vpl,Rd, else 0 (EN 1993-1-1 6.2.8(3)).
@@ -13,19 +15,6 @@ export function computeShearReduction(o: { vEd: number; vplRd: number }): number
 	const ratio = Math.abs(o.vEd) / o.vplRd;
 	if (ratio <= 0.5) return 0;
 	return (2 * ratio - 1) ** 2;
-}
-
-/** Inputs of {@link computeReducedMomentResistance}; mm, mm³, N/mm². */
-export interface ReducedMomentInput {
-	/** Plastic modulus about the bending axis, mm³. */
-	Wpl: number;
-	/** Web area hw·tw (all webs), mm². */
-	Aw: number;
-	/** Web thickness (sum over webs), mm. */
-	tw: number;
-	fy: number;
-	gammaM0: number;
-	rho: number;
 }
 
 /**

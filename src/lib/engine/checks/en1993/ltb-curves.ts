@@ -3,6 +3,8 @@
  * 6.3.2.3 (rolled sections and equivalent welded), recommended values.
  */
 import type { SectionShape } from '../../section/types';
+import type { LtbResistance } from '../basis-types';
+export type { LtbResistance } from '../basis-types';
 
 /** Buckling curve letter. */
 export type BucklingCurve = 'a' | 'b' | 'c' | 'd';
@@ -89,14 +91,6 @@ export interface LtbResistanceInput {
 	gammaM1: number;
 	curve: BucklingCurve;
 	method: LtbMethod;
-}
-
-/** χLT and Mb,Rd for one segment. */
-export interface LtbResistance {
-	lambdaBar: number;
-	chiLT: number;
-	/** Mb,Rd = χLT·Wy·fy/γM1, N·mm. */
-	mbRd: number;
 }
 
 /**

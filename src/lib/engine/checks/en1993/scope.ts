@@ -3,38 +3,8 @@
  * (EN 1993-1-1 5.5, 5.6 and 6.2), material ductility (3.2.2) and member stability at hinges
  * (6.3.5), and what puts a beam outside this tool.
  */
-import type { AnalysisRoute } from '../types';
-
-/** Section class of EN 1993-1-1 Table 5.2 for major-axis bending. */
-export type SectionClass = 1 | 2 | 3 | 4;
-
-/** Facts the gate decides on. */
-export interface ScopeInput {
-	sectionClass: SectionClass;
-	/** Steel with the ductility of EN 1993-1-1 3.2.2; false for cast or wrought iron. */
-	ductile: boolean;
-	/** False while an unknown or historic grade has not been confirmed by the user. */
-	gradeConfirmed: boolean;
-	/** hw/tw > 72ε/η: shear buckling to EN 1993-1-5 would be needed. */
-	needsShearBucklingCheck: boolean;
-	/** The plastic collapse solution was verified by statics (only read for Class 1). */
-	collapseCertified: boolean;
-	/**
-	 * Every hinge of the mechanism sits at a lateral restraint and the segments next to it are
-	 * within the stable length (6.3.5), or the flange is restrained throughout.
-	 */
-	hingesRestrained: boolean;
-	/** Why the hinges are not restrained enough, for the message. */
-	hingeRestraintNote?: string;
-	/** Further reasons found elsewhere that put the beam outside scope. */
-	otherReasons?: string[];
-}
-
-/** The route and the plain reasons for it. */
-export interface ScopeDecision {
-	route: AnalysisRoute;
-	reasons: string[];
-}
+import type { SectionClass, ScopeInput, ScopeDecision } from '../basis-types';
+export type { SectionClass, ScopeInput, ScopeDecision } from '../basis-types';
 
 /**
  * Decides the analysis route.

@@ -2,25 +2,9 @@
  * Plastic shear resistance, EN 1993-1-1 6.2.6, and the web slenderness limit beyond which shear
  * buckling (EN 1993-1-5 section 5) would have to be checked.
  */
-import type { SectionShape } from '../../section/types';
 import { computeEpsilon } from '../../material/epsilon';
-
-/** Dimensions and area needed for the shear area, mm and mm². */
-export interface ShearAreaInput {
-	shape: SectionShape;
-	/** Gross area, mm². */
-	A: number;
-	/** Depth, flange width (or hollow width), mm. */
-	h: number;
-	b: number;
-	/** Web and flange thickness (hollow: wall thickness in both), mm. */
-	tw: number;
-	tf: number;
-	/** Root radius, mm (0 for welded or hollow). */
-	r: number;
-	/** η of EN 1993-1-5 5.1(2); 1.0 is the conservative default. */
-	eta: number;
-}
+import type { ShearAreaInput } from '../basis-types';
+export type { ShearAreaInput } from '../basis-types';
 
 /**
  * Shear area Av for load parallel to the web (EN 1993-1-1 6.2.6(3)):

@@ -4,6 +4,7 @@
  * I sections with h/tf ≤ 40ε under linear moment and no significant axial force,
  * Lstable = 35·ε·iz for 0.625 ≤ ψ ≤ 1 and (60 − 40ψ)·ε·iz for −1 ≤ ψ ≤ 0.625.
  */
+export { computeEndMomentRatio } from '../end-moment-ratio';
 import { computeEpsilon } from '../../material/epsilon';
 
 /** Inputs of {@link computeStableLength}; mm and N/mm². */
@@ -28,18 +29,4 @@ export function computeStableLength(o: StableLengthInput): number | null {
 	const psi = Math.max(-1, Math.min(1, o.psi));
 	const factor = psi >= 0.625 ? 35 : 60 - 40 * psi;
 	return factor * epsilon * o.iz;
-}
-
-/**
- * ψ of a segment from its end moments: smaller over larger magnitude, negative when the ends
- * bend in opposite senses; 1 when both are zero.
- * @example
- * computeEndMomentRatio(-100, 50) // -0.5
- */
-export function computeEndMomentRatio(mA: number, mB: number): number {
-	const big = Math.max(Math.abs(mA), Math.abs(mB));
-	if (big === 0) return 1;
-	const small = Math.abs(mA) >= Math.abs(mB) ? mB : mA;
-	const large = Math.abs(mA) >= Math.abs(mB) ? mA : mB;
-	return small / large;
 }
