@@ -3,7 +3,7 @@
  * five-span beam with 20 loads, a three-span capacity curve, and the same five-span problem solved
  * by the general-purpose LP solver HiGHS on a fine grid, side by side. Demo data (invented).
  */
-import { computeCapacityCurve, solveCollapse } from '../../src/lib/engine/collapse';
+import { solveCollapse } from '../../src/lib/engine/collapse';
 import { makeProblem, type LoadSpec, type ProblemSpec } from '../unit/collapse/builders';
 import { writeGridProgram } from '../unit/collapse/grid-program';
 import { medianMs } from './median';
@@ -33,14 +33,6 @@ function makeFiveSpan(): ProblemSpec {
 	};
 }
 
-const threeSpan: ProblemSpec = {
-	spans: [6, 7.5, 6],
-	supports: ['pin', 'pin', 'pin', 'pin'],
-	Mp: [120, 150, 120],
-	fixed: [{ w: 4, from: 0, to: 19.5 }],
-	variable: []
-};
-
 const format = (ms: number) =>
 	`${ms < 0.1 ? (ms * 1000).toFixed(1) + ' µs' : ms.toFixed(3) + ' ms'}`;
 
@@ -54,11 +46,6 @@ export async function runCollapseBench(): Promise<void> {
 	const five = makeProblem(fiveSpec);
 	const fiveMs = medianMs(() => solveCollapse(five), 200, 20);
 	console.log(`five spans, 20 loads:           ${format(fiveMs)}`);
-	const three = makeProblem(threeSpan);
-	const curve = { beam: three.beam, capacity: three.capacity, fixedLoads: three.fixedLoads };
-	console.log(
-		`capacity curve, three spans:    ${format(medianMs(() => computeCapacityCurve(curve), 20, 3))}`
-	);
 	const highs = await (await import('highs')).default();
 	const exact = solveCollapse(five);
 	for (const perBeam of [300, 1500]) {

@@ -3,8 +3,6 @@
  * Internal units: mm, N, N/mm, N·mm. See ../README.md for the theory.
  */
 export type {
-	CapacityCurve,
-	CapacityPoint,
 	CollapseDiagram,
 	CollapseProblem,
 	CollapseResult,
@@ -13,7 +11,6 @@ export type {
 	MechanismSummary
 } from './types';
 export { solveCollapse } from './solve';
-export { computeCapacityCurve } from './capacity-curve';
 export { momentAt, shearAt, type DiagramSource } from './diagram';
 export { validateCollapseProblem } from './validate-problem';
 export { CERTIFY_GAP } from './certified-field';

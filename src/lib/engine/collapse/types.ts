@@ -69,25 +69,3 @@ export type CollapseResult =
 	| ({ status: 'not-certified'; certified: false; message: string } & CollapseSolution)
 	| { status: 'fails-under-fixed'; message: string; overstress: number }
 	| { status: 'unbounded'; message: string };
-
-/** One point of a capacity curve. */
-export interface CapacityPoint {
-	/** Position of the unit point load from the left end, mm. */
-	x: number;
-	/** Largest downward point load at x, N; null where the load goes straight into a support. */
-	Pmax: number | null;
-}
-
-/** P_max(x) for one downward point load moved along the beam line, with the fixed loads on. */
-export type CapacityCurve =
-	| {
-			status: 'ok';
-			/** Exact values at critical positions and enough points between to draw the curve. */
-			points: CapacityPoint[];
-			/** The exact minimum of P_max and where it occurs. */
-			minimum: { x: number; Pmax: number; mechanism: string };
-			/** True when the full solve at the minimum was certified (each value is an exact optimum). */
-			certified: boolean;
-	  }
-	| { status: 'fails-under-fixed'; message: string }
-	| { status: 'unbounded'; message: string };
