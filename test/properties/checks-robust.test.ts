@@ -35,7 +35,7 @@ const beamArb = fc
 	.filter((o) => !(o.spans.length === 1 && (o.left === 'free' || o.right === 'free') && o.left !== 'fixed' && o.right !== 'fixed'));
 
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any -- test data assembled from the arbitrary
+// `any`: test data assembled from the arbitrary above.
 function build(o: any) {
 	const total = o.spans.reduce((s: number, L: number) => s + L, 0);
 	const supports = [o.left, ...o.spans.slice(1).map(() => 'pin'), o.right];

@@ -1,7 +1,7 @@
 /**
- * `npm test`: type check, unit/validation/property/storage tests (vitest), production build, browser
- * tests (Playwright on the build). Ends with one line `N passed, N failed` over all suites and exits
- * non-zero when anything failed or when no test ran.
+ * `npm test`: type check, lint, unit/validation/property/storage tests (vitest), production build,
+ * browser tests (Playwright on the build). Ends with one line `N passed, N failed` over all suites
+ * and exits non-zero when anything failed or when no test ran.
  */
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
@@ -34,7 +34,11 @@ const typed = run('type check', 'npx', ['svelte-kit', 'sync']) &&
 	run('svelte-check', 'npx', ['svelte-check', '--tsconfig', './tsconfig.json', '--threshold', 'error']);
 total[typed ? 'passed' : 'failed'] += 1;
 
-// 2. Engine, storage, validation and property tests.
+// 2. Lint (ESLint, with the engine's layering rules) counts as one check too. Formatting is not
+// checked here: `npm run format:check` reports it on its own.
+total[run('lint', 'npm', ['run', '--silent', 'lint']) ? 'passed' : 'failed'] += 1;
+
+// 3. Engine, storage, validation and property tests.
 const unitFile = `${results}/unit-results.json`;
 rmSync(unitFile, { force: true });
 const unitOk = run('unit, validation, property and storage tests', 'npx', [
@@ -45,7 +49,7 @@ total.passed += unit?.numPassedTests ?? 0;
 total.failed += unit?.numFailedTests ?? 0;
 if (!unitOk && !(unit?.numFailedTests)) total.failed += 1; // the runner itself failed
 
-// 3. Browser tests run against the production build: prerendering and the worker exist only there.
+// 4. Browser tests run against the production build: prerendering and the worker exist only there.
 const browser = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 if (!existsSync(browser)) {
 	console.error(
@@ -67,4 +71,5 @@ if (!existsSync(browser)) {
 }
 
 console.log(`\n${total.passed} passed, ${total.failed} failed`);
-process.exitCode = total.failed > 0 || total.passed <= 1 ? 1 : 0;
+// The type check and lint alone are not a test run.
+process.exitCode = total.failed > 0 || total.passed <= 2 ? 1 : 0;

@@ -36,7 +36,10 @@ function largestQk(set: 'en1990-6.10' | 'en1990-6.10ab', extra: Record<string, n
 		const g = d.fixed.reduce((s, l) => s + (l.kind === 'uniform' ? l.value : 0), 0);
 		const q = d.variable.reduce((s, l) => s + (l.kind === 'point' ? l.value : 0), 0) / 1000;
 		const qk = ((4 * Mp) / L - (g * L) / 2) / q / 1000; // kN
-		if (qk < best) (best = qk), (name = arrangement.name);
+		if (qk < best) {
+			best = qk;
+			name = arrangement.name;
+		}
 	}
 	return { qk: best, name };
 }
