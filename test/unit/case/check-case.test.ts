@@ -154,6 +154,50 @@ describe('checkCase: section, grade and elastic results', () => {
 	});
 });
 
+describe('checkCase: the answer for zero, upward and mixed proposed loads', () => {
+	it('only zero proposed loads: no verdict, a message, and no allowable loads', () => {
+		const r = run(simpleCase({ mp: 100, loads: [point(3, 0), udl(0, 'temporary')] }));
+		expect(r.answer.verdict).toBeNull();
+		expect(r.answer.multiplier).toBeNull();
+		expect(r.answer.allowable).toEqual([]);
+		expect(r.answer.message).toMatch(/every one is zero/);
+		expect(r.summary.short).toMatch(/NO VERDICT/);
+	});
+
+	it('an upward proposed load on a simply supported span relieves it: said so, no negative size', () => {
+		// Self weight 5 kN/m down, a 10 kN upward prop force: M = wL²/8 − PL/4 = 22.5 − 15 > 0,
+		// and more upward force only lowers the sagging moment until it reverses (statics). Bending
+		// of a known Mp is the only check, so the multiplier is where −Mp is reached:
+		// 22.5 − 15·t = −100 → t = 8.17.
+		const r = run(simpleCase({ mp: 100, loads: [udl(5, 'permanent'), point(3, -10)] }));
+		const a = r.answer;
+		expect(a.verdict).toBe('pass');
+		expect(a.allowable[0].direction).toBe('up');
+		expect(a.allowable[0].value).toBeGreaterThan(0);
+		expectRel(a.multiplier!, (22.5 + 100) / 15, 1e-6);
+		expect(a.message).not.toMatch(/−|-\d/);
+		expect(a.message).toMatch(/upward/);
+	});
+
+	it('with no deciding check limiting an upward load, it is said to relieve the beam', () => {
+		// A point load at a support goes straight into it: no bending check is affected.
+		const r = run(simpleCase({ mp: 100, loads: [udl(5, 'permanent'), point(0, -10)] }));
+		expect(r.answer.allowable[0]).toMatchObject({ value: null, effect: 'relieves', direction: 'up' });
+		expect(r.answer.message).toMatch(/relieves the beam/);
+	});
+
+	it('two proposed loads: each may grow by the same multiplier, each in its own unit', () => {
+		const r = run(simpleCase({ mp: 100, loads: [point(3, 10), udl(2, 'temporary')] }));
+		// Central W and UDL w together: (W·L/4 + wL²/8)·t = Mp → t = 100/(15 + 9) (Neal).
+		const t = 100 / ((10 * 6) / 4 + (2 * 6 * 6) / 8);
+		expectRel(r.answer.multiplier!, t);
+		expect(r.answer.allowable.map((l) => l.unit)).toEqual(['kN', 'kN/m']);
+		expectRel(r.answer.allowable[0].value!, 10 * t);
+		expectRel(r.answer.allowable[1].value!, 2 * t);
+		expect(r.answer.message).toMatch(/Largest proposed loads, together: .* kN \(load 1\); .* kN\/m \(load 2\)/);
+	});
+});
+
 describe('checkCase: the report as data', () => {
 	it('starts its notices with the engineer-of-record notice and records the engine version', () => {
 		const r = run(simpleCase({ loads: [point(3, 10)] }));
