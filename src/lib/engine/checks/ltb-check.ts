@@ -56,11 +56,20 @@ export function checkBeamLtb(
 			EIw: E_STEEL * m.Iw,
 			zg
 		});
-		const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
-			const cr = prepared.at(groups.map((g) => g.weight(arr) * (g.kind === 'temporary' ? t : 1)));
+		// The row depends only on the weights: arrangements and trial multipliers repeat them.
+		const seen = new Map<string, ReturnType<typeof evaluate>>();
+		const evaluate = (weights: number[]) => {
+			const cr = prepared.at(weights);
 			if (cr === null) return { utilisation: 0, detail: null };
 			const r = ctx.basis.computeLtbResistance({ ...m, Wy, mcr: cr.mcr, gammaM1: ctx.gammaM1 });
 			return { utilisation: cr.mMax / r.mbRd, detail: { ...r, mcr: cr.mcr, mEd: cr.mMax } };
+		};
+		const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
+			const weights = groups.map((g) => g.weight(arr) * (g.kind === 'temporary' ? t : 1));
+			const key = weights.join(' ');
+			let e = seen.get(key);
+			if (!e) seen.set(key, (e = evaluate(weights)));
+			return e;
 		});
 		const d = worst.detail;
 		checks.push({

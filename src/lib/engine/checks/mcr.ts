@@ -11,7 +11,7 @@
  * det(K − λG) = 0; Mcr = λcr · max|M|.
  */
 import { lineLoadAt, computeSegmentMoment, type LtbSegment } from './segment-moment';
-import { computeSymmetricEigenvalues } from './symmetric-eigen';
+import { computeLargestEigenvalue } from './largest-eigenvalue';
 
 /** Inputs of {@link computeCriticalMoment}; N, mm. */
 export interface CriticalMomentInput {
@@ -62,6 +62,8 @@ export function computeCriticalMoment(input: CriticalMomentInput): CriticalMomen
 export interface CriticalMomentParts extends Omit<CriticalMomentInput, 'segment'> {
 	/** Loadings of the same segment (same length); the buckling state is Σ wᵢ·partᵢ. */
 	parts: LtbSegment[];
+	/** Largest eigenvalue of a symmetric matrix (tests pass the full Jacobi solve to compare). */
+	largestEigenvalue?: (a: Float64Array, n: number) => number;
 }
 
 /** Mcr of any weighted sum of the prepared parts. */
@@ -71,11 +73,13 @@ export interface PreparedCriticalMoment {
 
 /**
  * Assembles the energy matrices of each part once; moments and load-height terms are linear in
- * the loads, so any weighted sum (fixed loads + t × temporary loads) costs one eigenvalue solve.
+ * the loads, so any weighted sum (fixed loads + t × temporary loads) costs one solve for the
+ * largest eigenvalue.
  */
 export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriticalMoment {
 	const { parts, EIz, GIt, EIw, zg } = input;
 	const N = input.terms ?? 12;
+	const largest = input.largestEigenvalue ?? computeLargestEigenvalue;
 	const L = parts[0].length;
 	const loads = parts.flatMap((p) => p.loads);
 	const all: LtbSegment = { length: L, momentStart: 0, momentEnd: 0, loads };
@@ -123,21 +127,23 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 		const samples = [...points.map((p) => p.x), ...edges].map((x) => computeSegmentMoment(seg, x));
 		return { g, samples };
 	});
+	const count = assembled[0].samples.length;
 	return {
 		at(weights) {
-			const g = new Float64Array(n2 * n2);
 			let mMax = 0;
-			const count = assembled[0].samples.length;
 			for (let q = 0; q < count; q++) {
 				let m = 0;
-				assembled.forEach((a, i) => (m += weights[i] * a.samples[q]));
+				for (let i = 0; i < assembled.length; i++) m += weights[i] * assembled[i].samples[q];
 				mMax = Math.max(mMax, Math.abs(m));
 			}
 			if (!(mMax > 0)) return null;
-			assembled.forEach((a, i) => {
-				if (weights[i] !== 0) for (let e = 0; e < g.length; e++) g[e] += weights[i] * a.g[e];
-			});
-			const mu = computeSymmetricEigenvalues(g, n2).at(-1) ?? 0;
+			const g = new Float64Array(n2 * n2);
+			for (let i = 0; i < assembled.length; i++) {
+				const w = weights[i];
+				const a = assembled[i].g;
+				if (w !== 0) for (let e = 0; e < g.length; e++) g[e] += w * a[e];
+			}
+			const mu = largest(g, n2);
 			if (!(mu > 0)) return null;
 			const factor = 1 / mu;
 			return { mcr: factor * mMax, factor, mMax };
