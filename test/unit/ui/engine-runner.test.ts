@@ -92,6 +92,23 @@ describe('engine runner', () => {
 		expect(ports).toHaveLength(1);
 	});
 
+	it('lets a request for the same case share the answer in progress instead of replacing it', async () => {
+		const runner = new EngineRunner({ spawn, grace: 250 });
+		await warmUp(runner);
+		const first = watch(runner.run(caseNamed('demo')));
+		const other = watch(runner.run(caseNamed('other')));
+		const again = watch(runner.run(caseNamed('demo')));
+		await vi.advanceTimersByTimeAsync(1000);
+		// Same case as the one running: no new worker, and the case in between is dropped.
+		expect(ports).toHaveLength(1);
+		expect(other.outcome).toEqual(REPLACED);
+		ports[0].answer({ seq: ports[0].last, result: refused });
+		await vi.advanceTimersByTimeAsync(0);
+		expect(first.outcome?.state).toBe('issues');
+		expect(again.outcome?.state).toBe('issues');
+		expect(ports[0].received).toHaveLength(2);
+	});
+
 	it('replaces a worker still busy after the grace time when a newer check waits', async () => {
 		const runner = new EngineRunner({ spawn, grace: 250 });
 		await warmUp(runner);

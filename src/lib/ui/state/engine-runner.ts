@@ -40,6 +40,8 @@ export function tooLongMessage(limit: number): string {
 interface Request {
 	seq: number;
 	case: CaseFile;
+	/** The case as JSON: a newer request for the same case shares this one's answer. */
+	key: string;
 	resolve: (outcome: CheckOutcome) => void;
 }
 
@@ -88,7 +90,7 @@ export class EngineRunner {
 
 	constructor(options: EngineRunnerOptions = {}) {
 		this.#spawn = options.spawn ?? spawnWorker;
-		this.#grace = options.grace ?? 250;
+		this.#grace = options.grace ?? 1000;
 		this.#coldGrace = options.coldGrace ?? 2000;
 		this.#limit = options.limit ?? 20_000;
 		// Start the worker now so the first check does not pay for loading the engine.
@@ -98,9 +100,24 @@ export class EngineRunner {
 	/** Checks one plain (snapshot) case; always resolves. */
 	run(c: CaseFile): Promise<CheckOutcome> {
 		if (this.#onPage) return this.#runHere(c);
+		const seq = ++this.#seq;
+		const key = keyOf(c, seq);
 		return new Promise((resolve) => {
-			this.#next?.resolve(REPLACED);
-			this.#next = { seq: ++this.#seq, case: c, resolve };
+			// The same case again (e.g. opened, then saved as a draft) waits for the answer in progress.
+			const same = [this.#running, this.#next].find((r) => r?.key === key);
+			if (this.#next !== same) {
+				this.#next?.resolve(REPLACED);
+				this.#next = null;
+			}
+			if (same) {
+				const earlier = same.resolve;
+				same.resolve = (outcome) => {
+					earlier(outcome);
+					resolve(outcome);
+				};
+				return;
+			}
+			this.#next = { seq, case: c, key, resolve };
 			this.#pump();
 		});
 	}
@@ -233,6 +250,14 @@ export class EngineRunner {
 		} catch (error) {
 			return failed(`the engine could not be loaded (${describe(error)}). Reload the page.`);
 		}
+	}
+}
+
+function keyOf(c: CaseFile, seq: number): string {
+	try {
+		return JSON.stringify(c);
+	} catch {
+		return `unreadable ${seq}`;
 	}
 }
 
