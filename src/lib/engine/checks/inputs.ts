@@ -12,6 +12,7 @@ import type { SectionClass } from './basis-types';
 import type { HingeReduction } from './plastic-bending';
 import type { LoadArrangement } from './load-arrangements';
 import type { LateralRestraint, LoadHeight } from './restraint';
+import type { DesignMoments } from './design-moments';
 import type { CheckResult } from './types';
 import type { Verdict } from './verdict';
 import type { BearingLengths } from './web-check';
@@ -79,6 +80,8 @@ export interface DesignCheckOutcome {
 	bendingArrangement: LoadArrangement | null;
 	sectionClass: SectionClass | null;
 	collapse: CollapseSummary | null;
+	/** Elastic design moments and their limits, on the elastic routes; null otherwise. */
+	designMoments?: DesignMoments | null;
 	/** Design plastic moment resistance per span, Mp/γM0, N·mm. */
 	mpRd: number[];
 	/** Unfactored elastic effects; null when the check stopped before any analysis. */

@@ -9,6 +9,7 @@ import type { CheckContext } from './context';
 import { DEFAULT_DEFLECTION_LIMIT } from './deflection';
 import { summariseCharacteristicEffects } from './characteristic-effects';
 import { checkBeamDeflections } from './deflection-check';
+import { sampleDesignMoments, type DesignMoments } from './design-moments';
 import type { DesignBasis } from './design-basis';
 import { releaseRedundants } from './determinate';
 import type { FactorSettings } from './basis-types';
@@ -113,6 +114,7 @@ export function runDesignChecks(
 		arrangementCount: arrangements.length,
 		bendingArrangement,
 		collapse: run.collapse,
+		designMoments: run.designMoments ?? null,
 		effects: summariseCharacteristicEffects(ctx.effects, members, allKnown),
 		checks: run.checks,
 		verdict
@@ -152,7 +154,12 @@ function runChecks(
 	ctx: CheckContext,
 	input: DesignCheckInput,
 	o: { scopeBase: ScopeInput; early: ScopeDecision; EI: number[]; allKnown: boolean }
-): { route: ScopeDecision; collapse: DesignCheckOutcome['collapse']; checks: CheckResult[] } {
+): {
+	route: ScopeDecision;
+	collapse: DesignCheckOutcome['collapse'];
+	checks: CheckResult[];
+	designMoments?: DesignMoments | null;
+} {
 	const { beam, members } = ctx;
 	const restraint = input.restraint ?? { kind: 'continuous' as const };
 	const segments = listRestraintSegments({ spans: beam.spans, supports: beam.supports, restraint });
@@ -161,6 +168,7 @@ function runChecks(
 	let route = o.early;
 	let collapse: DesignCheckOutcome['collapse'] = null;
 	let informationOnly = false;
+	let elasticResistance: number[] | null = null;
 	if (route.route === 'plastic' && cannotRestrainHinges(ctx, restraint)) {
 		// Exact shortcut: no arrangement's mechanism could use the plastic route.
 		route = ctx.basis.decideRoute({
@@ -187,6 +195,7 @@ function runChecks(
 		const resistance = members.map((m) =>
 			ctx.basis.computeBendingResistance({ ...m, gammaM0: ctx.gammaM0, elastic })
 		);
+		elasticResistance = resistance;
 		const bending = checkElasticBending(ctx, { EI: o.EI, resistance, elastic });
 		checks.push(bending);
 		if (informationOnly) {
@@ -207,7 +216,23 @@ function runChecks(
 	}
 	checks.push(...checkBeamWebs(ctx, input.bearing ?? { supports: [], loads: 0 }));
 	if (o.allKnown) checks.push(...checkBeamDeflections(deflectionInput(ctx, input)));
-	return { route, collapse, checks };
+	const designMoments =
+		elasticResistance && route.route !== 'outside-scope'
+			? sampleDesignMoments(ctx, {
+					governing: pickBendingGoverning(checks),
+					checks,
+					resistance: elasticResistance
+				})
+			: null;
+	return { route, collapse, checks, designMoments };
+}
+
+/** The bending or buckling row that limits the proposed load first (its arrangement is drawn). */
+function pickBendingGoverning(checks: CheckResult[]): CheckResult | undefined {
+	const rank = (c: CheckResult) => c.multiplierAtCapacity ?? Number.MAX_VALUE;
+	return checks
+		.filter((c) => c.id === 'ltb' || c.id === 'bending')
+		.reduce<CheckResult | undefined>((best, c) => (!best || rank(c) < rank(best) ? c : best), undefined);
 }
 
 function deflectionInput(ctx: CheckContext, input: DesignCheckInput) {

@@ -11,10 +11,17 @@ import { describeAllowable, reportAnswer } from './answer-report';
 import { FACTOR_SET_WORDS, reportCheckRow, reportDesignChecks } from './check-rows';
 import { reportCollapse } from './collapse-report';
 import { reportCapacityCurve } from './curve-report';
-import { reportEffects } from './effects-report';
+import { reportDesignMoments, reportEffects } from './effects-report';
 import { assertAllFinite } from './finite';
 import { reportGrade, reportSection } from './section-report';
 import { writeLongSummary, writeShortSummary } from './summary';
+import {
+	convertTo,
+	formatIn,
+	unitSymbol,
+	type SummaryQuantity,
+	type SummaryUnits
+} from './summary-units';
 import { writeAssumptions, writeNotices } from './texts';
 import { REPORT_FORMAT, REPORT_VERSION, type CheckReport } from './types';
 import { ENGINE_VERSION } from './version';
@@ -25,6 +32,8 @@ export interface ReportOptions {
 	curve?: boolean;
 	/** Date shown in the shared summary, as the user reads it (the engine has no clock). */
 	date?: string;
+	/** Units of the summary texts only (default SI); the report's numbers stay in SI. */
+	units?: SummaryUnits;
 }
 
 /** The report of a validated case and its design run; every number in it is finite. */
@@ -69,6 +78,7 @@ export function buildCheckReport(
 		checks: outside ? [] : checked.checks.map(reportCheckRow),
 		design: designPart,
 		collapse,
+		designMoments: outside ? null : reportDesignMoments(checked.designMoments),
 		capacityCurve: design.curve && !outside ? reportCapacityCurve(design.curve) : null,
 		effects: reportEffects(checked.effects),
 		factors: { ...model.factors },
@@ -82,7 +92,9 @@ export function buildCheckReport(
 		assumptions: [`Restraint: ${restraint}.`, ...assumptions],
 		case: structuredClone(model.file)
 	};
-	report.summary = summarise(model, report, restraint, options.date);
+	const restraintIn = (u: SummaryUnits) =>
+		describeRestraint(design.input.restraint, design.input.loadHeight, u);
+	report.summary = summarise(model, report, restraintIn, options);
 	return assertAllFinite(report, 'report');
 }
 
@@ -93,8 +105,12 @@ function selfWeightOf(model: CaseModel, e: number): number {
 	return load && load.kind === 'uniform' ? nPerMmToKNPerM(load.value) : 0;
 }
 
-/** Restraint and load height in words. */
-export function describeRestraint(r: LateralRestraint | null, height: LoadHeight): string {
+/** Restraint and load height in words, restraint positions in the units asked for. */
+export function describeRestraint(
+	r: LateralRestraint | null,
+	height: LoadHeight,
+	units: SummaryUnits = 'si'
+): string {
 	const at: Record<LoadHeight, string> = {
 		'top-flange': 'load applied at the top flange',
 		'shear-centre': 'load applied at the shear centre',
@@ -106,23 +122,29 @@ export function describeRestraint(r: LateralRestraint | null, height: LoadHeight
 			: r.kind === 'ends-only'
 				? 'compression flange held laterally only at the supports'
 				: `compression flange held laterally at the supports and at ${r.at
-						.map((x) => `${Number(mmToM(x).toPrecision(4))} m`)
+						.map((x) => `${Number(convertTo(mmToM(x), 'length', units).toPrecision(4))} ${unitSymbol('length', units)}`)
 						.join(', ')}`;
 	return `${held}; ${at[height]}`;
 }
 
-/** Short and long plain-text summaries, written from the report itself. */
+/**
+ * Short and long plain-text summaries, written from the report itself in the units asked for.
+ * Explanations quoted from the checks (route reasons, notes, notices) keep their SI figures.
+ */
 function summarise(
 	model: CaseModel,
 	r: CheckReport,
-	restraint: string,
-	date?: string
+	restraintIn: (units: SummaryUnits) => string,
+	options: ReportOptions
 ): { short: string; long: string } {
 	const a = r.answer;
+	const units = options.units ?? 'si';
 	const input = {
 		title: model.title,
 		place: model.place,
-		date,
+		date: options.date,
+		units,
+		basis: r.design.basis,
 		spans: model.beam.spans.map(mmToM),
 		supports: model.beam.supports,
 		section: [...new Set(model.sections.map((s) => s.designation))].join(' / '),
@@ -144,42 +166,44 @@ function summarise(
 				? { label: a.governing.label, utilisation: a.utilisation }
 				: null,
 		reserve: a.reserve === null ? null : a.reserve * 100,
-		allowable: a.allowable.map(describeAllowable),
-		restraint,
+		allowable: a.allowable.map((t) => describeAllowable(t, units)),
+		restraint: restraintIn(units),
 		checks: r.checks.map((c) => ({
 			label: c.label,
 			clause: c.clause,
 			utilisation: c.utilisation,
 			pass: c.pass,
 			level: c.level,
-			details: describeKeys(c)
+			details: describeKeys(c, units)
 		})),
 		governingArrangement: r.design.governingArrangement ?? undefined,
 		notice: r.notices[0] ?? '',
 		notices: r.notices.slice(1),
-		assumptions: r.assumptions
+		// The first assumption is the restraint, already a line of its own in the summary's units.
+		assumptions: r.assumptions.slice(1)
 	};
 	return { short: writeShortSummary(input), long: writeLongSummary(input) };
 }
 
-const KEY_LABELS: Record<string, [string, string]> = {
-	vEd: ['VEd', 'kN'],
-	vRd: ['Vpl,Rd', 'kN'],
-	mEd: ['MEd', 'kNm'],
-	mcr: ['Mcr', 'kNm'],
-	chiLT: ['χLT', ''],
-	mbRd: ['Mb,Rd', 'kNm'],
-	myVRd: ['My,V,Rd', 'kNm'],
-	fEd: ['FEd', 'kN'],
-	fRd: ['FRd', 'kN'],
-	deflection: ['deflection', 'mm'],
-	allowed: ['allowed', 'mm']
+/** Key numbers of a check row: the name shown and the kind of quantity (null: no unit). */
+const KEY_LABELS: Record<string, [string, SummaryQuantity | null]> = {
+	vEd: ['VEd', 'force'],
+	vRd: ['Vpl,Rd', 'force'],
+	mEd: ['MEd', 'moment'],
+	mcr: ['Mcr', 'moment'],
+	chiLT: ['χLT', null],
+	mbRd: ['Mb,Rd', 'moment'],
+	myVRd: ['My,V,Rd', 'moment'],
+	fEd: ['FEd', 'force'],
+	fRd: ['FRd', 'force'],
+	deflection: ['deflection', 'small'],
+	allowed: ['allowed', 'small']
 };
 
-function describeKeys(c: Record<string, unknown>): string[] {
-	return Object.entries(KEY_LABELS).flatMap(([k, [name, unit]]) => {
+function describeKeys(c: Record<string, unknown>, units: SummaryUnits): string[] {
+	return Object.entries(KEY_LABELS).flatMap(([k, [name, q]]) => {
 		const v = c[k];
 		if (typeof v !== 'number') return [];
-		return [`${name} ${Number(v.toPrecision(3))}${unit ? ` ${unit}` : ''}`];
+		return [`${name} ${q ? formatIn(v, q, units) : Number(v.toPrecision(3))}`];
 	});
 }

@@ -104,6 +104,18 @@ export interface CapacityCurveReport {
 	min: { x: number; p: number; governing: { id: string; label: string } | null } | null;
 }
 
+/**
+ * The elastic design moments the elastic route rests on (governing arrangement, design loads as
+ * entered) and the resistance each stretch is checked against: x, from, to in m; M, value in kNm.
+ */
+export interface DesignMomentsReport {
+	label: string;
+	arrangement: string;
+	x: number[];
+	M: number[];
+	limits: { from: number; to: number; value: number; label: string }[];
+}
+
 /** Elastic action effects under the unfactored (characteristic) loads; null parts say why. */
 export interface EffectsReport {
 	/** kNm, x in m. */
@@ -178,6 +190,8 @@ export interface CheckReport {
 	design: DesignCheckReport;
 	/** Plastic collapse in bending (partial result); null outside scope or off the plastic path. */
 	collapse: CollapseReport | null;
+	/** Elastic design moments and their limits, on the elastic routes; null otherwise. */
+	designMoments: DesignMomentsReport | null;
 	/** The governing capacity curve, when asked for; null outside scope. */
 	capacityCurve: CapacityCurveReport | null;
 	/** Elastic moments and deflections under the unfactored loads (action effects). */

@@ -38,6 +38,13 @@ export interface ReportView {
 		resistance: { from: number; to: number; sagging: number; hogging: number }[];
 		message: string | null;
 	} | null;
+	/** Elastic design moments (kNm, x m) and their limits, where the elastic route decides. */
+	designMoments: {
+		arrangement: string;
+		x: number[];
+		M: number[];
+		limits: { from: number; to: number; value: number; label: string }[];
+	} | null;
 	/** The governing capacity curve: x m, p kN (null where nothing limits it). */
 	capacityCurve: {
 		points: { x: number; p: number | null; governing: string | null }[];
