@@ -39,7 +39,6 @@ export function checkCase(json: unknown, options: ReportOptions = {}): CheckOutc
 	const parsed = parseCase(json);
 	if (!parsed.ok) return { ok: false, issues: parsed.issues };
 	const design = runDesign(parsed.value, { curve: options.curve });
-	if (!design.ok) return { ok: false, issues: design.issues };
-	const report = buildCheckReport(parsed.value, design.value, options);
+	const report = buildCheckReport(parsed.value, design, options);
 	return { ok: true, report, warnings: parsed.warnings };
 }

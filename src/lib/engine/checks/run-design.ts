@@ -4,9 +4,6 @@
  * pipeline can answer the same question differently.
  */
 import type { CaseModel } from '../case/types';
-import { validateCollapseProblem } from '../collapse/index';
-import type { InputIssue } from '../model/issue';
-import { buildCapacity } from './capacity';
 import type { DesignBasis } from './design-basis';
 import type { FactorSettings } from './basis-types';
 import { DEFAULT_BASIS } from './bases';
@@ -41,24 +38,14 @@ export interface DesignOptions {
 }
 
 /**
- * Runs the design checks of a validated case and decides the answer.
+ * Runs the design checks of a validated case (parseCase has refused anything the solvers could
+ * not take) and decides the answer.
  * @example
- * const out = runDesign(model);
- * out.ok && out.value.answer.multiplier // the largest factor every deciding check allows
+ * runDesign(model).answer.multiplier // the largest factor every deciding check allows
  */
-export function runDesign(
-	model: CaseModel,
-	options: DesignOptions = {}
-): { ok: true; value: DesignOutcome } | { ok: false; issues: InputIssue[] } {
+export function runDesign(model: CaseModel, options: DesignOptions = {}): DesignOutcome {
 	const basis = options.basis ?? DEFAULT_BASIS;
 	const input = buildDesignCheckInput(model);
-	const refused = validateCollapseProblem({
-		beam: input.beam,
-		capacity: buildCapacity(input.beam.spans, input.beam.spans.map(() => 1)),
-		fixedLoads: input.loads.filter((l) => l.action !== 'temporary'),
-		variableLoads: input.loads.filter((l) => l.action === 'temporary')
-	}).filter((i) => i.severity === 'error');
-	if (refused.length > 0) return { ok: false, issues: refused };
 	const run = (i: DesignCheckInput) => runDesignChecks(i, basis);
 	const checked = run(input);
 	const answer = decideAnswer(checked, model.loads);
@@ -67,5 +54,5 @@ export function runDesign(
 	const sectionClasses = model.sections.map((sec, e) =>
 		basis.classifySection(sec, model.grades[e]?.fy ?? 235)
 	);
-	return { ok: true, value: { input, sectionClasses, checked, answer, curve } };
+	return { input, sectionClasses, checked, answer, curve };
 }
