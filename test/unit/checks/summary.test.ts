@@ -3,6 +3,7 @@
  * characters a messaging app renders as markup). Demo data, invented.
  */
 import { describe, expect, it } from 'vitest';
+import { checkCase, type CaseFile } from '../../../src/lib/engine';
 import { isPlainText, toPlainText } from '../../../src/lib/engine/report/plain-text';
 import {
 	SHORT_SUMMARY_LIMIT,
@@ -72,5 +73,77 @@ describe('writeLongSummary', () => {
 		expect(s).toContain('Shear (EN 1993-1-1 6.2.6): 7 % ok; VEd 23.7 kN');
 		expect(s).toContain('Ductile steel.');
 		expect(isPlainText(s)).toBe(true);
+	});
+});
+
+/** US customary from the definitions: 1 in = 25.4 mm, 1 lbf = 0.453 592 37 kg × 9.806 65 m/s². */
+const FT_M = 12 * 0.0254;
+const KIP_KN = (1000 * 0.45359237 * 9.80665) / 1000;
+const sig3 = (v: number) => String(Number(v.toPrecision(3)));
+
+describe('summary units', () => {
+	const restrained: CaseFile = {
+		format: 'hingepoint.case',
+		version: 1,
+		title: 'Demo: hoist beam (invented)',
+		beam: {
+			spans: [6],
+			supports: ['pin', 'pin'],
+			section: { designation: 'UB 305x165x40' },
+			grade: 'S275',
+			restraint: { lateral: [3], loadHeight: 'top-flange' }
+		},
+		loads: [
+			{ kind: 'uniform', from: 0, to: 6, value: 4, action: 'permanent' },
+			{ kind: 'point', x: 3, value: 10, action: 'temporary', label: 'hoist' }
+		]
+	};
+	const run = (units: 'si' | 'us') => {
+		const out = checkCase(restrained, { units });
+		if (!out.ok) throw new Error('the demo case is valid');
+		return out.report;
+	};
+	const si = run('si');
+	const us = run('us');
+
+	it('writes the entered loads and spans in kip and ft (10 kN → 2.25 kip, 6 m → 19.7 ft)', () => {
+		expect(sig3(10 / KIP_KN)).toBe('2.25');
+		expect(sig3(6 / FT_M)).toBe('19.7');
+		expect(si.summary.long).toContain('hoist temporary 10 kN at 3 m');
+		expect(us.summary.long).toContain(`hoist temporary 2.25 kip at ${sig3(3 / FT_M)} ft`);
+		expect(us.summary.long).toContain('Beam: 19.7 ft (pin-pin)');
+		expect(us.summary.long).toContain(`permanent ${sig3(4 / (KIP_KN / FT_M))} kip/ft from 0 to 19.7 ft`);
+		expect(us.summary.long).toContain('Units: US customary');
+		// Route reasons, notices and assumptions quote the checks' own SI words; the rest is US.
+		const long = us.summary.long;
+		const own = long.slice(0, long.indexOf('Notices:')).split('\n').filter((l) => !l.startsWith('Route:'));
+		expect(own.length).toBeGreaterThan(10);
+		expect(own.join('\n')).not.toMatch(/\d (kN|kNm|kN\/m|m|mm)\b/);
+	});
+
+	it('gives the same largest proposed load, converted from the SI answer', () => {
+		const allowed = si.answer.allowable[0].value;
+		expect(allowed).not.toBeNull();
+		expect(si.summary.short).toContain(`Largest proposed load: ${sig3(allowed!)} kN (load 2, hoist)`);
+		expect(us.summary.short).toContain(`Largest proposed load: ${sig3(allowed! / KIP_KN)} kip (load 2, hoist)`);
+	});
+
+	it('writes moments in kip·ft and the restraint position in ft', () => {
+		const bending = si.checks.find((c) => typeof c.mEd === 'number');
+		expect(bending).toBeDefined();
+		expect(us.summary.long).toContain(`MEd ${sig3((bending!.mEd as number) / (KIP_KN * FT_M))} kip·ft`);
+		expect(si.summary.long).toContain('held laterally at the supports and at 3 m');
+		expect(us.summary.long).toContain(`at the supports and at ${Number((3 / FT_M).toPrecision(4))} ft`);
+		expect(us.summary.short).toContain('Restraint: compression flange held laterally');
+	});
+
+	it('states the basis and factor set in a sentence', () => {
+		expect(si.summary.short).toMatch(/Checked to .+, with the factor set EN 1990 expression 6\.10\./);
+		expect(us.summary.long).toContain(`Checked to ${si.design.basis}`);
+	});
+
+	it('changes only the texts: the JSON stays in SI', () => {
+		expect(us.summary.long).not.toBe(si.summary.long);
+		expect({ ...us, summary: null }).toEqual({ ...si, summary: null });
 	});
 });

@@ -4,7 +4,7 @@
  */
 import type { Answer, AllowableLoad } from '../checks/answer';
 import { nPerMmToKNPerM, nToKN } from '../units';
-import { formatNumber } from './summary';
+import { formatIn, type SummaryUnits } from './summary-units';
 import type { AllowableLoadReport, AnswerReport } from './types';
 
 const SCREENING = 'Within capacity for the inputs entered — screening only, not an approval.';
@@ -44,15 +44,19 @@ function reportAllowable(a: AllowableLoad, label: string | null): AllowableLoadR
 	};
 }
 
-/** "19.3 kN (load 3, hoist)", "58 kN upward (load 2)", "relieves the beam (load 2)". */
-export function describeAllowable(a: AllowableLoadReport): string {
+/**
+ * "19.3 kN (load 3, hoist)", "58 kN upward (load 2)", "relieves the beam (load 2)"; in US
+ * customary units "4.34 kip (load 3, hoist)".
+ */
+export function describeAllowable(a: AllowableLoadReport, units: SummaryUnits = 'si'): string {
 	const who = `load ${a.load + 1}${a.label ? `, ${a.label}` : ''}`;
 	if (a.value === null) {
 		const what = a.effect === 'relieves' ? 'relieves the beam' : 'not limited by any check made';
 		return `${what} (${who})`;
 	}
 	const up = a.direction === 'up' ? ' upward' : '';
-	return `${formatNumber(a.value)} ${a.unit}${up} (${who})`;
+	const size = formatIn(a.value, a.unit === 'kN' ? 'force' : 'lineLoad', units);
+	return `${size}${up} (${who})`;
 }
 
 /** The one sentence under the verdict. */
@@ -70,7 +74,7 @@ function writeMessage(answer: Answer, allowable: AllowableLoadReport[]): string 
 		parts.push('No temporary load can be added: the existing loads already use the capacity.');
 	} else if (allowable.length > 0) {
 		const many = allowable.length > 1;
-		const list = allowable.map(describeAllowable).join('; ');
+		const list = allowable.map((a) => describeAllowable(a)).join('; ');
 		parts.push(`Largest proposed load${many ? 's, together' : ''}: ${list}.`);
 	}
 	if (answer.existingFail && answer.verdict === 'fail') parts.push(EXISTING_FAIL);

@@ -1,10 +1,20 @@
 /**
  * Text for sharing a result: a short message (under about 600 characters) and a long form with
  * every input and check. Plain text only (see plain-text.ts). The date comes in as text: the
- * engine has no clock. Numbers arrive in output units (m, kN, kN/m, kNm, mm).
+ * engine has no clock. Numbers arrive in output units (m, kN, kN/m, kNm, mm) and are written in
+ * the units asked for (see summary-units.ts).
  */
 import { toPlainText } from './plain-text';
+import {
+	convertTo,
+	formatIn,
+	formatNumber,
+	UNITS_WORDS,
+	type SummaryUnits
+} from './summary-units';
 import type { VerdictKind } from '../checks/types';
+
+export { formatNumber } from './summary-units';
 
 /** Longest short message, characters. */
 export const SHORT_SUMMARY_LIMIT = 600;
@@ -29,7 +39,7 @@ export interface SummaryCheck {
 	utilisation: number;
 	pass: boolean;
 	level: 'governing' | 'warning';
-	/** Key numbers already formatted with their units, e.g. `VEd 65.2 kN`. */
+	/** Key numbers already formatted in the summary's units, e.g. `VEd 65.2 kN`. */
 	details: string[];
 }
 
@@ -45,6 +55,10 @@ export interface SummaryInput {
 	section: string;
 	grade: string;
 	loads: SummaryLoad[];
+	/** Units the numbers are written in (default SI); every number here arrives in SI. */
+	units?: SummaryUnits;
+	/** The design basis in words, e.g. `EN 1990 / EN 1993-1-1 (recommended values)`. */
+	basis?: string;
 	/** Name of the factor set and its values. */
 	factorSet: string;
 	factors: Record<string, number>;
@@ -56,9 +70,9 @@ export interface SummaryInput {
 	governing: { label: string; utilisation: number } | null;
 	/** %: (multiplier − 1) × 100 of the governing answer. */
 	reserve: number | null;
-	/** Largest proposed loads, already in words: e.g. `19.3 kN (load 3, hoist)`. */
+	/** Largest proposed loads, already in words and units: e.g. `19.3 kN (load 3, hoist)`. */
 	allowable: string[];
-	/** Lateral restraint and load height, in words. */
+	/** Lateral restraint and load height, in words and units. */
 	restraint?: string;
 	checks: SummaryCheck[];
 	governingArrangement?: string;
@@ -73,23 +87,26 @@ const VERDICT_WORDS: Record<VerdictKind, string> = {
 	'outside-scope': 'OUTSIDE SCOPE (no capacity given)'
 };
 
-/** Rounds to 3 significant figures, plain notation. */
-export function formatNumber(v: number): string {
-	if (!Number.isFinite(v)) throw new Error('invariant: summary numbers are finite');
-	return Number(v.toPrecision(3)).toString();
-}
-
-function describeLoad(l: SummaryLoad): string {
+function describeLoad(l: SummaryLoad, units: SummaryUnits = 'si'): string {
 	const who = l.label ? `${l.label} ` : '';
-	const v = formatNumber(l.value);
-	if (l.kind === 'point') return `${who}${l.action} ${v} kN at ${formatNumber(l.at ?? 0)} m`;
-	const [a, b] = [formatNumber(l.from ?? 0), formatNumber(l.to ?? 0)];
-	return `${who}${l.action} ${v} kN/m from ${a} to ${b} m`;
+	if (l.kind === 'point') {
+		const [v, at] = [formatIn(l.value, 'force', units), formatIn(l.at ?? 0, 'length', units)];
+		return `${who}${l.action} ${v} at ${at}`;
+	}
+	const from = formatNumber(convertTo(l.from ?? 0, 'length', units));
+	const to = formatIn(l.to ?? 0, 'length', units);
+	return `${who}${l.action} ${formatIn(l.value, 'lineLoad', units)} from ${from} to ${to}`;
 }
 
 function describeBeam(s: SummaryInput): string {
-	const spans = s.spans.map((L) => `${formatNumber(L)} m`).join(' + ');
+	const spans = s.spans.map((L) => formatIn(L, 'length', s.units ?? 'si')).join(' + ');
 	return `${spans} (${s.supports.join('-')}), ${s.section}, ${s.grade}`;
+}
+
+/** The basis and factor set as one sentence. */
+function describeFactors(s: SummaryInput): string {
+	const basis = s.basis ? `Checked to ${s.basis}` : 'Checked';
+	return `${basis}, with the factor set ${s.factorSet}.`;
 }
 
 function describeResult(s: SummaryInput): string {
@@ -112,7 +129,7 @@ function describeResult(s: SummaryInput): string {
  */
 export function writeShortSummary(s: SummaryInput): string {
 	const head = [s.title || 'Beam check', [s.place, s.date].filter(Boolean).join(', ')];
-	const loads = `Loads: ${s.loads.map(describeLoad).join('; ')}`;
+	const loads = `Loads: ${s.loads.map((l) => describeLoad(l, s.units)).join('; ')}`;
 	const many = s.allowable.length > 1 ? 's, together' : '';
 	const allow = s.allowable.length ? `Largest proposed load${many}: ${s.allowable.join('; ')}` : '';
 	const build = (withLoads: boolean, withAllow: boolean, withPlace: boolean) =>
@@ -122,7 +139,7 @@ export function writeShortSummary(s: SummaryInput): string {
 				`Beam: ${describeBeam(s)}`,
 				s.restraint ? `Restraint: ${s.restraint}` : '',
 				withLoads ? loads : '',
-				`Factors: ${s.factorSet}`,
+				describeFactors(s),
 				`Result: ${describeResult(s)}`,
 				withAllow ? allow : '',
 				s.notice
@@ -154,11 +171,13 @@ export function writeLongSummary(s: SummaryInput): string {
 		s.title || 'Beam check',
 		[s.place, s.date].filter(Boolean).join(', '),
 		'',
+		`Units: ${UNITS_WORDS[s.units ?? 'si']}.`,
 		`Beam: ${describeBeam(s)}`,
 		s.restraint ? `Restraint: ${s.restraint}` : '',
 		'Loads (characteristic):',
-		...s.loads.map((l) => `  • ${describeLoad(l)}`),
-		`Factors: ${s.factorSet}; ${Object.entries(s.factors).map(([k, v]) => `${k} ${v}`).join(', ')}`,
+		...s.loads.map((l) => `  • ${describeLoad(l, s.units)}`),
+		describeFactors(s),
+		`Factors: ${Object.entries(s.factors).map(([k, v]) => `${k} ${v}`).join(', ')}`,
 		s.governingArrangement ? `Governing load arrangement: ${s.governingArrangement}` : '',
 		'',
 		`Result: ${describeResult(s)}`,

@@ -31,8 +31,9 @@ export type CheckSource = 'saved' | 'link' | 'draft' | 'demo' | 'blank';
 export class CheckSession {
 	readonly drafts = new DraftKeeper();
 	readonly engine = new EngineRunner();
-	readonly form = new CheckForm({
-		run: (c) => this.engine.run(c),
+	readonly form: CheckForm = new CheckForm({
+		// The share texts come in the units the form shows.
+		run: (c) => this.engine.run(c, this.form.units === 'US' ? 'us' : 'si'),
 		onchange: (draft) => this.drafts.queue(draft)
 	});
 	/** The engine, once loaded. */

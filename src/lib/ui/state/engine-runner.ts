@@ -42,6 +42,8 @@ interface Request {
 	case: CaseFile;
 	/** The case as JSON: a newer request for the same case shares this one's answer. */
 	key: string;
+	/** Units of the share texts. */
+	units?: 'si' | 'us';
 	resolve: (outcome: CheckOutcome) => void;
 }
 
@@ -97,11 +99,11 @@ export class EngineRunner {
 		this.#ensurePort();
 	}
 
-	/** Checks one plain (snapshot) case; always resolves. */
-	run(c: CaseFile): Promise<CheckOutcome> {
-		if (this.#onPage) return this.#runHere(c);
+	/** Checks one plain (snapshot) case, share texts in `units`; always resolves. */
+	run(c: CaseFile, units?: 'si' | 'us'): Promise<CheckOutcome> {
+		if (this.#onPage) return this.#runHere(c, units);
 		const seq = ++this.#seq;
-		const key = keyOf(c, seq);
+		const key = `${units ?? 'si'} ${keyOf(c, seq)}`;
 		return new Promise((resolve) => {
 			// The same case again (e.g. opened, then saved as a draft) waits for the answer in progress.
 			const same = [this.#running, this.#next].find((r) => r?.key === key);
@@ -117,7 +119,7 @@ export class EngineRunner {
 				};
 				return;
 			}
-			this.#next = { seq, case: c, key, resolve };
+			this.#next = { seq, case: c, key, units, resolve };
 			this.#pump();
 		});
 	}
@@ -150,14 +152,14 @@ export class EngineRunner {
 		this.#next = null;
 		const port = this.#ensurePort();
 		if (!port) {
-			void this.#runHere(request.case).then(request.resolve);
+			void this.#runHere(request.case, request.units).then(request.resolve);
 			return;
 		}
 		const limit = this.#limit;
 		const timer = setTimeout(() => this.#stopWorker(failed(tooLongMessage(limit))), limit);
 		this.#running = { ...request, started: Date.now(), timer };
 		try {
-			port.postMessage({ seq: request.seq, json: request.case });
+			port.postMessage({ seq: request.seq, json: request.case, units: request.units });
 		} catch (error) {
 			// The case could not be copied to the worker (e.g. nested too deeply).
 			this.#finish(failed(`the case could not be passed to the engine (${describe(error)}).`));
@@ -233,7 +235,7 @@ export class EngineRunner {
 			this.#running = null;
 			if (running) {
 				clearTimeout(running.timer);
-				void this.#runHere(running.case).then(running.resolve);
+				void this.#runHere(running.case, running.units).then(running.resolve);
 			}
 			this.#pump();
 			return;
@@ -243,10 +245,10 @@ export class EngineRunner {
 		this.#stopWorker(failed(`${stopped} Change an input to run the check again.`));
 	}
 
-	async #runHere(c: CaseFile): Promise<CheckOutcome> {
+	async #runHere(c: CaseFile, units?: 'si' | 'us'): Promise<CheckOutcome> {
 		try {
 			const { checkCase } = await import('$lib/engine');
-			return runCheck(checkCase, c);
+			return runCheck(checkCase, c, units);
 		} catch (error) {
 			return failed(`the engine could not be loaded (${describe(error)}). Reload the page.`);
 		}

@@ -10,6 +10,8 @@ import { checkCase } from '$lib/engine';
 export interface EngineRequest {
 	seq: number;
 	json: unknown;
+	/** Units of the share texts (the report's numbers stay SI). */
+	units?: 'si' | 'us';
 }
 
 /**
@@ -28,7 +30,7 @@ self.onmessage = (event: MessageEvent<EngineRequest>) => {
 	const seq = typeof event.data?.seq === 'number' ? event.data.seq : 0;
 	let reply: EngineReply;
 	try {
-		reply = { seq, result: checkCase(event.data.json, { curve: true }) };
+		reply = { seq, result: checkCase(event.data.json, { curve: true, units: event.data.units }) };
 	} catch (error) {
 		reply = { seq, error: describe(error) };
 	}

@@ -13,12 +13,16 @@ export function toCheckOutcome(result: EngineOutcome): CheckOutcome {
 }
 
 /**
- * Runs the engine once on a plain (snapshot) case, with the capacity curve. A thrown error is a
- * broken invariant in the engine: it is shown plainly and never as a verdict.
+ * Runs the engine once on a plain (snapshot) case, with the capacity curve and the share texts in
+ * `units`. A thrown error is a broken invariant in the engine: it is shown plainly, never as a verdict.
  */
-export function runCheck(checkCase: (json: unknown, options?: { curve?: boolean }) => EngineOutcome, c: CaseFile): CheckOutcome {
+export function runCheck(
+	checkCase: (json: unknown, options?: { curve?: boolean; units?: 'si' | 'us' }) => EngineOutcome,
+	c: CaseFile,
+	units?: 'si' | 'us'
+): CheckOutcome {
 	try {
-		return toCheckOutcome(checkCase(c, { curve: true }));
+		return toCheckOutcome(checkCase(c, { curve: true, units }));
 	} catch (error) {
 		return { state: 'error', message: error instanceof Error ? error.message : String(error) };
 	}
