@@ -76,7 +76,7 @@ function buildCompatibilityRows(beam: BeamLine, hinges: Kink[]): number[][] {
 		if (s === 'free') return;
 		const x = X[node];
 		rows.push([
-			...all.map((k, i) => (k.x < x ? -(x - k.x) : 0)).slice(0, hinges.length),
+			...all.map((k) => (k.x < x ? -(x - k.x) : 0)).slice(0, hinges.length),
 			1,
 			x,
 			...joints.map((j) => (j.x < x ? -(x - j.x) : 0))

@@ -16,6 +16,7 @@ export class NoticeAcknowledgement {
 	acknowledge(): void {
 		this.acknowledged = true;
 		try {
+			// eslint-disable-next-line svelte/prefer-svelte-reactivity -- a one-off timestamp, not state
 			localStorage.setItem(KEY, new Date().toISOString());
 		} catch {
 			// Storage blocked: the notice will simply show again next time.

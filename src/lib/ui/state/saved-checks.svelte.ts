@@ -88,6 +88,7 @@ export class SavedChecks {
 		}
 		if (!this.#purged) {
 			this.#purged = true;
+			// eslint-disable-next-line svelte/prefer-svelte-reactivity -- a one-off cut-off date, not state
 			const before = new Date(Date.now() - KEEP_DELETED_DAYS * 86_400_000);
 			// A failed purge loses nothing: the deleted checks simply stay until the next visit.
 			await purgeDeleted(store, { before });
@@ -154,6 +155,7 @@ export class SavedChecks {
 	}
 
 	/** The backup as text with a file name, or null (message set) when it could not be made. */
+	// eslint-disable-next-line svelte/prefer-svelte-reactivity -- a one-off timestamp, not state
 	async exportAll(now = new Date()): Promise<{ name: string; text: string } | null> {
 		const store = await this.#connect();
 		if (!store) return null;

@@ -3,7 +3,7 @@
  * (EN 1993-1-1 5.5, 5.6 and 6.2), material ductility (3.2.2) and member stability at hinges
  * (6.3.5), and what puts a beam outside this tool.
  */
-import type { SectionClass, ScopeInput, ScopeDecision } from '../basis-types';
+import type { ScopeInput, ScopeDecision } from '../basis-types';
 export type { SectionClass, ScopeInput, ScopeDecision } from '../basis-types';
 
 /**

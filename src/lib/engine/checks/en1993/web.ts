@@ -16,7 +16,7 @@
  * which covers that whole zone with margin. The model has no end stiffeners, so every beam end
  * counts as unstiffened.
  */
-import type { WebLoadType, WebResistanceInput, WebForceInput, WebResistance } from '../basis-types';
+import type { WebResistanceInput, WebForceInput, WebResistance } from '../basis-types';
 export type { WebLoadType, WebResistanceInput, WebForceInput, WebResistance } from '../basis-types';
 
 /**
