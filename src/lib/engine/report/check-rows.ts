@@ -15,22 +15,47 @@ export const FACTOR_SET_WORDS: Record<string, string> = {
 	custom: 'own factors'
 };
 
-/** How each key number converts from internal units. */
-const KEY_UNITS: Record<string, (v: number) => number> = {
-	vEd: nToKN,
-	vRd: nToKN,
-	fEd: nToKN,
-	fRd: nToKN,
-	mEd: nmmToKNm,
-	mcr: nmmToKNm,
-	mbRd: nmmToKNm,
-	myVRd: nmmToKNm,
-	mRd: nmmToKNm,
-	mpRd: nmmToKNm,
-	from: mmToM,
-	to: mmToM,
-	span: mmToM
+const same = (v: number): number => v;
+
+/**
+ * Every key number a check row may carry, with its output unit and conversion from internal
+ * units. A test keeps this list complete, so no N·mm or N can leak into the report.
+ */
+export const ROW_KEY_UNITS: Record<string, { unit: string; convert: (v: number) => number }> = {
+	vEd: { unit: 'kN', convert: nToKN },
+	vRd: { unit: 'kN', convert: nToKN },
+	fEd: { unit: 'kN', convert: nToKN },
+	fRd: { unit: 'kN', convert: nToKN },
+	mEd: { unit: 'kNm', convert: nmmToKNm },
+	mRd: { unit: 'kNm', convert: nmmToKNm },
+	mcr: { unit: 'kNm', convert: nmmToKNm },
+	mbRd: { unit: 'kNm', convert: nmmToKNm },
+	myVRd: { unit: 'kNm', convert: nmmToKNm },
+	from: { unit: 'm', convert: mmToM },
+	to: { unit: 'm', convert: mmToM },
+	span: { unit: 'm', convert: mmToM },
+	deflection: { unit: 'mm', convert: same },
+	allowed: { unit: 'mm', convert: same },
+	ss: { unit: 'mm', convert: same },
+	c: { unit: 'mm', convert: same },
+	ly: { unit: 'mm', convert: same },
+	lEff: { unit: 'mm', convert: same },
+	kF: { unit: '', convert: same },
+	chiF: { unit: '', convert: same },
+	eta1: { unit: '', convert: same },
+	eta2: { unit: '', convert: same },
+	rho: { unit: '', convert: same },
+	chiLT: { unit: '', convert: same },
+	chiLTGeneral: { unit: '', convert: same },
+	lambdaLT: { unit: '', convert: same },
+	loadFactor: { unit: '', convert: same }
 };
+
+
+/** The unit entry of a row key; numbered keys (vEd1, myVRd2 …) read like their stem. */
+export function findRowKeyUnit(key: string): (typeof ROW_KEY_UNITS)[string] | undefined {
+	return ROW_KEY_UNITS[key] ?? ROW_KEY_UNITS[key.replace(/\d+$/, '')];
+}
 
 /** One check row as reported. */
 export interface CheckRowReport {
@@ -68,8 +93,7 @@ export interface DesignCheckReport {
 export function reportCheckRow(c: CheckResult): CheckRowReport {
 	const keys: Record<string, number> = {};
 	for (const [k, v] of Object.entries(c.values)) {
-		// Numbered keys (vEd1, myVRd2 …) convert like their stem.
-		const convert = KEY_UNITS[k.replace(/\d+$/, '')] ?? ((n: number) => n);
+		const convert = findRowKeyUnit(k)?.convert ?? same;
 		keys[k] = assertFinite(convert(v), `check ${c.id}.${k}`);
 	}
 	return {
