@@ -44,23 +44,31 @@ export function solveCollapseForInformation(
 	ctx: CheckContext,
 	o: { arrangement: LoadArrangement; vRd: (number | null)[] }
 ): CollapseSummary {
+	return summariseCollapse(solveArrangement(ctx, o.arrangement, o.vRd));
+}
+
+/** One arrangement's collapse with Mp,Rd = Mp/γM0 and the shear reduction at its hinges. */
+function solveArrangement(
+	ctx: CheckContext,
+	arrangement: LoadArrangement,
+	vRd: (number | null)[]
+): PlasticArrangement {
 	const capacity = buildCapacity(ctx.beam.spans, ctx.members.map((m) => m.mp / ctx.gammaM0));
-	const d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement: o.arrangement });
-	const p = solvePlasticArrangement({
+	const d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement });
+	return solvePlasticArrangement({
 		basis: ctx.basis,
 		beam: ctx.beam,
 		members: ctx.members,
 		nodes: ctx.nodes,
 		capacity,
-		arrangement: o.arrangement,
+		arrangement,
 		fixedLoads: d.fixed,
 		variableLoads: d.variable,
 		effects: ctx.effects,
 		released: ctx.released,
-		vplRd: o.vRd,
+		vplRd: vRd,
 		gammaM0: ctx.gammaM0
 	});
-	return summariseCollapse(p);
 }
 
 /** The report's view of one arrangement's collapse. */
@@ -84,23 +92,8 @@ export function runPlasticRoute(
 	ctx: CheckContext,
 	o: { segments: RestraintSegment[]; vRd: (number | null)[]; scopeBase: ScopeInput }
 ): PlasticRouteOutcome {
-	const capacity = buildCapacity(ctx.beam.spans, ctx.members.map((m) => m.mp / ctx.gammaM0));
 	const all = ctx.arrangements.map((arrangement) => {
-		const d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement });
-		const p = solvePlasticArrangement({
-			basis: ctx.basis,
-			beam: ctx.beam,
-			members: ctx.members,
-			nodes: ctx.nodes,
-			capacity,
-			arrangement,
-			fixedLoads: d.fixed,
-			variableLoads: d.variable,
-			effects: ctx.effects,
-			released: ctx.released,
-			vplRd: o.vRd,
-			gammaM0: ctx.gammaM0
-		});
+		const p = solveArrangement(ctx, arrangement, o.vRd);
 		ctx.plastic.set(arrangement, p);
 		return p;
 	});
