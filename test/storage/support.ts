@@ -76,3 +76,14 @@ export function stubEngine(engineVersion = 'stub-1') {
 	};
 	return { engineVersion, recompute, calls };
 }
+
+/**
+ * A stand-in photo: the bytes a JPEG file starts with, then `size` bytes that differ by `seed`.
+ * Storage checks only the type's opening bytes; no test here decodes the picture.
+ */
+export function jpegBlob(seed = 1, size = 64): Blob {
+	const bytes = new Uint8Array(size + 4);
+	bytes.set([0xff, 0xd8, 0xff, 0xe0]);
+	for (let i = 0; i < size; i++) bytes[4 + i] = (seed * 31 + i * 7) & 0xff;
+	return new Blob([bytes], { type: 'image/jpeg' });
+}

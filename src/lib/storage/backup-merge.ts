@@ -11,12 +11,19 @@ export interface ImportCounts {
 	skipped: number;
 	/** Of those added, how many did not pass validation (listed as needing attention). */
 	attention: number;
+	/** Photos added (to the checks added, kept beside, or already here). */
+	photos: number;
 }
 
 /** The records to add and the counts to report. */
 export interface ImportPlan {
 	writes: CheckRecord[];
 	counts: ImportCounts;
+	/**
+	 * Where each incoming check ended up, by its id in the file: its own id, the id of the copy
+	 * kept beside, or the id of the check already here with the same content. Its photos follow.
+	 */
+	targets: Map<string, string>;
 }
 
 /**
@@ -35,13 +42,17 @@ export function planImport(
 	newId: () => string
 ): ImportPlan {
 	const ids = new Set(existing.map((r) => r.id));
-	const contents = new Set(existing.filter((r) => r.deletedAt === null).map(contentKey));
-	const counts: ImportCounts = { added: 0, beside: 0, skipped: 0, attention: 0 };
+	const live = existing.filter((r) => r.deletedAt === null);
+	const contents = new Map(live.map((r) => [contentKey(r), r.id]));
+	const counts: ImportCounts = { added: 0, beside: 0, skipped: 0, attention: 0, photos: 0 };
 	const writes: CheckRecord[] = [];
+	const targets = new Map<string, string>();
 	for (const record of incoming) {
 		const key = contentKey(record);
-		if (contents.has(key)) {
+		const here = contents.get(key);
+		if (here !== undefined) {
 			counts.skipped += 1;
+			targets.set(record.id, here);
 			continue;
 		}
 		const taken = ids.has(record.id);
@@ -49,10 +60,11 @@ export function planImport(
 		counts[taken ? 'beside' : 'added'] += 1;
 		if (write.computed?.verdict === 'needs-attention') counts.attention += 1;
 		ids.add(write.id);
-		contents.add(key);
+		contents.set(key, write.id);
+		targets.set(record.id, write.id);
 		writes.push(write);
 	}
-	return { writes, counts };
+	return { writes, counts, targets };
 }
 
 function keepBeside(record: CheckRecord, id: string): CheckRecord {

@@ -1,4 +1,5 @@
 import { findHostileShape } from './backup-guard';
+import { readBackupPhotos } from './backup-photos';
 import { isPlainObject } from './case-file';
 import {
 	BACKUP_FORMAT,
@@ -7,14 +8,16 @@ import {
 	MAX_BACKUP_RECORDS
 } from './constants';
 import { upgradeRecord } from './record-upgrade';
-import type { CheckRecord, Revision } from './types';
+import type { CheckRecord, PhotoRecord, Revision } from './types';
 import { findRecordProblem } from './validate-record';
 
 /** Why a backup file was refused. */
 export type BackupRefusal = { ok: false; reason: 'damaged' | 'foreign' | 'newer'; message: string };
 
 /** A backup read and checked in full, its records brought to the current shape. */
-export type ParsedBackup = { ok: true; records: CheckRecord[] } | BackupRefusal;
+export type ParsedBackup =
+	| { ok: true; records: CheckRecord[]; photos: PhotoRecord[] }
+	| BackupRefusal;
 
 /**
  * Reads a backup file's text and checks all of it before anything is written: damaged (not
@@ -70,10 +73,16 @@ export function parseBackup(text: string): ParsedBackup {
 			`This backup lists more than ${MAX_BACKUP_RECORDS} checks, more than any phone holds. Nothing was imported.`
 		);
 	}
-	return readRecords(data.records);
+	const records = readRecords(data.records);
+	if (!records.ok) return records;
+	// Version 1 files had no photos.
+	const ids = new Set(records.records.map((r) => r.id));
+	const photos = readBackupPhotos(data.version === 1 ? undefined : data.photos, ids);
+	if (!photos.ok) return photos;
+	return { ok: true, records: records.records, photos: photos.photos };
 }
 
-function readRecords(raw: unknown[]): ParsedBackup {
+function readRecords(raw: unknown[]): { ok: true; records: CheckRecord[] } | BackupRefusal {
 	const records: CheckRecord[] = [];
 	const seen = new Set<string>();
 	for (let i = 0; i < raw.length; i++) {

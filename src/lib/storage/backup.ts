@@ -1,14 +1,17 @@
 import { planImport, type ImportCounts } from './backup-merge';
 import { parseBackup } from './backup-parse';
-import { BACKUP_FORMAT, BACKUP_VERSION } from './constants';
+import { planPhotos } from './backup-photo-merge';
+import { toBackupPhotos, type BackupPhoto } from './backup-photos';
+import { BACKUP_FORMAT, BACKUP_VERSION, MAX_BACKUP_CHARS } from './constants';
 import type { CheckStore } from './db';
-import { FAILURE_MESSAGES } from './errors';
+import { fail, FAILURE_MESSAGES } from './errors';
 import { createId, stampNow } from './ids';
-import { readFrom, writeTo } from './tx';
-import type { CheckRecord, ClockOptions, ComputedVerdict, StoreResult } from './types';
+import { byAdded, photoRange } from './photos';
+import { readFrom, writeTo, type WriteTx } from './tx';
+import type { CheckRecord, ClockOptions, ComputedVerdict, PhotoRecord, StoreResult } from './types';
 import type { Recompute } from './verdicts';
 
-/** The backup file: every saved check, in our own format. */
+/** The backup file: every saved check and its photos, in our own format. */
 export interface BackupFile {
 	format: typeof BACKUP_FORMAT;
 	version: number;
@@ -17,6 +20,8 @@ export interface BackupFile {
 	appVersion: string;
 	engineVersion: string;
 	records: CheckRecord[];
+	/** Since version 2: the photos of those checks, bytes as base64. */
+	photos: BackupPhoto[];
 }
 
 /** Versions written into the backup, for whoever reads it later. */
@@ -38,7 +43,10 @@ export type ImportResult =
 	| ({ ok: true } & ImportCounts)
 	| { ok: false; reason: 'damaged' | 'foreign' | 'newer' | 'storage'; message: string };
 
-/** Writes every saved check (deleted ones left out) as one JSON text, oldest first. */
+/**
+ * Writes every saved check (deleted ones left out) and their photos as one JSON text, oldest
+ * first. A file too large to be read back is refused with a message rather than written.
+ */
 export async function exportBackup(
 	store: CheckStore,
 	options: ExportOptions
@@ -48,16 +56,29 @@ export async function exportBackup(
 		const records = (await db.getAll('checks'))
 			.filter((r) => r.deletedAt === null)
 			.sort((a, b) => (a.createdAt < b.createdAt ? -1 : a.createdAt > b.createdAt ? 1 : 0));
+		const live = new Set(records.map((r) => r.id));
+		const photos = (await db.getAll('photos')).filter((p) => live.has(p.checkId)).sort(byAdded);
 		const file: BackupFile = {
 			format: BACKUP_FORMAT,
 			version: BACKUP_VERSION,
 			exportedAt,
 			appVersion: options.appVersion,
 			engineVersion: options.engineVersion,
-			records
+			records,
+			photos: toBackupPhotos(photos)
 		};
-		return { ok: true, value: JSON.stringify(file, null, '\t') };
+		const text = JSON.stringify(file, null, '\t');
+		if (text.length > MAX_BACKUP_CHARS) return tooLarge(text.length);
+		return { ok: true, value: text };
 	});
+}
+
+function tooLarge(chars: number): StoreResult<string> {
+	const mb = (n: number) => Math.round(n / 1e6);
+	return fail(
+		'invalid',
+		`With its photos this backup would be about ${mb(chars)} MB, more than the ${mb(MAX_BACKUP_CHARS)} MB one backup can hold. Remove photos from checks you no longer need, then export again. Nothing was changed.`
+	);
 }
 
 /**
@@ -76,12 +97,14 @@ export async function importBackup(
 	if (!parsed.ok) return parsed;
 	// Computed before the transaction opens: it may await, and a transaction must not.
 	const records = await withVerdicts(parsed.records, options);
-	const outcome = await writeTo(store, ['checks'], async (tx) => {
+	const newId = options.newId ?? createId;
+	const outcome = await writeTo(store, ['checks', 'photos'], async (tx) => {
 		const checks = tx.objectStore('checks');
-		const plan = planImport(await checks.getAll(), records, options.newId ?? createId);
+		const plan = planImport(await checks.getAll(), records, newId);
 		// add, never put: a clash with a stored id aborts rather than replaces.
 		for (const record of plan.writes) await checks.add(record);
-		return { ok: true, value: plan.counts };
+		const photos = await addPhotos(tx, parsed.photos, plan.targets, newId);
+		return { ok: true, value: { ...plan.counts, photos } };
 	});
 	if (outcome.ok) return { ok: true, ...outcome.value };
 	const known = ['read-only', 'quota', 'closed'].includes(outcome.reason);
@@ -104,4 +127,23 @@ async function withVerdicts(
 		out.push({ ...record, computed: { verdict, computedBy: options.engineVersion } });
 	}
 	return out;
+}
+
+// Each photo follows its check (see planPhotos); returns how many were added.
+async function addPhotos(
+	tx: WriteTx,
+	incoming: readonly PhotoRecord[],
+	targets: ReadonlyMap<string, string>,
+	newId: () => string
+): Promise<number> {
+	const store = tx.objectStore('photos');
+	const existing = new Map<string, PhotoRecord[]>();
+	for (const photo of incoming) {
+		const target = targets.get(photo.checkId);
+		if (target === undefined || existing.has(target)) continue;
+		existing.set(target, await store.getAll(photoRange(target)));
+	}
+	const writes = planPhotos(incoming, targets, existing, newId);
+	for (const photo of writes) await store.add(photo);
+	return writes.length;
 }

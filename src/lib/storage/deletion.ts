@@ -1,6 +1,7 @@
 import type { CheckStore } from './db';
 import { fail } from './errors';
 import { stampNow } from './ids';
+import { photoRange } from './photos';
 import { writeTo } from './tx';
 import type { CheckRecord, ClockOptions, StoreResult } from './types';
 
@@ -43,18 +44,19 @@ export async function undoDelete(store: CheckStore, id: string): Promise<StoreRe
 	});
 }
 
-/** Removes for good the checks deleted before `before`; returns how many went. */
+/** Removes for good the checks deleted before `before`, with their photos; returns how many went. */
 export async function purgeDeleted(
 	store: CheckStore,
 	options: { before: Date }
 ): Promise<StoreResult<number>> {
 	const cutoff = options.before.toISOString();
-	return writeTo(store, ['checks'], async (tx) => {
+	return writeTo(store, ['checks', 'photos'], async (tx) => {
 		let removed = 0;
 		let cursor = await tx.objectStore('checks').openCursor();
 		while (cursor) {
-			const { deletedAt } = cursor.value;
+			const { deletedAt, id } = cursor.value;
 			if (deletedAt !== null && deletedAt < cutoff) {
+				await tx.objectStore('photos').delete(photoRange(id));
 				await cursor.delete();
 				removed += 1;
 			}

@@ -2,6 +2,7 @@ import type { StoreFailureReason, StoreResult } from './types';
 
 /** Plain-language messages for each failure, shown as they are. */
 export const FAILURE_MESSAGES: Readonly<Record<StoreFailureReason, string>> = {
+	invalid: 'This is not something Hingepoint can keep, so nothing was changed.',
 	quota:
 		'The phone’s storage is full, so this was not saved. Everything saved before is still there; free some space and try again.',
 	'read-only':

@@ -11,6 +11,9 @@ export {
 	DB_NAME,
 	DB_VERSION,
 	MAX_BACKUP_CHARS,
+	MAX_CAPTION_CHARS,
+	MAX_PHOTOS_PER_CHECK,
+	PHOTO_SCHEMA_VERSION,
 	RECORD_SCHEMA_VERSION
 } from './constants';
 export type { OpenStoreOptions, OpenStoreResult, StoreStatus } from './db';
@@ -19,6 +22,8 @@ export type {
 	CheckRecord,
 	ClockOptions,
 	ComputedVerdict,
+	PhotoRecord,
+	PhotoType,
 	Place,
 	Revision,
 	StoreFailureReason,
@@ -34,6 +39,8 @@ export { clearDraft, loadDraft, saveDraft } from './drafts';
 export type { BackupFile, ExportOptions, ImportOptions, ImportResult } from './backup';
 export { exportBackup, importBackup } from './backup';
 export type { ImportCounts } from './backup-merge';
+export type { CheckPhoto, NewPhoto } from './photos';
+export { addPhoto, listPhotos, removePhoto, setPhotoCaption } from './photos';
 export type { Recompute, VerdictUpdate } from './verdicts';
 export { needsVerdict, storeVerdicts } from './verdicts';
 export type { PersistenceAnswer } from './persist';

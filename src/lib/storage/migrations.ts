@@ -39,6 +39,13 @@ export const STORE_MIGRATIONS: readonly StoreMigration[] = [
 		reason: 'records rewritten with an empty computed-verdict slot, filled by the current engine',
 		up: () => undefined,
 		rewritesRecords: true
+	},
+	{
+		version: 4,
+		reason: 'photos of a check in their own store, so listing checks never loads image bytes',
+		up: (db) => {
+			db.createObjectStore('photos', { keyPath: ['checkId', 'id'] });
+		}
 	}
 ];
 

@@ -1,6 +1,6 @@
 import type { DBSchema } from 'idb';
 import type { CaseFile } from './case-file';
-import type { CheckRecord, Place, Revision } from './types';
+import type { CheckRecord, PhotoRecord, Place, Revision } from './types';
 
 /** A check record as version 1 wrote it: the place was one free-text string. */
 export interface CheckRecordV1 {
@@ -63,9 +63,17 @@ export interface HingepointDBv2 extends DBSchema {
 	meta: { key: string; value: MetaRecord };
 }
 
-/** Database version 3 (current): same stores; records carry the verdict the app computed. */
+/** Database version 3: same stores; records carry the verdict the app computed. */
+export interface HingepointDBv3 extends DBSchema {
+	checks: { key: string; value: CheckRecord; indexes: { 'by-updated': string } };
+	drafts: { key: string; value: DraftRecord };
+	meta: { key: string; value: MetaRecord };
+}
+
+/** Database version 4 (current): photos of checks in their own store, keyed `[checkId, id]`. */
 export interface HingepointDB extends DBSchema {
 	checks: { key: string; value: CheckRecord; indexes: { 'by-updated': string } };
 	drafts: { key: string; value: DraftRecord };
 	meta: { key: string; value: MetaRecord };
+	photos: { key: [string, string]; value: PhotoRecord };
 }

@@ -56,8 +56,30 @@ export interface CheckRecord {
 	deletedAt: string | null;
 }
 
+/** Image type of a stored photo. */
+export type PhotoType = 'image/jpeg' | 'image/png' | 'image/webp';
+
+/**
+ * A photo of a check (photo schema version 1), stored apart from the check record so that
+ * listing checks never loads image bytes. Keyed by `[checkId, id]`.
+ */
+export interface PhotoRecord {
+	checkId: string;
+	id: string;
+	schemaVersion: number;
+	type: PhotoType;
+	/** The image file's bytes (an ArrayBuffer: some phone browsers stored Blobs unreliably). */
+	data: ArrayBuffer;
+	width: number;
+	height: number;
+	caption: string;
+	/** When it was attached (ISO 8601, UTC); photos are listed in this order. */
+	addedAt: string;
+}
+
 /** Why a storage call failed. */
 export type StoreFailureReason =
+	| 'invalid'
 	| 'quota'
 	| 'read-only'
 	| 'closed'

@@ -40,10 +40,16 @@ describe('planImport', () => {
 		const here = [record('a'), record('b', { notes: 'here' })];
 		const incoming = [record('a'), record('b', { notes: 'there' }), record('c', { notes: 'new' })];
 		const plan = planImport(here, incoming, counter());
-		expect(plan.counts).toEqual({ added: 1, beside: 1, skipped: 1, attention: 0 });
+		expect(plan.counts).toEqual({ added: 1, beside: 1, skipped: 1, attention: 0, photos: 0 });
 		expect(plan.writes.map((r) => [r.id, r.title])).toEqual([
 			['new-1', 'Beam (imported)'],
 			['c', 'Beam']
+		]);
+		// Photos follow: to the check already here, the copy kept beside, the check added as is.
+		expect([...plan.targets]).toEqual([
+			['a', 'a'],
+			['b', 'new-1'],
+			['c', 'c']
 		]);
 	});
 
@@ -59,13 +65,15 @@ describe('planImport', () => {
 
 	it('adds a record once when the file holds it twice under two ids', () => {
 		const plan = planImport([], [record('a'), record('b')], counter());
-		expect(plan.counts).toEqual({ added: 1, beside: 0, skipped: 1, attention: 0 });
+		expect(plan.counts).toEqual({ added: 1, beside: 0, skipped: 1, attention: 0, photos: 0 });
+		// The second one's photos go to the first, which is the check added.
+		expect(plan.targets.get('b')).toBe('a');
 	});
 
 	it('counts added checks whose verdict needs attention', () => {
 		const attention = { verdict: 'needs-attention' as const, computedBy: '1' };
 		const plan = planImport([record('a')], [record('a', { notes: 'x', computed: attention })], counter());
-		expect(plan.counts).toEqual({ added: 0, beside: 1, skipped: 0, attention: 1 });
+		expect(plan.counts).toEqual({ added: 0, beside: 1, skipped: 0, attention: 1, photos: 0 });
 	});
 
 	it('treats key order, verdicts and results as not part of the content', () => {

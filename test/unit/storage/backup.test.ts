@@ -8,6 +8,8 @@ import {
 	saveCheck,
 	updateCheck,
 	BACKUP_FORMAT,
+	BACKUP_VERSION,
+	MAX_BACKUP_CHARS,
 	type CheckRecord,
 	type CheckStore
 } from '../../../src/lib/storage';
@@ -15,12 +17,13 @@ import fixture from '../../fixtures/db/checks-v1.json';
 import { demoCase, openFreshStore, stubEngine, stubWritesQuota } from '../../storage/support';
 
 const versions = { appVersion: '0.1.0', engineVersion: '0.1.0' };
-const counts = (added: number, beside: number, skipped: number, attention = 0) => ({
+const counts = (added: number, beside: number, skipped: number, attention = 0, photos = 0) => ({
 	ok: true,
 	added,
 	beside,
 	skipped,
-	attention
+	attention,
+	photos
 });
 
 async function fill(store: CheckStore, titles: string[]): Promise<CheckRecord[]> {
@@ -69,7 +72,8 @@ describe('exportBackup', () => {
 		expect(text.ok).toBe(true);
 		const file = JSON.parse(text.ok ? text.value : '{}');
 		expect(file.format).toBe(BACKUP_FORMAT);
-		expect(file.version).toBe(1);
+		expect(file.version).toBe(BACKUP_VERSION);
+		expect(file.photos).toEqual([]);
 		expect(file.exportedAt).toBe('2026-07-01T00:00:00.000Z');
 		expect(file.appVersion).toBe('0.1.0');
 		expect(file.records).toEqual(records);
@@ -252,13 +256,13 @@ describe('importBackup refuses a bad file and changes nothing', () => {
 			[JSON.stringify({ format: 'some-other-app', version: 1, records: [] }), 'foreign', /not a Hingepoint backup/],
 			[JSON.stringify(demoCase()), 'foreign', /single Hingepoint case/],
 			[JSON.stringify([1, 2, 3]), 'foreign', /not a Hingepoint backup/],
-			[JSON.stringify({ ...parsed, version: 2 }), 'newer', /newer version/],
+			[JSON.stringify({ ...parsed, version: BACKUP_VERSION + 1 }), 'newer', /newer version/],
 			[withRecord({ ...parsed.records[0], id: 'n', schemaVersion: 9 }), 'newer', /newer version/],
 			[fileOf([JSON.parse(recordText.replace('{', '{"__proto__":{"polluted":true},'))]), 'damaged', /__proto__/],
 			[`{"format":"${BACKUP_FORMAT}","version":1,"__proto__":{"records":[]},"records":[]}`, 'damaged', /__proto__/],
 			[withRecord({ ...parsed.records[0], input: { ...parsed.records[0].input, constructor: 1 } }), 'damaged', /constructor/],
 			[withRecord({ ...parsed.records[0], notes: deep }), 'damaged', /nesting/],
-			[' '.repeat(40_000_001), 'damaged', /larger than any backup/]
+			[' '.repeat(MAX_BACKUP_CHARS + 1), 'damaged', /larger than any backup/]
 		];
 		for (const [text, reason, message] of cases) {
 			const engine = stubEngine();
