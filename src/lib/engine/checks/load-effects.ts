@@ -29,6 +29,8 @@ export interface LoadGroup {
 	weight(arrangement: LoadArrangement): number;
 	/** The group's characteristic analysis. */
 	result: ElasticResult;
+	/** Span of an imposed group (its loads are patterned span by span). */
+	span?: number;
 }
 
 /** Analysed groups, plus readers for one arrangement. */
@@ -66,25 +68,32 @@ export function analyseLoadGroups(o: { beam: BeamLine; EI: number[]; loads: Load
 			imposedBySpan[findSpanIndex(piece, nodes)].push(piece);
 		}
 	}
-	const group = (kind: LoadGroup['kind'], loads: Load[], weight: LoadGroup['weight']) => {
+	const group = (
+		kind: LoadGroup['kind'],
+		loads: Load[],
+		weight: LoadGroup['weight'],
+		span?: number
+	) => {
 		const result = run(loads);
 		if (!result) return null;
-		// The checks read the same points many times (every arrangement, every multiplier tried).
-		const cache = new Map<string, Effect>();
+		// The checks read the same points many times (every arrangement, every multiplier tried);
+		// one map per side keyed by the number itself (no key strings to build).
+		const left = new Map<number, Effect>();
+		const right = new Map<number, Effect>();
 		const at = (x: number, side: Side): Effect => {
-			const key = `${x}|${side}`;
-			let e = cache.get(key);
+			const cache = side === 'left' ? left : right;
+			let e = cache.get(x);
 			if (!e) {
 				const s = result.at(x, side);
-				cache.set(key, (e = { M: s.M, V: s.V, w: s.w }));
+				cache.set(x, (e = { M: s.M, V: s.V, w: s.w }));
 			}
 			return e;
 		};
-		return { kind, loads, at, weight, result };
+		return { kind, loads, at, weight, result, span };
 	};
 	const fixed = [
 		group('permanent', byAction('permanent'), (a) => a.gammaG),
-		...imposedBySpan.map((loads, i) => group('imposed', loads, (a) => a.imposedBySpan[i]))
+		...imposedBySpan.map((loads, i) => group('imposed', loads, (a) => a.imposedBySpan[i], i))
 	].filter((g) => g !== null);
 	const temporary = group('temporary', byAction('temporary'), (a) => a.gammaTemporary);
 	const combine = (list: typeof fixed, arr: LoadArrangement, x: number, side: Side): Effect => {

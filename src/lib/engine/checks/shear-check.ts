@@ -3,6 +3,8 @@
  * beside every point load, against Vpl,Rd of that span, worst load arrangement.
  */
 import { listShearPoints, readShears, type CheckContext } from './context';
+import { selectLinearArrangements } from './linear-arrangements';
+import type { LoadArrangement } from './load-arrangements';
 import type { CheckResult } from './types';
 import { findWorstArrangement } from './worst-arrangement';
 
@@ -22,7 +24,7 @@ export function computeSpanShearResistances(ctx: CheckContext): (number | null)[
 export function checkBeamShear(ctx: CheckContext, vRd: (number | null)[]): CheckResult | null {
 	if (vRd.every((v) => v === null)) return null;
 	const points = listShearPoints(ctx);
-	const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
+	const worst = findWorstArrangement(selectArrangements(ctx, vRd, points), (arr, t) => {
 		let best = { utilisation: 0, vEd: 0, vRd: 0, x: 0 };
 		for (const p of points) {
 			const r = vRd[p.span];
@@ -50,4 +52,24 @@ export function checkBeamShear(ctx: CheckContext, vRd: (number | null)[]): Check
 				? 'Larger of the elastic shear and that of the collapse moment field at the design load.'
 				: 'Elastic shear.'
 	};
+}
+
+/**
+ * Elastic shear is linear in the group weights, so the sign of each group's shear at each point
+ * picks the arrangements worth evaluating; the collapse field of the plastic route is not.
+ */
+function selectArrangements(
+	ctx: CheckContext,
+	vRd: (number | null)[],
+	points: ReturnType<typeof listShearPoints>
+): LoadArrangement[] {
+	if (ctx.plastic.size > 0) return ctx.arrangements;
+	const groups = ctx.effects.groups;
+	const readings = points.flatMap((p) => {
+		const r = vRd[p.span];
+		if (r === null) return [];
+		const up = groups.map((g) => g.at(p.x, p.side).V / r);
+		return [up, up.map((v) => -v)];
+	});
+	return selectLinearArrangements(ctx.arrangements, groups, readings);
 }

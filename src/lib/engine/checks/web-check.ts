@@ -10,6 +10,7 @@ import { E_STEEL } from '../units';
 import { sumArrangementLoads, shiftCollapseValue, type CheckContext } from './context';
 import type { LoadArrangement } from './load-arrangements';
 import type { CheckResult } from './types';
+import { selectLinearArrangements } from './linear-arrangements';
 import { listWebForces, type LoadedFlange, type WebForce } from './web-forces';
 import { findWorstArrangement } from './worst-arrangement';
 
@@ -31,14 +32,24 @@ const TYPE_WORDS = {
 /** One row per support and per point-load position on an I-section web. */
 export function checkBeamWebs(ctx: CheckContext, bearing: BearingLengths): CheckResult[] {
 	const out: CheckResult[] = [];
+	// Each group's point loads summed by position once (for picking arrangements by sign).
+	const pointSums = ctx.effects.groups.map((g) => {
+		const m = new Map<number, number>();
+		for (const l of g.loads) if (l.kind === 'point') m.set(l.x, (m.get(l.x) ?? 0) + l.value);
+		return m;
+	});
 	for (const f of listWebForces(ctx, bearing)) {
-		const row = checkWebForce(ctx, f);
+		const row = checkWebForce(ctx, f, pointSums);
 		if (row) out.push(row);
 	}
 	return out;
 }
 
-function checkWebForce(ctx: CheckContext, p: WebForce): CheckResult | null {
+function checkWebForce(
+	ctx: CheckContext,
+	p: WebForce,
+	pointSums: Map<number, number>[]
+): CheckResult | null {
 	const m = ctx.members[p.span];
 	if (!m.propsKnown || (m.shape !== 'I' && m.shape !== 'welded-I')) return null;
 	const web = ctx.basis.computeWebResistance({
@@ -56,7 +67,8 @@ function checkWebForce(ctx: CheckContext, p: WebForce): CheckResult | null {
 	});
 	const elastic = ctx.route === 'elastic-first-yield';
 	const mRd = ctx.basis.computeBendingResistance({ ...m, gammaM0: ctx.gammaM0, elastic });
-	const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
+	const picked = selectArrangements(ctx, { p, fRd: web.fRd, mRd, pointSums });
+	const worst = findWorstArrangement(picked, (arr, t) => {
 		const fEd = p.force(arr, t);
 		const mEd = readMoment(ctx, arr, p.x, t);
 		const eta2 = fEd / web.fRd;
@@ -99,6 +111,41 @@ function checkWebForce(ctx: CheckContext, p: WebForce): CheckResult | null {
 			`stiff bearing ${Math.round(ss)} mm.` +
 			(withBending ? ' Governed by the interaction with bending, η2 + 0.8·η1 ≤ 1.4.' : '')
 	};
+}
+
+/**
+ * On the elastic routes the row is the largest of readings linear in the group weights: ±F/FRd
+ * and (±F/FRd + 0.8·M/MRd)/1.4 for each sign of M the flange rule lets count (or none), so the
+ * signs pick the arrangements worth evaluating. The collapse field of the plastic route is not
+ * linear in them.
+ */
+function selectArrangements(
+	ctx: CheckContext,
+	o: { p: WebForce; fRd: number; mRd: number; pointSums: Map<number, number>[] }
+): LoadArrangement[] {
+	const { p, fRd, mRd } = o;
+	if (ctx.plastic.size > 0) return ctx.arrangements;
+	const groups = ctx.effects.groups;
+	const forces: number[][] = [];
+	if (p.sources.node !== null) {
+		const node = p.sources.node;
+		forces.push(groups.map((g) => g.result.reactions[node].force));
+	}
+	if (p.sources.loadAt !== null) {
+		const x = p.sources.loadAt;
+		forces.push(groups.map((_, i) => o.pointSums[i].get(x) ?? 0));
+	}
+	const moment = groups.map((g) => g.at(p.x, 'right').M);
+	const moments: number[][] = [groups.map(() => 0)];
+	if (mRd > 0 && p.flange !== 'bottom') moments.push(moment.map((m) => m / mRd));
+	if (mRd > 0 && p.flange !== 'top') moments.push(moment.map((m) => -m / mRd));
+	const readings = forces.flatMap((f) =>
+		[1, -1].flatMap((sign) => {
+			const eta2 = f.map((v) => (sign * v) / fRd);
+			return [eta2, ...moments.map((m) => eta2.map((v, i) => (v + 0.8 * m[i]) / 1.4))];
+		})
+	);
+	return selectLinearArrangements(ctx.arrangements, groups, readings);
 }
 
 /** Where the force stands, for the label. */

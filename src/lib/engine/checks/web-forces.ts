@@ -28,6 +28,8 @@ export interface WebForce {
 	name: string;
 	/** Design force at multiplier t on the temporary loads, N (magnitude). */
 	force: (arr: LoadArrangement, t: number) => number;
+	/** What the force is the larger of: the reaction at this node, the point loads at this x. */
+	sources: { node: number | null; loadAt: number | null };
 }
 
 /** Every bearing point of the beam, supports first, then point loads left to right. */
@@ -60,7 +62,8 @@ export function listWebForces(
 			name: `support ${node + 1}`,
 			force: loaded
 				? (arr, t) => Math.max(reaction(arr, t), pointForce(x, arr, t))
-				: reaction
+				: reaction,
+			sources: { node, loadAt: loaded ? x : null }
 		});
 	});
 	positions.forEach((x, i) => {
@@ -74,7 +77,8 @@ export function listWebForces(
 			...nearestEnd(ctx, x, bearing.loads),
 			flange: 'top',
 			name: `point load ${i + 1}`,
-			force: (arr, t) => pointForce(x, arr, t)
+			force: (arr, t) => pointForce(x, arr, t),
+			sources: { node: null, loadAt: x }
 		});
 	});
 	return out;
@@ -96,17 +100,25 @@ function nearestEnd(ctx: CheckContext, x: number, ss: number) {
 	return { endDistance: Math.max(0, Math.min(x, total - x) - ss / 2), endWord };
 }
 
-/** Design point load at x (all point loads there together), cached per arrangement. */
+/**
+ * Design point load at x (all point loads there together). Per arrangement the sums at every
+ * position are formed once, in load order as before, so a beam with many loads reads each in
+ * constant time.
+ */
 function makePointForce(ctx: CheckContext) {
-	const cache = new Map<LoadArrangement, ReturnType<typeof applyArrangement>>();
+	const cache = new Map<LoadArrangement, { fixed: Map<number, number>; variable: Map<number, number> }>();
+	const sumByPosition = (ls: ReturnType<typeof applyArrangement>['fixed']) => {
+		const out = new Map<number, number>();
+		for (const l of ls) if (l.kind === 'point') out.set(l.x, (out.get(l.x) ?? 0) + l.value);
+		return out;
+	};
 	return (x: number, arr: LoadArrangement, t: number) => {
 		let d = cache.get(arr);
 		if (!d) {
-			d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement: arr });
+			const a = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement: arr });
+			d = { fixed: sumByPosition(a.fixed), variable: sumByPosition(a.variable) };
 			cache.set(arr, d);
 		}
-		const sum = (ls: typeof d.fixed) =>
-			ls.reduce((a, l) => a + (l.kind === 'point' && l.x === x ? l.value : 0), 0);
-		return Math.abs(sum(d.fixed) + t * sum(d.variable));
+		return Math.abs((d.fixed.get(x) ?? 0) + t * (d.variable.get(x) ?? 0));
 	};
 }
