@@ -1,8 +1,9 @@
 /**
  * Whether a case from outside (a link, a stored or imported record) has the structure the check
  * screen reads: the lists and objects it draws and edits, of the right kinds. Values themselves
- * (a negative span, an unknown grade) are left to the engine, whose messages the form shows by
- * each field; a hollow case (`{ beam: {} }`) would instead break the screen.
+ * (a negative span, an unknown grade, a number not entered yet, kept as null) are left to the
+ * engine, whose messages the form shows by each field; a hollow case (`{ beam: {} }`) would
+ * instead break the screen.
  */
 import { SIZE_LIMITS } from '$lib/engine/case/limits';
 import { isPlainObject } from '$lib/storage/case-file';
@@ -48,7 +49,7 @@ function findBeamProblem(beam: unknown): ShapeProblem | null {
 	if (spans.length > SIZE_LIMITS.spans) {
 		return { path: 'beam.spans', problem: `more than ${SIZE_LIMITS.spans} spans` };
 	}
-	const span = spans.findIndex((s) => !isFiniteNumber(s));
+	const span = spans.findIndex((s) => !isNumberOrBlank(s));
 	if (span >= 0) return { path: `beam.spans[${span}]`, problem: NOT_NUMBER };
 	const supports = beam.supports;
 	if (!Array.isArray(supports) || supports.length > SIZE_LIMITS.spans + 1) {
@@ -69,7 +70,7 @@ function findBeamProblem(beam: unknown): ShapeProblem | null {
 	if (beam.selfWeight !== undefined && typeof beam.selfWeight !== 'boolean') {
 		return { path: 'beam.selfWeight', problem: 'not yes or no' };
 	}
-	const bearing = optionalList(beam.bearing, 'beam.bearing', isFiniteNumber, NOT_NUMBER);
+	const bearing = optionalList(beam.bearing, 'beam.bearing', isNumberOrBlank, NOT_NUMBER);
 	if (bearing) return bearing;
 	return findRestraintProblem(beam.restraint);
 }
@@ -83,7 +84,7 @@ function findRestraintProblem(restraint: unknown): ShapeProblem | null {
 			const problem = 'neither a choice nor a list of positions';
 			return { path: 'beam.restraint.lateral', problem };
 		}
-		const at = lateral.findIndex((x) => !isFiniteNumber(x));
+		const at = lateral.findIndex((x) => !isNumberOrBlank(x));
 		if (at >= 0) return { path: `beam.restraint.lateral[${at}]`, problem: NOT_NUMBER };
 	}
 	if (restraint.loadHeight !== undefined && typeof restraint.loadHeight !== 'string') {
@@ -103,7 +104,7 @@ function findLoadsProblem(loads: unknown): ShapeProblem | null {
 		const kind = typeof load.kind === 'string' ? load.kind : '';
 		const numbers = Object.hasOwn(LOAD_NUMBERS, kind) ? LOAD_NUMBERS[kind] : null;
 		if (!numbers) return { path: `${path}.kind`, problem: 'not point, uniform or linear' };
-		const missing = numbers.find((key) => !isFiniteNumber(load[key]));
+		const missing = numbers.find((key) => !isNumberOrBlank(load[key]));
 		if (missing) return { path: `${path}.${missing}`, problem: NOT_NUMBER };
 		if (typeof load.action !== 'string') return { path: `${path}.action`, problem: NOT_TEXT };
 		if (load.label !== undefined && typeof load.label !== 'string') {
@@ -132,8 +133,9 @@ function optionalList(
 	return at >= 0 ? { path: `${path}[${at}]`, problem } : null;
 }
 
-function isFiniteNumber(value: unknown): value is number {
-	return typeof value === 'number' && Number.isFinite(value);
+// null is a field not entered yet (the form shows it empty, the engine names it).
+function isNumberOrBlank(value: unknown): boolean {
+	return value === null || (typeof value === 'number' && Number.isFinite(value));
 }
 
 // Walks with its own stack: the caller has already bounded depth and size, but stays safe anyway.

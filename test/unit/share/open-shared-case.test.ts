@@ -56,18 +56,18 @@ describe('opening a shared link', () => {
 		expect(answer(JSON.stringify({ v: 1, B: null, l: null })).code).toBe('link-damaged');
 		const cases: [string, RegExp][] = [
 			[JSON.stringify({ v: 1, B: { s: null, u: null, n: null }, l: [null] }), /beam\.spans: missing/],
-			[withBeam({ s: [null] }), /beam\.spans\[0\]: not a number/],
+			[withBeam({ s: ['4'] }), /beam\.spans\[0\]: not a number/],
 			[withBeam({ u: [null, 'p'] }), /beam\.supports\[0\]: not text/],
 			[withBeam({ n: null }), /beam\.section: missing/],
 			[withBeam({ n: [null] }), /beam\.section: missing/],
 			[withBeam({ g: null }), /beam\.grade/],
 			[withBeam({ R: null }), /beam\.restraint: not an object/],
 			[withBeam({ R: { q: null } }), /beam\.restraint\.lateral/],
-			[withBeam({ G: [null, 100] }), /beam\.bearing\[0\]: not a number/],
+			[withBeam({ G: [{}, 100] }), /beam\.bearing\[0\]: not a number/],
 			[withBeam({ j: [null] }), /beam\.joints\[0\]: not text/],
 			[JSON.stringify({ ...VALID, l: [null] }), /loads\[0\]: not a load/],
 			[JSON.stringify({ ...VALID, l: [{ k: null }] }), /loads\[0\]\.kind: not point, uniform or linear/],
-			[JSON.stringify({ ...VALID, l: [{ k: 'p', x: null, a: 1, c: 't' }] }), /loads\[0\]\.x: not a number/],
+			[JSON.stringify({ ...VALID, l: [{ k: 'p', x: [], a: 1, c: 't' }] }), /loads\[0\]\.x: not a number/],
 			[JSON.stringify({ ...VALID, l: [{ k: 'u', F: 0, T: 4, a: 1, c: null }] }), /loads\[0\]\.action: not text/],
 			[JSON.stringify({ ...VALID, f: null }), /factors: not an object/],
 			[JSON.stringify({ ...VALID, i: null }), /title: not text/]
@@ -77,6 +77,11 @@ describe('opening a shared link', () => {
 			expect(opened.code, json).toBe('link-incomplete');
 			expect(opened.message, json).toMatch(expected);
 		}
+	});
+
+	it('opens numbers not entered yet (null), which the form shows empty and the engine names', () => {
+		expect(answer(withBeam({ s: [null], G: [null, null] })).code).toBe('ok');
+		expect(answer(JSON.stringify({ ...VALID, l: [{ k: 'p', x: null, a: null, c: 't' }] })).code).toBe('ok');
 	});
 
 	it('refuses a field named __proto__ anywhere, even one that would fill in what is missing', () => {
