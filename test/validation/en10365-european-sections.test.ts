@@ -3,7 +3,7 @@
  * of the standard; properties as tabulated to 4 s.f. in European section tables (from memory) and
  * Avz = A − 2b·tf + (tw + 2r)·tf by EN 1993-1-1 6.2.6(3)(a). Every row: computed mass within 3 %
  * of the nominal mass. Tabulated properties: 0.5 % (4-s.f. tables); It 3 % because European tables
- * use a different torsion formula from the SCI one used here (engineering practice, see D.2).
+ * use a different torsion formula from the SCI one used here (engineering practice, from memory).
  */
 import { describe, expect, it } from 'vitest';
 import { listSections } from '../../src/lib/engine/section/index';
