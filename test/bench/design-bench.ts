@@ -1,8 +1,8 @@
 /**
- * Speed of a full design check (runDesignChecks, no curve) with the app's default restraint —
- * compression flange held only at the supports, load on the top flange — and imposed load
- * patterned span by span. Medians printed beside each target, never asserted. Demo data
- * (invented).
+ * Speed of a full design check (runDesignChecks) with the app's default restraint — compression
+ * flange held only at the supports, load on the top flange — and imposed load patterned span by
+ * span, and of the governing capacity curve (checkCase with `curve: true`: one design run per
+ * position). Medians printed beside each target, never asserted. Demo data (invented).
  *
  * The ratio column compares with the engine as it was before the speed work: the bench
  * extracts that commit's `src/lib/engine` with `git archive` into node_modules/.cache (once)
@@ -16,12 +16,18 @@ import { pathToFileURL } from 'node:url';
 import { parseCase } from '../../src/lib/engine/case/parse-case';
 import { buildDesignCheckInput } from '../../src/lib/engine/checks/from-case';
 import { runDesignChecks } from '../../src/lib/engine/checks/run-checks';
+import { checkCase } from '../../src/lib/engine/index';
 import { medianMs } from './median';
 
 /** The last commit before the speed work. */
 const DEFAULT_BASE = '77cf218';
 
-type Engine = { parse: (json: unknown) => unknown; run: (input: unknown) => unknown };
+type Engine = {
+	parse: (json: unknown) => unknown;
+	run: (input: unknown) => unknown;
+	/** The whole case with its governing capacity curve. */
+	curve: (json: unknown) => unknown;
+};
 
 const restraint = { lateral: 'ends-only', loadHeight: 'top-flange' };
 
@@ -54,16 +60,16 @@ const twenty = Array.from({ length: 20 }, (_, i) =>
 /** 198 small temporary point loads on one span (the case format allows 200 loads in all). */
 const twoHundred = Array.from({ length: 198 }, (_, i) => point(0.01 + (i * 5.98) / 197, 0.1));
 
-const CASES: { name: string; target: number; json: unknown[] }[] = [
-	{ name: '1 span', target: 10, json: [beamCase(1, 'en1990-6.10', [point(3, 20)])] },
-	{ name: '3 spans, patterned', target: 50, json: [beamCase(3, 'en1990-6.10', [point(3, 20)])] },
-	{ name: '6 spans, 20 loads, 6.10a/b', target: 150, json: [beamCase(6, 'en1990-6.10ab', twenty)] },
-	{ name: '200 loads on one span (198 + 2)', target: 100, json: [beamCase(1, 'en1990-6.10', twoHundred)] },
+const CASES: { name: string; target: number; json: unknown; curve?: boolean }[] = [
+	{ name: '1 span', target: 10, json: beamCase(1, 'en1990-6.10', [point(3, 20)]) },
+	{ name: '3 spans, patterned', target: 50, json: beamCase(3, 'en1990-6.10', [point(3, 20)]) },
+	{ name: '6 spans, 20 loads, 6.10a/b', target: 150, json: beamCase(6, 'en1990-6.10ab', twenty) },
+	{ name: '200 loads on one span (198 + 2)', target: 100, json: beamCase(1, 'en1990-6.10', twoHundred) },
 	{
-		// Stand-in for the governing capacity curve: one design run per position, 80 positions.
-		name: 'curve stand-in: 3 spans × 80 positions',
+		name: 'governing curve, 3 spans',
 		target: 300,
-		json: Array.from({ length: 80 }, (_, k) => beamCase(3, 'en1990-6.10', [point(0.05 + (k * 17.9) / 79, 10)]))
+		json: beamCase(3, 'en1990-6.10', [point(3, 20)]),
+		curve: true
 	}
 ];
 
@@ -77,7 +83,9 @@ async function loadBase(commit: string): Promise<Engine | null> {
 	const parse = await import(url('src/lib/engine/case/parse-case.ts'));
 	const from = await import(url('src/lib/engine/checks/from-case.ts'));
 	const run = await import(url('src/lib/engine/checks/run-checks.ts'));
+	const index = await import(url('src/lib/engine/index.ts'));
 	return {
+		curve: (json) => index.checkCase(json, { curve: true }),
 		parse: (json) => {
 			const p = parse.parseCase(json);
 			if (!p.ok) throw new Error('bench case invalid (base)');
@@ -88,6 +96,7 @@ async function loadBase(commit: string): Promise<Engine | null> {
 }
 
 const current: Engine = {
+	curve: (json) => checkCase(json, { curve: true }),
 	parse: (json) => {
 		const p = parseCase(json);
 		if (!p.ok) throw new Error(`bench case invalid: ${JSON.stringify(p.issues)}`);
@@ -96,9 +105,10 @@ const current: Engine = {
 	run: (input) => runDesignChecks(input as Parameters<typeof runDesignChecks>[0])
 };
 
-function time(engine: Engine, json: unknown[], runs: number, warmup: number): number {
-	const inputs = json.map((j) => engine.parse(j));
-	return medianMs(() => inputs.forEach((i) => engine.run(i)), runs, warmup);
+function time(engine: Engine, c: (typeof CASES)[number], runs: number, warmup: number): number {
+	if (c.curve) return medianMs(() => engine.curve(c.json), runs, warmup);
+	const input = engine.parse(c.json);
+	return medianMs(() => engine.run(input), runs, warmup);
 }
 
 export async function runDesignBench(): Promise<void> {
@@ -106,8 +116,8 @@ export async function runDesignBench(): Promise<void> {
 	const base = commit === 'none' ? null : await loadBase(commit);
 	console.log(`case | target ms | median ms | base ${commit} ms | speed-up`);
 	for (const c of CASES) {
-		const now = time(current, c.json, 5, 1);
-		const old = base ? time(base, c.json, 1, 0) : NaN;
+		const now = time(current, c, 5, 1);
+		const old = base ? time(base, c, 1, 0) : NaN;
 		const ratio = base ? `${(old / now).toFixed(1)}×` : '—';
 		console.log(
 			`${c.name} | ${c.target} | ${now.toFixed(1)} | ${base ? old.toFixed(0) : '—'} | ${ratio}`
