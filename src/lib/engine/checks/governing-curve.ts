@@ -8,6 +8,7 @@
 import { minimiseOnInterval } from '../collapse/minimise';
 import type { Load } from '../model/types';
 import type { DesignCheckInput, DesignCheckOutcome } from './inputs';
+import type { DesignRunOptions } from './run-checks';
 
 /** Size of the trial point load, N, when no proposed point load gives one. */
 const UNIT_TRIAL = 1000;
@@ -41,8 +42,10 @@ export interface GoverningCurve {
  */
 export function computeGoverningCurve(
 	input: DesignCheckInput,
-	run: (input: DesignCheckInput) => DesignCheckOutcome
+	run: (input: DesignCheckInput, options: DesignRunOptions) => DesignCheckOutcome
 ): GoverningCurve {
+	// Every run is on the same beam with the same existing loads: their analyses are shared.
+	const shared: DesignRunOptions = { memo: new Map(), skipInformationCollapse: true };
 	// A proposed point load is moved in place (same size, same order), so that at its own position
 	// the run is the answer's own run; without one, a unit trial load is added.
 	const proposed = input.loads.find((l) => l.kind === 'point' && l.action === 'temporary' && l.value > 0);
@@ -55,7 +58,7 @@ export function computeGoverningCurve(
 		return proposed ? kept : [...kept, trial];
 	};
 	const evaluate = (x: number): CurvePoint => {
-		const v = run({ ...input, loads: loadsAt(x) }).verdict;
+		const v = run({ ...input, loads: loadsAt(x) }, shared).verdict;
 		if (v.verdict === 'outside-scope') return { x, p: null, governing: null, outsideScope: true };
 		const m = v.allowableMultiplier;
 		const governing = m === null || !v.governing ? null : { id: v.governing.id, label: v.governing.label };

@@ -52,13 +52,23 @@ export interface LoadEffects {
  * Analyses each load group once.
  * @param o.EI bending stiffness per span, N·mm²
  */
-export function analyseLoadGroups(o: { beam: BeamLine; EI: number[]; loads: Load[] }): LoadEffects {
+export function analyseLoadGroups(o: {
+	beam: BeamLine;
+	EI: number[];
+	loads: Load[];
+	/** Analyses already made, by beam, stiffness and loads (repeated runs reuse them). */
+	memo?: Map<string, ElasticResult>;
+}): LoadEffects {
 	const nodes = [0];
 	for (const s of o.beam.spans) nodes.push(nodes[nodes.length - 1] + s);
 	const run = (loads: Load[]): ElasticResult | null => {
 		if (loads.length === 0) return null;
+		const key = o.memo ? JSON.stringify([o.beam, o.EI, loads]) : '';
+		const known = o.memo?.get(key);
+		if (known) return known;
 		const r = analyseElastic({ beam: o.beam, EI: o.EI, loads });
 		if (!r.ok) throw new Error('invariant: load groups are analysed only on stable beams');
+		o.memo?.set(key, r.value);
 		return r.value;
 	};
 	const byAction = (a: Load['action']) => o.loads.filter((l) => l.action === a);

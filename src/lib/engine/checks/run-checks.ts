@@ -3,6 +3,7 @@
  * the scope gate, the bending route (plastic collapse or elastic), shear, bending with shear,
  * lateral-torsional buckling, web bearing and deflection.
  */
+import type { ElasticResult } from '../elastic/index';
 import { E_STEEL } from '../units';
 import { checkElasticBending } from './bending-check';
 import type { CheckContext } from './context';
@@ -41,9 +42,18 @@ type Basis = DesignBasis<FactorSettings>;
  * @example
  * runDesignChecks(input).verdict.verdict // 'pass' | 'fail' | 'outside-scope'
  */
+/** Options of repeated runs on one beam (the governing curve). */
+export interface DesignRunOptions {
+	/** Elastic analyses shared between runs on the same beam (only the proposed load changes). */
+	memo?: Map<string, ElasticResult>;
+	/** Skip the information-only collapse of the elastic route (nothing reads it). */
+	skipInformationCollapse?: boolean;
+}
+
 export function runDesignChecks(
 	input: DesignCheckInput,
-	basis: Basis = DEFAULT_BASIS
+	basis: Basis = DEFAULT_BASIS,
+	options: DesignRunOptions = {}
 ): DesignCheckOutcome {
 	const { beam } = input;
 	const members = input.sections.map((s, i) => describeMember(s, input.grades[i]?.fy ?? 0));
@@ -87,7 +97,12 @@ export function runDesignChecks(
 	const EI = members.map((m) => (allKnown ? E_STEEL * m.Iy : 1));
 	// Forces on the released beam do not depend on stiffness: unit EI.
 	const unit = beam.spans.map(() => 1);
-	const released = analyseLoadGroups({ beam: releaseRedundants(beam), EI: unit, loads: input.loads });
+	const released = analyseLoadGroups({
+		beam: releaseRedundants(beam),
+		EI: unit,
+		loads: input.loads,
+		memo: options.memo
+	});
 	const ctx: CheckContext = {
 		basis,
 		beam,
@@ -95,7 +110,7 @@ export function runDesignChecks(
 		members,
 		loads: input.loads,
 		arrangements,
-		effects: analyseLoadGroups({ beam, EI, loads: input.loads }),
+		effects: analyseLoadGroups({ beam, EI, loads: input.loads, memo: options.memo }),
 		gammaM0: factors.gammaM0,
 		gammaM1: factors.gammaM1,
 		eta: input.eta ?? 1,
@@ -103,7 +118,13 @@ export function runDesignChecks(
 		plastic: new Map(),
 		released
 	};
-	const run = runChecks(ctx, input, { scopeBase, early, EI, allKnown });
+	const run = runChecks(ctx, input, {
+		scopeBase,
+		early,
+		EI,
+		allKnown,
+		informationCollapse: !options.skipInformationCollapse
+	});
 	const loadFactor =
 		run.route.route === 'plastic' ? (run.collapse?.loadFactor ?? null) : bendingFactor(run.checks);
 	const verdict = decideVerdict({ scope: run.route, checks: run.checks, loadFactor });
@@ -153,7 +174,13 @@ function buildScopeInput(
 function runChecks(
 	ctx: CheckContext,
 	input: DesignCheckInput,
-	o: { scopeBase: ScopeInput; early: ScopeDecision; EI: number[]; allKnown: boolean }
+	o: {
+		scopeBase: ScopeInput;
+		early: ScopeDecision;
+		EI: number[];
+		allKnown: boolean;
+		informationCollapse: boolean;
+	}
 ): {
 	route: ScopeDecision;
 	collapse: DesignCheckOutcome['collapse'];
@@ -198,7 +225,7 @@ function runChecks(
 		elasticResistance = resistance;
 		const bending = checkElasticBending(ctx, { EI: o.EI, resistance, elastic });
 		checks.push(bending);
-		if (informationOnly) {
+		if (informationOnly && o.informationCollapse) {
 			// The collapse is shown for information, for the arrangement that governs bending.
 			const arrangement = ctx.arrangements.find((a) => a.name === bending.arrangement);
 			if (arrangement) collapse = solveCollapseForInformation(ctx, { arrangement, vRd });

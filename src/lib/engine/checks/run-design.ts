@@ -10,7 +10,7 @@ import { DEFAULT_BASIS } from './bases';
 import { buildDesignCheckInput } from './from-case';
 import { computeGoverningCurve, type GoverningCurve } from './governing-curve';
 import type { DesignCheckInput, DesignCheckOutcome } from './inputs';
-import { runDesignChecks } from './run-checks';
+import { runDesignChecks, type DesignRunOptions } from './run-checks';
 import { decideAnswer, type Answer } from './answer';
 
 /** A span's section class (EN 1993-1-1 Table 5.2) and any note on how it was found. */
@@ -46,7 +46,7 @@ export interface DesignOptions {
 export function runDesign(model: CaseModel, options: DesignOptions = {}): DesignOutcome {
 	const basis = options.basis ?? DEFAULT_BASIS;
 	const input = buildDesignCheckInput(model);
-	const run = (i: DesignCheckInput) => runDesignChecks(i, basis);
+	const run = (i: DesignCheckInput, o?: DesignRunOptions) => runDesignChecks(i, basis, o);
 	const checked = run(input);
 	const answer = decideAnswer(checked, model.loads);
 	const inScope = checked.verdict.verdict !== 'outside-scope';
