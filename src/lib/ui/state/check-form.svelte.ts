@@ -22,6 +22,11 @@ export interface FormDraft {
 export interface CheckFormOptions {
 	/** The engine call (may answer later, e.g. from a worker); null while it is not ready yet. */
 	run: (c: CaseFile) => CheckOutcome | Promise<CheckOutcome> | null;
+	/**
+	 * The same check with the governing capacity curve, asked for after the answer is shown (the
+	 * curve is one design run per position, so the answer must not wait for it).
+	 */
+	runCurve?: (c: CaseFile) => CheckOutcome | Promise<CheckOutcome> | null;
 	onchange?: (draft: FormDraft) => void;
 	/** Quiet time after the last keystroke before the engine runs, ms. */
 	delay?: number;
@@ -206,6 +211,19 @@ export class CheckForm {
 		if (seq !== this.#seq) return;
 		this.outcome = outcome;
 		this.pending = false;
+		if (outcome.state === 'report') void this.#addCurve(seq);
+	}
+
+	/** Replaces the shown report by the same check with its curve, if the case is still current. */
+	async #addCurve(seq: number): Promise<void> {
+		let more: CheckOutcome | null = null;
+		try {
+			more = await (this.#options.runCurve?.($state.snapshot(this.case) as CaseFile) ?? null);
+		} catch {
+			// The answer is already shown; a failed curve leaves it as it is.
+			return;
+		}
+		if (seq === this.#seq && more?.state === 'report') this.outcome = more;
 	}
 
 	dispose(): void {

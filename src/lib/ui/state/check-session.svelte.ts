@@ -33,7 +33,8 @@ export class CheckSession {
 	readonly engine = new EngineRunner();
 	readonly form: CheckForm = new CheckForm({
 		// The share texts come in the units the form shows.
-		run: (c) => this.engine.run(c, this.form.units === 'US' ? 'us' : 'si'),
+		run: (c) => this.engine.run(c, this.form.units === 'US' ? 'us' : 'si', false),
+		runCurve: (c) => this.engine.run(c, this.form.units === 'US' ? 'us' : 'si', true),
 		onchange: (draft) => this.drafts.queue(draft)
 	});
 	/** The engine, once loaded. */

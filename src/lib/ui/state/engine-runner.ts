@@ -44,6 +44,8 @@ interface Request {
 	key: string;
 	/** Units of the share texts. */
 	units?: 'si' | 'us';
+	/** Also compute the governing capacity curve (the slow part, asked for after the answer). */
+	curve: boolean;
 	resolve: (outcome: CheckOutcome) => void;
 }
 
@@ -100,10 +102,10 @@ export class EngineRunner {
 	}
 
 	/** Checks one plain (snapshot) case, share texts in `units`; always resolves. */
-	run(c: CaseFile, units?: 'si' | 'us'): Promise<CheckOutcome> {
-		if (this.#onPage) return this.#runHere(c, units);
+	run(c: CaseFile, units?: 'si' | 'us', curve = true): Promise<CheckOutcome> {
+		if (this.#onPage) return this.#runHere(c, units, curve);
 		const seq = ++this.#seq;
-		const key = `${units ?? 'si'} ${keyOf(c, seq)}`;
+		const key = `${units ?? 'si'} ${curve ? 'curve' : 'answer'} ${keyOf(c, seq)}`;
 		return new Promise((resolve) => {
 			// The same case again (e.g. opened, then saved as a draft) waits for the answer in progress.
 			const same = [this.#running, this.#next].find((r) => r?.key === key);
@@ -119,7 +121,7 @@ export class EngineRunner {
 				};
 				return;
 			}
-			this.#next = { seq, case: c, key, units, resolve };
+			this.#next = { seq, case: c, key, units, curve, resolve };
 			this.#pump();
 		});
 	}
@@ -152,14 +154,15 @@ export class EngineRunner {
 		this.#next = null;
 		const port = this.#ensurePort();
 		if (!port) {
-			void this.#runHere(request.case, request.units).then(request.resolve);
+			void this.#runHere(request.case, request.units, request.curve).then(request.resolve);
 			return;
 		}
 		const limit = this.#limit;
 		const timer = setTimeout(() => this.#stopWorker(failed(tooLongMessage(limit))), limit);
 		this.#running = { ...request, started: Date.now(), timer };
 		try {
-			port.postMessage({ seq: request.seq, json: request.case, units: request.units });
+			const { seq, units, curve } = request;
+			port.postMessage({ seq, json: request.case, units, curve });
 		} catch (error) {
 			// The case could not be copied to the worker (e.g. nested too deeply).
 			this.#finish(failed(`the case could not be passed to the engine (${describe(error)}).`));
@@ -235,7 +238,7 @@ export class EngineRunner {
 			this.#running = null;
 			if (running) {
 				clearTimeout(running.timer);
-				void this.#runHere(running.case, running.units).then(running.resolve);
+				void this.#runHere(running.case, running.units, running.curve).then(running.resolve);
 			}
 			this.#pump();
 			return;
@@ -245,10 +248,10 @@ export class EngineRunner {
 		this.#stopWorker(failed(`${stopped} Change an input to run the check again.`));
 	}
 
-	async #runHere(c: CaseFile, units?: 'si' | 'us'): Promise<CheckOutcome> {
+	async #runHere(c: CaseFile, units?: 'si' | 'us', curve = true): Promise<CheckOutcome> {
 		try {
 			const { checkCase } = await import('$lib/engine');
-			return runCheck(checkCase, c, units);
+			return runCheck(checkCase, c, units, curve);
 		} catch (error) {
 			return failed(`the engine could not be loaded (${describe(error)}). Reload the page.`);
 		}

@@ -12,6 +12,8 @@ export interface EngineRequest {
 	json: unknown;
 	/** Units of the share texts (the report's numbers stay SI). */
 	units?: 'si' | 'us';
+	/** Also compute the governing capacity curve (default true). */
+	curve?: boolean;
 }
 
 /**
@@ -30,7 +32,8 @@ self.onmessage = (event: MessageEvent<EngineRequest>) => {
 	const seq = typeof event.data?.seq === 'number' ? event.data.seq : 0;
 	let reply: EngineReply;
 	try {
-		reply = { seq, result: checkCase(event.data.json, { curve: true, units: event.data.units }) };
+		const { json, units, curve } = event.data;
+		reply = { seq, result: checkCase(json, { curve: curve ?? true, units }) };
 	} catch (error) {
 		reply = { seq, error: describe(error) };
 	}

@@ -13,16 +13,17 @@ export function toCheckOutcome(result: EngineOutcome): CheckOutcome {
 }
 
 /**
- * Runs the engine once on a plain (snapshot) case, with the capacity curve and the share texts in
+ * Runs the engine once on a plain (snapshot) case, with the capacity curve (unless told not to) and the share texts in
  * `units`. A thrown error is a broken invariant in the engine: it is shown plainly, never as a verdict.
  */
 export function runCheck(
 	checkCase: (json: unknown, options?: { curve?: boolean; units?: 'si' | 'us' }) => EngineOutcome,
 	c: CaseFile,
-	units?: 'si' | 'us'
+	units?: 'si' | 'us',
+	curve = true
 ): CheckOutcome {
 	try {
-		return toCheckOutcome(checkCase(c, { curve: true, units }));
+		return toCheckOutcome(checkCase(c, { curve, units }));
 	} catch (error) {
 		return { state: 'error', message: error instanceof Error ? error.message : String(error) };
 	}
