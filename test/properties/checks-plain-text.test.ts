@@ -41,7 +41,9 @@ describe('plain text', () => {
 					assumptions: []
 				};
 				const short = writeShortSummary(input);
-				expect(short.length).toBeLessThanOrEqual(SHORT_SUMMARY_LIMIT);
+				expect(short.length).toBeLessThan(SHORT_SUMMARY_LIMIT);
+				// The engineer-of-record notice is never cut.
+				expect(short.endsWith(input.notice)).toBe(true);
 				expect(isPlainText(short)).toBe(true);
 				expect(isPlainText(writeLongSummary(input))).toBe(true);
 			}),

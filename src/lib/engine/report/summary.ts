@@ -122,41 +122,48 @@ function describeResult(s: SummaryInput): string {
 }
 
 /**
- * The short message; drops the load list, then the allowable loads, then the place, until it
- * fits {@link SHORT_SUMMARY_LIMIT}.
+ * The short message, under {@link SHORT_SUMMARY_LIMIT} characters. The answer (verdict, largest
+ * proposed loads) and the engineer-of-record notice always stay; to fit, it drops the load list,
+ * then the place, then the factor sentence, then the beam and restraint lines, and last shortens
+ * the result line.
  * @example
- * writeShortSummary(input).length <= 600 // true
+ * writeShortSummary(input).length < 600 // true
  */
 export function writeShortSummary(s: SummaryInput): string {
 	const head = [s.title || 'Beam check', [s.place, s.date].filter(Boolean).join(', ')];
 	const loads = `Loads: ${s.loads.map((l) => describeLoad(l, s.units)).join('; ')}`;
 	const many = s.allowable.length > 1 ? 's, together' : '';
 	const allow = s.allowable.length ? `Largest proposed load${many}: ${s.allowable.join('; ')}` : '';
-	const build = (withLoads: boolean, withAllow: boolean, withPlace: boolean) =>
+	const result = `Result: ${describeResult(s)}`;
+	const build = (drop: number, resultLine = result) =>
 		toPlainText(
 			[
-				withPlace ? head.join(', ').replace(/, $/, '') : head[0],
-				`Beam: ${describeBeam(s)}`,
-				s.restraint ? `Restraint: ${s.restraint}` : '',
-				withLoads ? loads : '',
-				describeFactors(s),
-				`Result: ${describeResult(s)}`,
-				withAllow ? allow : '',
+				drop < 2 ? head.join(', ').replace(/, $/, '') : head[0],
+				drop < 4 ? `Beam: ${describeBeam(s)}` : '',
+				drop < 4 && s.restraint ? `Restraint: ${s.restraint}` : '',
+				drop < 1 ? loads : '',
+				drop < 3 ? describeFactors(s) : '',
+				resultLine,
+				allow,
 				s.notice
 			]
 				.filter(Boolean)
 				.join('\n')
 		);
-	for (const [l, a, p] of [
-		[true, true, true],
-		[false, true, true],
-		[false, false, true],
-		[false, false, false]
-	] as const) {
-		const text = build(l, a, p);
-		if (text.length <= SHORT_SUMMARY_LIMIT) return text;
+	for (let drop = 0; drop <= 4; drop++) {
+		const text = build(drop);
+		if (text.length < SHORT_SUMMARY_LIMIT) return text;
 	}
-	return build(false, false, false).slice(0, SHORT_SUMMARY_LIMIT - 1) + '…';
+	// Still too long (very long names or many loads): the notice whole, then the result, the
+	// answer and the title, each cut to the room left.
+	let room = SHORT_SUMMARY_LIMIT - 1 - s.notice.length;
+	const fit = (line: string) => {
+		const kept = line.length + 1 <= room ? line : room > 2 ? `${line.slice(0, room - 2)}…` : '';
+		room -= kept ? kept.length + 1 : 0;
+		return kept;
+	};
+	const [r, a, t] = [fit(toPlainText(result)), fit(toPlainText(allow)), fit(toPlainText(head[0]))];
+	return [t, r, a, toPlainText(s.notice)].filter(Boolean).join('\n');
 }
 
 function describeCheck(c: SummaryCheck): string {
