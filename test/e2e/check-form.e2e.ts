@@ -3,12 +3,11 @@
  * named next to its field and gives no verdict, and a half-filled form survives a reload.
  */
 import { checkCase } from '../../src/lib/engine/index';
-import { enterSimpleBeam, fieldAt, readLoadFactor, typeInto } from './check-helpers';
+import { enterSimpleBeam, fieldAt, openCheck, openDemo, readLoadFactor, typeInto } from './check-helpers';
 import { test, expect } from './fixtures';
 
 test('a simply supported beam typed in gives λ = 4Mp/(L·γ·P) and the engine’s verdict', async ({ page }) => {
-	await page.goto('/check');
-	await readLoadFactor(page);
+	await openCheck(page);
 	// Decimal commas as typed on a phone keypad.
 	await enterSimpleBeam(page, { span: '6,0', mp: '100', x: '3', load: '10' });
 	// Simple plastic theory, central point load on a simply supported beam: collapse at W = 4Mp/L
@@ -39,7 +38,7 @@ test('a simply supported beam typed in gives λ = 4Mp/(L·γ·P) and the engine�
 });
 
 test('bad input shows the field’s own message and no result', async ({ page }) => {
-	await page.goto('/check');
+	await openDemo(page);
 	await readLoadFactor(page);
 	await typeInto(page, 'beam.spans[0]', '4.8m');
 	const span = fieldAt(page, 'beam.spans[0]');
@@ -67,7 +66,7 @@ test('bad input shows the field’s own message and no result', async ({ page })
 });
 
 test('a half-filled form survives a reload, typing mistakes included', async ({ page }) => {
-	await page.goto('/check');
+	await openDemo(page);
 	await readLoadFactor(page);
 	await typeInto(page, 'loads[0].value', '4,25');
 	await typeInto(page, 'beam.spans[0]', '5.2x');

@@ -3,6 +3,8 @@
  * the engine names in its messages.
  */
 import type { Page } from '@playwright/test';
+import { buildShareLink } from '../../src/lib/share/fragment';
+import { createDemoCase } from '../../src/lib/ui/state/demo-case';
 import { expect } from './fixtures';
 
 /** The DOM id the form gives the field at a case path (mirrors src/routes/check/field-id.ts). */
@@ -18,6 +20,12 @@ export async function typeInto(page: Page, path: string, text: string): Promise<
 /** The text shown in the numeric field at a case path. */
 export function fieldAt(page: Page, path: string) {
 	return page.getByTestId(`field-${fieldIdOf(path)}`);
+}
+
+/** A new blank check is on screen: the span is empty and the result bar asks for it first. */
+export async function expectBlankCheck(page: Page): Promise<void> {
+	await expect(fieldAt(page, 'beam.spans[0]')).toHaveValue('');
+	await expect(page.getByTestId('live-chip')).toContainText('Fix Span 1 — length: Not entered yet.');
 }
 
 /** Waits for a computed result and returns λ as shown. */
@@ -36,10 +44,12 @@ export async function enterSimpleBeam(
 	o: { span: string; mp: string; x: string; load: string }
 ): Promise<void> {
 	await page.getByTestId('start-blank').click();
+	await expect(fieldAt(page, 'beam.spans[0]')).toHaveValue('');
 	await page.getByText('Known Mp', { exact: true }).click();
 	await typeInto(page, 'beam.spans[0]', o.span);
 	await typeInto(page, 'beam.section.mp', o.mp);
 	await page.getByRole('button', { name: '+ Point load' }).click();
+	await page.getByTestId('action-0').selectOption('temporary');
 	await typeInto(page, 'loads[0].x', o.x);
 	await typeInto(page, 'loads[0].value', o.load);
 	await page.getByText('Along its whole length', { exact: false }).click();
@@ -51,12 +61,25 @@ export async function openCheck(page: Page, path = '/check'): Promise<void> {
 	await expect(page.getByTestId('check-heading')).toHaveAttribute('data-ready', 'true');
 }
 
+/**
+ * Opens the worked demo as a new check: by its button while nothing is saved (first run), else
+ * through a shared link of the same case (the button is offered on first run only).
+ */
+export async function openDemo(page: Page): Promise<void> {
+	await openCheck(page, '/check?new');
+	const demo = page.getByTestId('try-demo');
+	if (await demo.isVisible()) await demo.click();
+	else {
+		// From another page: a change of the hash alone would not reload the check screen.
+		await page.goto('/about');
+		await openCheck(page, buildShareLink('', createDemoCase()));
+	}
+	await expect(page.getByTestId('demo-note')).toBeVisible();
+}
+
 /** Saves the demo check under a title, with a place and notes; ends on /check?id=…. */
 export async function saveDemo(page: Page, title: string, building = 'Block A'): Promise<void> {
-	await openCheck(page);
-	// After a save, a new check starts blank: bring the demo back.
-	const demo = page.getByRole('button', { name: 'Open the demo' });
-	if (await demo.isVisible()) await demo.click();
+	await openDemo(page);
 	await readLoadFactor(page);
 	await page.getByTestId('open-save').click();
 	await page.getByTestId('save-title').fill(title);
@@ -65,6 +88,6 @@ export async function saveDemo(page: Page, title: string, building = 'Block A'):
 	await page.getByTestId('save-grid').fill('C/4');
 	await page.getByTestId('save-notes').fill('Pump change, hoist on trolley');
 	await page.getByTestId('save-confirm').click();
-	await expect(page.getByTestId('session-message')).toContainText('Saved');
+	await expect(page.getByTestId('save-status')).toContainText('Saved');
 	await expect(page).toHaveURL(/\/check\?id=/);
 }

@@ -3,11 +3,11 @@
  * run in node on the case the form should have built.
  */
 import { checkCase } from '../../src/lib/engine/index';
-import { fieldAt, openCheck, readLoadFactor, typeInto } from './check-helpers';
+import { fieldAt, openCheck, openDemo, readLoadFactor, typeInto } from './check-helpers';
 import { test, expect } from './fixtures';
 
 test('a continuous beam with a simple joint gives the engine’s λ and verdict for the same case', async ({ page }) => {
-	await openCheck(page);
+	await openDemo(page);
 	await readLoadFactor(page);
 	await page.getByText('Continuous', { exact: true }).click();
 	await page.getByTestId('span-count').selectOption('3');
@@ -67,6 +67,10 @@ test('the chain hoist template adds 10.1 kN × 1.25 as a proposed temporary poin
 	// Demo values of the template: 10.1 kN (1 t rated + hoist + trolley) × dynamic factor 1.25.
 	const P = 10.1 * 1.25;
 	await expect(fieldAt(page, 'loads[0].value')).toHaveValue(String(P));
+	// Said beside the button tapped, and read out (a polite live region).
+	const added = page.getByTestId('added-chain-hoist');
+	await expect(added).toHaveAttribute('aria-live', 'polite');
+	await expect(added).toContainText('as Load 1');
 	await expect(page.getByTestId('load-0')).toContainText('Proposed temporary');
 	// Simply supported, central point load: λ = 4Mp/(L·γ·P) (simple plastic theory, beam
 	// mechanism; B.G. Neal, from memory) with γ = 1.5 (EN 1990 Table A1.2(B), recommended).
@@ -81,6 +85,7 @@ test('a load the beam cannot carry reads FAIL in words and symbol, with λ below
 	await typeInto(page, 'beam.section.mp', '100');
 	await page.getByText('Along its whole length', { exact: false }).click();
 	await page.getByRole('button', { name: '+ Point load' }).click();
+	await page.getByTestId('action-0').selectOption('temporary');
 	await typeInto(page, 'loads[0].x', '3');
 	await typeInto(page, 'loads[0].value', '50');
 	// λ = 4Mp/(L·γ·P) = 400/(6·1.5·50) = 0.889 < 1 (simple plastic theory; EN 1990 γQ = 1.5).
@@ -93,7 +98,7 @@ test('a load the beam cannot carry reads FAIL in words and symbol, with λ below
 });
 
 test('restraint only at the supports: the screen names the engine’s route and its reason', async ({ page }) => {
-	await openCheck(page);
+	await openDemo(page);
 	await readLoadFactor(page);
 	await page.getByText('Only at the supports', { exact: true }).click();
 	const demo = {

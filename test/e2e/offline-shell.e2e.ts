@@ -2,10 +2,13 @@
  * The installable offline app: first visit online, the service worker takes control, the network
  * goes away, and the app still loads, still computes, and still shows its own not-found page.
  */
+import { openDemo, typeInto } from './check-helpers';
 import { test, expect, waitForServiceWorkerControl } from './fixtures';
 
 test('reloads offline from the service worker and still computes the demo check', async ({ page, context }) => {
-	await page.goto('/check');
+	await openDemo(page);
+	// An edit (the same hoist load) makes it the draft a reload brings back.
+	await typeInto(page, 'loads[2].value', '12,625');
 	await waitForServiceWorkerControl(page);
 	// The worker precaches in its install step; wait until it is active and the cache is filled.
 	await page.evaluate(async () => {

@@ -2,7 +2,7 @@
  * Saved checks on the phone: saving with title and place, the list after a reload, search, edits
  * that keep revisions, duplicate, and delete with undo.
  */
-import { fieldAt, openCheck, readLoadFactor, saveDemo, typeInto } from './check-helpers';
+import { fieldAt, openDemo, readLoadFactor, saveDemo, typeInto } from './check-helpers';
 import { test, expect } from './fixtures';
 
 test('a saved check is listed after a reload and found by search', async ({ page }) => {
@@ -33,14 +33,16 @@ test('editing a saved check keeps the earlier version', async ({ page }) => {
 	await expect.poll(() => readLoadFactor(page)).not.toBeCloseTo(before, 3);
 	await page.getByTestId('open-save').click();
 	await page.getByTestId('save-confirm').click();
-	await expect(page.getByTestId('session-message')).toContainText('1 earlier version kept');
+	await expect(page.getByTestId('save-status')).toContainText('1 earlier version kept');
 
 	await page.reload();
 	await expect(fieldAt(page, 'loads[2].value')).toHaveValue('8');
-	await expect(page.getByTestId('revisions').getByRole('listitem')).toHaveCount(1);
-	// The earlier version opens with its own inputs.
-	await page.getByTestId('revisions').getByRole('button', { name: 'Open as a new check' }).click();
+	// The earlier version and the one saved now.
+	await expect(page.getByTestId('revision')).toHaveCount(2);
+	// The earlier version comes back with its own inputs, as an unsaved edit of this check.
+	await page.getByRole('button', { name: 'Restore version 1' }).click();
 	await expect(fieldAt(page, 'loads[2].value')).toHaveValue('12.625');
+	await expect(page.getByTestId('unsaved-note')).toContainText('not saved yet');
 
 	await page.goto('/');
 	await expect(page.getByTestId('saved-item').first()).toContainText('1 earlier version');
@@ -78,7 +80,7 @@ test('with no IndexedDB (private mode) the app opens, computes, and says checks 
 	await expect(page.getByTestId('export-backup')).toBeDisabled();
 	await expect(page.getByTestId('import-backup')).toBeDisabled();
 
-	await openCheck(page);
+	await openDemo(page);
 	// The demo's own verdict, computed on this device (generous wait: a cold engine on a slow phone).
 	await expect(page.getByTestId('verdict')).toHaveAttribute('data-verdict', /^(pass|fail|outside-scope)$/, {
 		timeout: 30_000

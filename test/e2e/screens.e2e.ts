@@ -5,7 +5,7 @@
  */
 import AxeBuilder from '@axe-core/playwright';
 import type { Page } from '@playwright/test';
-import { openCheck, readLoadFactor, saveDemo } from './check-helpers';
+import { openCheck, openDemo, readLoadFactor, saveDemo } from './check-helpers';
 import { test, expect } from './fixtures';
 
 test.use({ viewport: { width: 360, height: 780 } });
@@ -33,8 +33,6 @@ test('the saved demo check: verdict, drawings and notice, no axe violations', as
 
 test('input problems on the form, settings and about: no axe violations', async ({ page }) => {
 	await openCheck(page);
-	await readLoadFactor(page);
-	await page.getByTestId('start-blank').click();
 	await expect(page.getByTestId('result-issues')).toBeVisible();
 	await page.screenshot({ path: 'test-results/screens/check-blank-360.png', fullPage: true });
 	expect(await scan(page, 'blank check')).toEqual([]);
@@ -53,7 +51,7 @@ test.describe('on a tablet', () => {
 	test.use({ viewport: { width: 820, height: 1180 } });
 
 	test('the check uses the width and stays clean for axe', async ({ page }) => {
-		await openCheck(page);
+		await openDemo(page);
 		await readLoadFactor(page);
 		await page.screenshot({ path: 'test-results/screens/check-tablet.png', fullPage: true });
 		expect(await scan(page, 'tablet check')).toEqual([]);
@@ -65,7 +63,7 @@ for (const theme of ['dark', 'contrast'] as const) {
 		await page.goto('/settings');
 		await page.getByTestId(`theme-${theme}`).check();
 		await expect(page.locator('html')).toHaveAttribute('data-theme', theme);
-		await openCheck(page);
+		await openDemo(page);
 		await readLoadFactor(page);
 		await page.screenshot({ path: `test-results/screens/check-${theme}-360.png`, fullPage: true });
 		expect(await scan(page, `${theme} check`)).toEqual([]);

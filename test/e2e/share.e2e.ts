@@ -4,7 +4,7 @@
  * says so; the link reopens the same inputs.
  */
 import { ENGINEER_NOTICE_SHORT } from '../../src/lib/engine/notice';
-import { fieldAt, openCheck, readLoadFactor, typeInto } from './check-helpers';
+import { expectBlankCheck, fieldAt, openCheck, openDemo, readLoadFactor, typeInto } from './check-helpers';
 import { test, expect } from './fixtures';
 
 const WORDS = { pass: 'PASS', fail: 'FAIL', 'outside-scope': 'OUTSIDE SCOPE' } as const;
@@ -24,7 +24,7 @@ test.describe('with the Web Share API', () => {
 		page,
 		baseURL
 	}) => {
-		await openCheck(page);
+		await openDemo(page);
 		const demoLambda = await readLoadFactor(page);
 		await typeInto(page, 'loads[2].value', '9,5');
 		// A smaller hoist load: λ on it rises.
@@ -49,7 +49,7 @@ test.describe('with the Web Share API', () => {
 	});
 
 	test('shares the long form too', async ({ page }) => {
-		await openCheck(page);
+		await openDemo(page);
 		await readLoadFactor(page);
 		await page.getByTestId('share-long').click();
 		const [sent] = await page.evaluate(() => (window as unknown as { sharedData: ShareData[] }).sharedData);
@@ -66,7 +66,7 @@ test.describe('without the Web Share API', () => {
 		await page.addInitScript(() => {
 			Object.defineProperty(Navigator.prototype, 'share', { value: undefined, configurable: true });
 		});
-		await openCheck(page);
+		await openDemo(page);
 		await readLoadFactor(page);
 		const verdict = (await page.getByTestId('verdict').getAttribute('data-verdict')) as keyof typeof WORDS;
 		await page.getByTestId('share-summary').click();
@@ -81,7 +81,7 @@ test.describe('without the Web Share API', () => {
 test('a damaged link is refused with a message and the form still works', async ({ page }) => {
 	await openCheck(page, '/check#c=1.@@not-base64@@');
 	await expect(page.getByTestId('session-message')).not.toBeEmpty();
-	await readLoadFactor(page);
+	await expectBlankCheck(page);
 });
 
 test('a link with a hollow case shows a message instead of waiting forever', async ({ page }) => {
@@ -92,12 +92,12 @@ test('a link with a hollow case shows a message instead of waiting forever', asy
 	await expect(page.getByTestId('session-message')).toHaveText(
 		'This link does not hold a complete check (beam.spans: missing), so it was not opened. Ask for the link again.'
 	);
-	// The form falls back to a case it can compute, and the screen never broke.
-	await readLoadFactor(page);
+	// The form falls back to a new blank check that says what to enter, and the screen never broke.
+	await expectBlankCheck(page);
 	// Only the fragment differs: leave first, or the browser treats it as a jump within the page.
 	await page.goto('/');
 	await openCheck(page, link({ B: {} }));
 	await expect(page.getByTestId('session-message')).toContainText('damaged or cut short');
-	await readLoadFactor(page);
+	await expectBlankCheck(page);
 	expect(pageErrors).toEqual([]);
 });

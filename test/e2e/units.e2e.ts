@@ -60,7 +60,7 @@ test('US units change the fields and results shown, not the stored case', async 
 	await typeInto(page, 'beam.spans[0]', '16');
 	await page.getByTestId('open-save').click();
 	await page.getByTestId('save-confirm').click();
-	await expect(page.getByTestId('session-message')).toContainText('Saved');
+	await expect(page.getByTestId('save-status')).toContainText('Saved');
 	expect((await readStoredCase(page, id)).beam.spans[0]).toBeCloseTo(16 * FT, 12);
 
 	await chooseUnits(page, 'SI');

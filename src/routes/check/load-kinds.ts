@@ -1,3 +1,4 @@
+import { BLANK, isBlank } from '$lib/ui/state/blank-value';
 import type { CaseAction, CaseLoad } from '$lib/ui/state/case-file';
 
 /** How a load is offered on the form; `whole` and `part` are both uniform loads in the case. */
@@ -24,6 +25,8 @@ export const ACTION_CHOICES: readonly { id: CaseAction; label: string }[] = [
 export function readLoadChoice(load: CaseLoad, length: number): LoadChoice {
 	if (load.kind === 'point') return 'point';
 	if (load.kind === 'linear') return 'linear';
+	// Ends not entered yet: the form shows them to be filled in.
+	if (isBlank(load.from) || isBlank(load.to)) return 'part';
 	return Math.abs(load.from) < 1e-9 && Math.abs(load.to - length) < 1e-9 ? 'whole' : 'part';
 }
 
@@ -33,7 +36,8 @@ export function readLoadChoice(load: CaseLoad, length: number): LoadChoice {
  * convertLoad({ kind: 'point', x: 2, value: 10, action: 'temporary' }, 'whole', 6).to // 6
  */
 export function convertLoad(load: CaseLoad, choice: LoadChoice, length: number): CaseLoad {
-	const size = load.kind === 'linear' ? Math.max(load.start, load.end) : load.value;
+	// A size not entered yet stays empty (Math.max would read it as 0).
+	const size = load.kind !== 'linear' ? load.value : isBlank(load.end) ? load.start : isBlank(load.start) ? load.end : Math.max(load.start, load.end);
 	const { action } = load;
 	if (choice === 'point') return { kind: 'point', x: round(length / 2), value: size, action };
 	if (choice === 'whole') return { kind: 'uniform', from: 0, to: length, value: size, action };
@@ -41,9 +45,16 @@ export function convertLoad(load: CaseLoad, choice: LoadChoice, length: number):
 	return { kind: 'linear', from: 0, to: length, start: 0, end: size, action };
 }
 
-/** A new load of a kind, with round starting values (SI). */
-export function createLoad(choice: LoadChoice, length: number, action: CaseAction): CaseLoad {
-	return convertLoad({ kind: 'point', x: 0, value: choice === 'point' ? 10 : 2, action }, choice, length);
+/**
+ * A new load of a kind: size, position and action left for the user (a made-up number could be
+ * taken for a measured one); a uniform or varying load spans the whole beam.
+ */
+export function createLoad(choice: LoadChoice, length: number): CaseLoad {
+	const action = BLANK as unknown as CaseAction;
+	if (choice === 'point') return { kind: 'point', x: BLANK, value: BLANK, action };
+	if (choice === 'whole') return { kind: 'uniform', from: 0, to: length, value: BLANK, action };
+	if (choice === 'part') return { kind: 'uniform', from: BLANK, to: BLANK, value: BLANK, action };
+	return { kind: 'linear', from: 0, to: length, start: BLANK, end: BLANK, action };
 }
 
 function round(v: number): number {

@@ -27,6 +27,14 @@ function refuse(path: string, code: string, message: string): Checked<ReadSpec> 
 	return { ok: false, issues: [{ path, code, message, severity: 'error' }] };
 }
 
+/** Said when a measured rolled I comes without its root radius. */
+const ROOT_RADIUS_ASSUMED = {
+	path: 'r',
+	code: 'root-radius-assumed',
+	message: 'No root radius given: taken as r = 0, which gives the smallest section properties.',
+	severity: 'warning'
+} as const;
+
 /** Wraps a measured section. */
 function makeMeasured(shape: Dimensioned, dims: SectionDims): Checked<ReadSpec> {
 	const designation = describeMeasured(shape, dims);
@@ -56,8 +64,12 @@ export function readSectionSpec(spec: Exclude<SectionSpec, { mp: number }>): Che
 		return readDesignation(typeof spec.designation === 'string' ? spec.designation : '');
 	}
 	switch (spec.shape) {
-		case 'I':
-			return makeMeasured('I', { h: spec.h, b: spec.b, tw: spec.tw, tf: spec.tf, r: spec.r });
+		case 'I': {
+			const measured = makeMeasured('I', { h: spec.h, b: spec.b, tw: spec.tw, tf: spec.tf, r: spec.r ?? 0 });
+			// No root radius measured: r = 0 is the cautious reading (smallest area, I and W).
+			if (spec.r === undefined && measured.ok) measured.warnings.push(ROOT_RADIUS_ASSUMED);
+			return measured;
+		}
 		case 'welded-I':
 			return makeMeasured('welded-I', { h: spec.h, b: spec.b, tw: spec.tw, tf: spec.tf, r: 0 });
 		case 'RHS': {

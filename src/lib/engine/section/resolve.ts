@@ -66,5 +66,5 @@ export function resolveSection(
 		loss,
 		governingThickness: findGoverningThickness(shape, dims)
 	};
-	return { ok: true, value, warnings: [] };
+	return { ok: true, value, warnings: read.warnings };
 }

@@ -75,7 +75,7 @@ export type HollowProcess = 'hot' | 'cold';
  */
 export type SectionSpec =
 	| { designation: string }
-	| { shape: 'I'; h: number; b: number; tw: number; tf: number; r: number }
+	| { shape: 'I'; h: number; b: number; tw: number; tf: number; r?: number }
 	| { shape: 'welded-I'; h: number; b: number; tw: number; tf: number }
 	| { shape: 'RHS'; h: number; b: number; t: number; process?: HollowProcess }
 	| { shape: 'CHS'; d: number; t: number }

@@ -4,8 +4,9 @@ import type { CaseFile, CaseLoad } from './case-file';
 import { createDemoCase } from './demo-case';
 import { describeField } from './field-kinds';
 import { readPath, shiftListKeys, writePath } from './field-path';
-import { collectGeneral, mergeMessages } from './form-messages';
-import { formatFieldValue, parseFieldText } from './field-text';
+import { isBlank } from './blank-value';
+import { collectGeneral, listProblems, mergeMessages } from './form-messages';
+import { formatFieldValue, parseFieldText, readBlankText } from './field-text';
 import type { CheckOutcome } from './check-outcome';
 
 /** What is kept as the draft: the case plus anything typed that is not (yet) a valid value. */
@@ -50,9 +51,12 @@ export class CheckForm {
 	messages = $derived(mergeMessages(this.local, this.outcome, this.case));
 	/** Engine issues that belong to no single field. */
 	generalIssues = $derived(collectGeneral(this.outcome, this.case));
+	/** Every field to fix, first to fix first (the result bar and the save button name it). */
+	problems = $derived(listProblems(this.local, this.outcome, this.case));
 	#options: CheckFormOptions;
 	#timer: ReturnType<typeof setTimeout> | undefined;
 	#seq = 0;
+	#heldLength: number | undefined;
 
 	constructor(options: CheckFormOptions) {
 		this.#options = options;
@@ -66,11 +70,25 @@ export class CheckForm {
 	/** Takes typed text for a numeric field; a valid number goes into the case in SI. */
 	setText(path: string, text: string): void {
 		this.texts[path] = text;
-		const parsed = parseFieldText(text, describeField(path, this.case), this.units);
+		const info = describeField(path, this.case);
+		const blank = readBlankText(text, info);
+		if (blank.blank) {
+			// Whole-beam loads follow the span retyped after it was cleared.
+			if (path.startsWith('beam.spans')) this.#heldLength ??= totalLength(this.case.beam);
+			// A cleared field holds no value, never the last one typed.
+			writePath(this.case, path, blank.value);
+			delete this.local[path];
+			this.schedule();
+			return;
+		}
+		const parsed = parseFieldText(text, info, this.units);
 		if (parsed.ok) {
-			const before = totalLength(this.case.beam);
+			const before = this.#heldLength ?? totalLength(this.case.beam);
 			writePath(this.case, path, parsed.value);
-			if (path.startsWith('beam.spans')) this.#stretchFullLoads(before);
+			if (path.startsWith('beam.spans')) {
+				this.#stretchFullLoads(before);
+				this.#heldLength = undefined;
+			}
 			delete this.local[path];
 		} else {
 			this.local[path] = parsed.message;
@@ -136,6 +154,7 @@ export class CheckForm {
 	/** Replaces the whole case (opened, restored, shared link, demo) and runs it at once. */
 	load(c: CaseFile, options: { savedId?: string | null; texts?: Record<string, string>; units?: UnitSystem } = {}): void {
 		this.case = c;
+		this.#heldLength = undefined;
 		this.texts = {};
 		this.local = {};
 		this.savedId = options.savedId ?? null;
@@ -144,9 +163,12 @@ export class CheckForm {
 		this.units = typedIn;
 		for (const [path, text] of Object.entries(options.texts ?? {})) {
 			// Only numeric fields are re-read; a search text (designation) restarts from the case.
-			if (typeof readPath(c, path) !== 'number') continue;
+			const value = readPath(c, path);
+			if (typeof value !== 'number' && !isBlank(value)) continue;
 			this.texts[path] = text;
-			const parsed = parseFieldText(text, describeField(path, c), typedIn);
+			const info = describeField(path, c);
+			if (readBlankText(text, info).blank) continue;
+			const parsed = parseFieldText(text, info, typedIn);
 			if (!parsed.ok) this.local[path] = parsed.message;
 		}
 		this.setUnits(current);

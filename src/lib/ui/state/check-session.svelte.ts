@@ -1,21 +1,25 @@
 import { describeIncomplete, findShapeProblem, openSharedCase } from '$lib/share';
 import {
 	getCheck,
-	loadDraft,
+	listChecks,
 	markInstallExplained,
 	saveCheck,
 	shouldExplainInstall,
 	updateCheck,
 	type CheckRecord,
+	type CheckStore,
 	type FactorSet,
 	type Place,
 	type Settings
 } from '$lib/storage';
 import { applySettingsDefaults } from './case-defaults';
 import { asCaseFile, asStoredCase, type CaseFile } from './case-file';
-import { CheckForm } from './check-form.svelte';
+import { CheckForm, type FormDraft } from './check-form.svelte';
 import { createBlankCase, createDemoCase } from './demo-case';
-import { DraftKeeper, readDraft } from './draft-keeper';
+import { loadDraft, moveDraft } from '$lib/storage/drafts';
+import { DraftKeeper, draftSlot, readDraft } from './draft-keeper';
+import { DraftShelf } from './draft-shelf.svelte';
+import { findSaveBlock } from './save-block';
 import { ENGINE_VERSION } from './engine-version';
 import { loadEngineTools, type EngineTools } from './engine-tools';
 import { EngineRunner } from './engine-runner';
@@ -40,24 +44,39 @@ export class CheckSession {
 	/** The engine, once loaded. */
 	tools = $state.raw<EngineTools | null>(null);
 	record = $state.raw<CheckRecord | null>(null);
-	source = $state<CheckSource>('demo');
-	/** Plain message after open/save (e.g. a damaged link, storage refused). */
+	source = $state<CheckSource>('blank');
+	/** Plain message after opening (e.g. a damaged link, storage refused). */
 	message = $state('');
+	/** The answer to the last save, shown and read out beside the save button. */
+	saveStatus = $state('');
+	/** Said while the form holds edits of the saved check that are not saved yet. */
+	unsavedNote = $state('');
+	/** No check saved on this phone yet: the worked demo is offered. */
+	firstRun = $state(false);
+	readonly shelf = new DraftShelf();
 	/** Shown once after the first save: what installing to the home screen does. */
 	explainInstall = $state(false);
 	saving = $state(false);
 	/** True once `open` has put a case in the form. */
 	ready = $state(false);
 
-	/** Opens what the address asks for: ?id= a saved check, #c= a shared link, else the draft or the demo. */
+	/**
+	 * Opens what the address asks for: ?new a new blank check (the current unsaved one is set
+	 * aside), ?id= a saved check (with its unsaved edits, said on screen), #c= a shared link, else
+	 * the new check in progress or a blank one.
+	 */
 	async open(url: URL, defaults: { settings: Settings; set: FactorSet }): Promise<void> {
+		this.ready = false;
+		this.message = '';
+		this.saveStatus = '';
+		this.unsavedNote = '';
 		try {
+			await this.drafts.flush();
 			await this.#open(url, defaults);
 		} catch (error) {
-			// Never leave the screen without a case: say what failed and start from the demo.
+			// Never leave the screen without a case: say what failed and start a blank one.
 			this.message = `The check could not be opened: ${error instanceof Error ? error.message : String(error)}`;
-			this.source = 'demo';
-			this.form.load(createDemoCase());
+			this.#blank(defaults);
 		} finally {
 			this.ready = true;
 		}
@@ -66,96 +85,148 @@ export class CheckSession {
 	async #open(url: URL, defaults: { settings: Settings; set: FactorSet }): Promise<void> {
 		const [store, tools] = await Promise.all([connectStore(), loadEngineTools()]);
 		this.tools = tools;
-		const draft = store ? await loadDraft(store) : null;
-		const restored = draft?.ok && draft.value ? readDraft(draft.value.form) : null;
+		if (!store) this.message = 'This browser does not let the app store data: checks cannot be saved here.';
+		const current = store ? await this.#currentNewDraft(store) : null;
+		const listed = store ? await listChecks(store) : null;
+		this.firstRun = !(listed?.ok && listed.value.length > 0);
+		await this.shelf.refresh();
 		const id = url.searchParams.get('id');
+		if (url.searchParams.has('new')) {
+			if (current) await this.shelf.setAside();
+			return this.#blank(defaults);
+		}
 		if (id && store) {
 			const found = await getCheck(store, id);
 			const problem = found.ok ? findShapeProblem(found.value.input) : null;
-			if (found.ok && problem) {
-				this.message = describeIncomplete(problem, 'record');
-			} else if (found.ok) {
-				this.record = found.value;
-				this.source = 'saved';
-				// Edits in progress on this very check (e.g. before a reload) win over the stored copy.
-				if (restored?.savedId === id) this.form.load(restored.case, { savedId: id, texts: restored.texts, units: restored.units });
-				else this.form.load(asCaseFile(found.value.input), { savedId: id });
-				return;
-			} else this.message = found.message;
+			if (found.ok && problem) this.message = describeIncomplete(problem, 'record');
+			else if (found.ok) return this.#openSaved(store, found.value);
+			else this.message = found.message;
 		}
 		if (url.hash.includes('c=')) {
 			const decoded = openSharedCase(url.hash);
 			if (decoded.ok) {
-				this.source = 'link';
-				this.form.load(asCaseFile(decoded.value));
+				if (current) await this.shelf.setAside();
+				this.#show('link', null, asCaseFile(decoded.value));
 				return;
 			}
 			this.message = decoded.issues.map((issue) => issue.message).join(' ');
 		}
-		if (restored && restored.savedId === null) {
-			this.source = 'draft';
-			this.form.load(restored.case, { texts: restored.texts, units: restored.units });
+		if (current) {
+			this.#show('draft', null, current.case, current);
 			return;
 		}
-		if (!store) this.message = 'This browser does not let the app store data: checks cannot be saved here.';
-		// The last draft belonged to a saved check (it is kept there): a new check starts empty.
-		if (restored) this.startBlank(defaults);
-		else {
-			this.source = 'demo';
-			this.form.load(createDemoCase());
-		}
+		this.#blank(defaults);
 	}
 
-	/** Starts again from an empty form with the user's defaults (the draft follows). */
-	startBlank(defaults: { settings: Settings; set: FactorSet }): void {
-		this.record = null;
-		this.source = 'blank';
-		this.form.load(applySettingsDefaults(createBlankCase(), defaults.settings, defaults.set));
-		this.form.schedule();
+	/** The draft of the new check in progress; an older app's draft of a saved check moves to its own slot. */
+	async #currentNewDraft(store: CheckStore): Promise<FormDraft | null> {
+		const stored = await loadDraft(store);
+		const draft = stored.ok && stored.value ? readDraft(stored.value.form) : null;
+		if (draft?.savedId) await moveDraft(store, draftSlot(null), draftSlot(draft.savedId));
+		return draft && !draft.savedId ? draft : null;
 	}
 
-	startDemo(): void {
-		this.record = null;
-		this.source = 'demo';
-		this.form.load(createDemoCase());
-		this.form.schedule();
+	// Unsaved edits of this check are shown, never hidden, and the screen says they are not saved.
+	async #openSaved(store: CheckStore, record: CheckRecord): Promise<void> {
+		const stored = await loadDraft(store, draftSlot(record.id));
+		const draft = stored.ok && stored.value ? readDraft(stored.value.form) : null;
+		const differs = draft && JSON.stringify(draft.case) !== JSON.stringify(record.input);
+		if (draft && differs) {
+			this.#show('saved', record, draft.case, draft);
+			const at = stored.ok && stored.value ? describeTime(stored.value.savedAt) : '';
+			this.unsavedNote = `Unsaved changes from ${at} are shown. Save them, or go back to the saved version.`;
+		} else this.#show('saved', record, asCaseFile(record.input));
 	}
 
-	/** Saves a new check, or the edited one with a revision of its previous state. */
+	#show(source: CheckSource, record: CheckRecord | null, c: CaseFile, draft?: FormDraft): void {
+		this.record = record;
+		this.source = source;
+		this.form.load(c, { savedId: record?.id ?? null, texts: draft?.texts, units: draft?.units });
+	}
+
+	#blank(defaults: { settings: Settings; set: FactorSet }): void {
+		this.#show('blank', null, applySettingsDefaults(createBlankCase(), defaults.settings, defaults.set));
+	}
+
+	/** The worked demo, as a new unsaved check (the one in progress is set aside first). */
+	async startDemo(): Promise<void> {
+		await this.drafts.flush();
+		await this.shelf.setAside();
+		this.#show('demo', null, createDemoCase());
+	}
+
+	/** Takes a set-aside new check back into the form; the one in progress is set aside. */
+	async reopenAside(slot: string): Promise<void> {
+		await this.drafts.flush();
+		if (!this.record) await this.shelf.setAside();
+		const draft = await this.shelf.takeBack(slot);
+		if (draft) this.#show('draft', null, draft.case, draft);
+	}
+
+	/** Puts an earlier version of this check in the form, as an unsaved edit of the same check. */
+	restoreRevision(index: number): void {
+		const record = this.record;
+		const revision = record?.revisions[index];
+		if (!record || !revision) return;
+		this.form.load(asCaseFile(revision.input), { savedId: record.id });
+		this.drafts.queue(this.form.snapshot());
+		this.unsavedNote = `Version ${index + 1} is in the form, not saved yet. Saving keeps the version saved now in the list.`;
+	}
+
+	/** Drops the unsaved edits of this saved check (the user asked) and shows it as saved. */
+	async showSaved(): Promise<void> {
+		const record = this.record;
+		if (!record) return;
+		await this.drafts.discard(record.id);
+		this.#show('saved', record, asCaseFile(record.input));
+		this.unsavedNote = '';
+	}
+
+	/** Saves a finished check (a new one, or the edited one with a revision of its previous state). */
 	async save(details: { title: string; place: Place; notes: string }): Promise<boolean> {
+		this.saveStatus = '';
 		const store = await connectStore();
 		if (!store) {
-			this.message = 'Storage is not available in this browser; the check was not saved.';
+			this.saveStatus = 'Storage is not available in this browser; the check was not saved.';
 			return false;
 		}
 		this.saving = true;
-		await this.form.runNow();
-		const outcome = this.form.outcome;
-		const result = outcome?.state === 'report' ? outcome.report : null;
-		const input = $state.snapshot(this.form.case) as CaseFile;
-		input.title = details.title;
-		this.form.case.title = details.title;
 		try {
+			await this.form.runNow();
+			// Only a check with a result is saved; an incomplete one stays a draft.
+			const block = findSaveBlock(this.form.problems, this.form.outcome);
+			const outcome = this.form.outcome;
+			if (block || outcome?.state !== 'report') return this.#fail(`${block?.reason ?? 'No result yet'}. It is kept as a draft`);
+			const input = $state.snapshot(this.form.case) as CaseFile;
+			input.title = details.title;
+			this.form.case.title = details.title;
+			const wasNew = this.record === null;
 			if (this.record) {
 				const updated = await updateCheck(store, this.record.id, {
 					...details,
 					input: asStoredCase(input),
-					result,
+					result: outcome.report,
 					engineVersion: ENGINE_VERSION
 				});
 				if (!updated.ok) return this.#fail(updated.message);
 				this.record = updated.value;
-				this.message = `Saved. ${updated.value.revisions.length} earlier version${updated.value.revisions.length === 1 ? '' : 's'} kept.`;
+				const kept = updated.value.revisions.length;
+				this.saveStatus = `Saved. ${kept} earlier version${kept === 1 ? '' : 's'} kept.`;
 			} else {
-				const saved = await saveCheck(store, { ...details, input: asStoredCase(input), result, engineVersion: ENGINE_VERSION });
+				const saved = await saveCheck(store, { ...details, input: asStoredCase(input), result: outcome.report, engineVersion: ENGINE_VERSION });
 				if (!saved.ok) return this.#fail(saved.message);
 				this.record = saved.value.record;
-				this.message = describePersistence(saved.value.persistence);
+				this.saveStatus = describePersistence(saved.value.persistence);
 				const explain = await shouldExplainInstall(store);
 				this.explainInstall = explain.ok && explain.value;
 			}
+			this.firstRun = false;
+			this.unsavedNote = '';
+			this.source = 'saved';
 			this.form.savedId = this.record.id;
-			await this.drafts.flush(this.form.snapshot());
+			// What was saved needs no draft: the new check's slot is free for the next one.
+			if (wasNew) await this.drafts.discard(null);
+			await this.drafts.discard(this.record.id);
 			return true;
 		} finally {
 			this.saving = false;
@@ -169,7 +240,7 @@ export class CheckSession {
 	}
 
 	#fail(message: string): false {
-		this.message = `Not saved: ${message}`;
+		this.saveStatus = `Not saved: ${message}.`;
 		return false;
 	}
 }
@@ -178,4 +249,8 @@ function describePersistence(answer: 'granted' | 'denied' | 'unsupported' | null
 	if (answer === 'granted') return 'Saved. This browser has agreed to keep your checks.';
 	if (answer === null) return 'Saved.';
 	return 'Saved. This browser may clear stored data when space runs low: export a backup now and then.';
+}
+
+function describeTime(iso: string): string {
+	return new Date(iso).toLocaleString();
 }

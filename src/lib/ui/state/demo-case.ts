@@ -1,3 +1,4 @@
+import { BLANK } from './blank-value';
 import type { CaseFile } from './case-file';
 
 /** Title prefix that marks a demo record wherever it is shown or shared. */
@@ -35,14 +36,15 @@ export function createDemoCase(): CaseFile {
 	};
 }
 
-/** A fresh case with one simply supported span and no loads or section yet. */
+/** A fresh case with one simply supported span of unknown length, and no loads or section yet. */
 export function createBlankCase(): CaseFile {
 	const demo = createDemoCase();
 	return {
 		...demo,
 		title: '',
 		// No bearing lengths: the engine's own (cautious) defaults apply until the engineer enters them.
-		beam: { ...demo.beam, spans: [5], section: { designation: '' }, sectionLoss: 0, bearing: undefined, bearingLoads: undefined },
+		// The span and section start empty: nothing on screen that could pass for a measurement.
+		beam: { ...demo.beam, spans: [BLANK], section: { designation: '' }, sectionLoss: 0, bearing: undefined, bearingLoads: undefined },
 		loads: []
 	};
 }

@@ -1,4 +1,4 @@
-import { saveDraft } from '$lib/storage';
+import { clearDraft, saveDraft } from '$lib/storage/drafts';
 import type { FormDraft } from './check-form.svelte';
 import { connectStore } from './store-connection';
 
@@ -25,19 +25,39 @@ export class DraftKeeper {
 		}
 	}
 
+	/** Forgets a form's draft once anything queued is written (after a save or a discard). */
+	async discard(savedId: string | null): Promise<void> {
+		await this.flush();
+		const store = await connectStore();
+		if (store) await clearDraft(store, draftSlot(savedId));
+	}
+
 	async #drain(): Promise<void> {
 		try {
 			const store = await connectStore();
 			while (store && this.#latest) {
 				const draft = this.#latest;
 				this.#latest = null;
-				await saveDraft(store, { form: draft, recordId: draft.savedId });
+				await saveDraft(store, { form: draft, recordId: draft.savedId, slot: draftSlot(draft.savedId) });
 			}
 		} finally {
 			this.#writing = null;
 		}
 	}
 }
+
+/**
+ * The slot a form's draft is kept in: each saved check has its own, so unsaved edits of one are
+ * never overwritten by another; a new check uses the current slot.
+ * @example
+ * draftSlot('abc') // 'check:abc'
+ */
+export function draftSlot(savedId: string | null): string {
+	return savedId ? `check:${savedId}` : 'current';
+}
+
+/** Slot names of new checks set aside by "New check" start with this. */
+export const ASIDE_PREFIX = 'aside:';
 
 /**
  * Reads a stored draft back, or null when it is not a draft this form wrote.

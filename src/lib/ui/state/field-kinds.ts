@@ -12,6 +12,8 @@ export type FieldRule = 'positive' | 'non-negative' | 'any';
 export interface FieldInfo {
 	kind: FieldKind;
 	rule: FieldRule;
+	/** May be left empty: the engine then takes its stated default. */
+	optional?: boolean;
 }
 
 const FIXED: Record<string, FieldInfo> = {
@@ -19,7 +21,8 @@ const FIXED: Record<string, FieldInfo> = {
 	'beam.section.b': { kind: 'dimension', rule: 'positive' },
 	'beam.section.tw': { kind: 'dimension', rule: 'positive' },
 	'beam.section.tf': { kind: 'dimension', rule: 'positive' },
-	'beam.section.r': { kind: 'dimension', rule: 'non-negative' },
+	// Left blank: r = 0, the smallest section properties (the engine says so in a warning).
+	'beam.section.r': { kind: 'dimension', rule: 'non-negative', optional: true },
 	'beam.section.mp': { kind: 'moment', rule: 'positive' },
 	'beam.grade.fy': { kind: 'stress', rule: 'positive' },
 	'beam.sectionLoss': { kind: 'dimension', rule: 'non-negative' },

@@ -1,4 +1,5 @@
 import { fromDisplay, parseDecimal, toDisplay, type Parsed, type UnitSystem } from '$lib/ui/format';
+import { BLANK } from './blank-value';
 import { checkRule, type FieldInfo } from './field-kinds';
 
 /**
@@ -46,4 +47,17 @@ export function parsePositionList(
 		values.push(parsed.value);
 	}
 	return { ok: true, values };
+}
+
+/**
+ * An empty text: the value it leaves in the case (blank when required, absent when optional).
+ * @example
+ * readBlankText(' ', { kind: 'dimension', rule: 'non-negative', optional: true }) // { blank: true, value: undefined }
+ */
+export function readBlankText(
+	text: string,
+	info: FieldInfo
+): { blank: true; value: number | undefined } | { blank: false } {
+	if (text.trim() !== '') return { blank: false };
+	return { blank: true, value: info.optional ? undefined : BLANK };
 }

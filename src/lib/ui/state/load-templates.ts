@@ -15,6 +15,8 @@ export interface LoadTemplate {
 	factorLabel: string | null;
 	/** Multiplier on the base load (demo value). */
 	factor: number;
+	/** True for equipment that may hang below the beam: the user says where it hangs. */
+	hangs?: boolean;
 }
 
 /** Demo templates (common practice, invented rounded values; never design values). */
@@ -25,7 +27,8 @@ export const LOAD_TEMPLATES: readonly LoadTemplate[] = [
 		baseLabel: 'Rated load + hoist + trolley',
 		base: 10.1,
 		factorLabel: 'Dynamic factor',
-		factor: 1.25
+		factor: 1.25,
+		hangs: true
 	},
 	{
 		id: 'pallets',
