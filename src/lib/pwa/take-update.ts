@@ -31,8 +31,9 @@ export function takeWaitingWorker(
 ): Promise<HandOver> {
 	if (!waiting) return Promise.resolve('none');
 	return new Promise((resolve) => {
-		let timer: ReturnType<typeof setTimeout> | undefined;
 		let done = false;
+		// The fallback fires long after `finish` below exists.
+		const timer = setTimeout(() => finish('timeout'), limit);
 		const finish = (how: HandOver) => {
 			if (done) return;
 			done = true;
@@ -48,7 +49,6 @@ export function takeWaitingWorker(
 		}
 		waiting.addEventListener('statechange', look);
 		container.addEventListener('controllerchange', look);
-		timer = setTimeout(() => finish('timeout'), limit);
 		waiting.postMessage(SKIP_WAITING);
 		// Another tab may have finished the hand-over already.
 		look();

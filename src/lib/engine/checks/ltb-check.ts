@@ -10,7 +10,7 @@ import type { CheckContext } from './context';
 import { prepareCriticalMoment } from './mcr';
 import { spanOf } from './plastic-bending';
 import { computeLoadHeight, type LoadHeight, type RestraintSegment } from './restraint';
-import type { LtbSegment, SegmentLoad } from './segment-moment';
+import type { SegmentLoad } from './segment-moment';
 import type { CheckResult } from './types';
 import { findWorstArrangement } from './worst-arrangement';
 

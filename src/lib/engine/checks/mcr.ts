@@ -165,7 +165,10 @@ function listSubintervalEdges(seg: LtbSegment, N: number): number[] {
 	const breaks = new Set<number>([0, L]);
 	for (const l of seg.loads) {
 		if (l.kind === 'point') breaks.add(l.x);
-		else (breaks.add(l.from), breaks.add(l.to));
+		else {
+			breaks.add(l.from);
+			breaks.add(l.to);
+		}
 	}
 	const edges = [...breaks].filter((x) => x >= 0 && x <= L).sort((a, b) => a - b);
 	const out = [0];
