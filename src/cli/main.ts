@@ -23,7 +23,9 @@ main(process.argv.slice(2)).then(
 		process.exitCode = code;
 	},
 	(error: unknown) => {
-		process.stderr.write(`internal error: ${error instanceof Error ? error.stack : String(error)}\n`);
+		process.stderr.write(
+			`internal error: ${error instanceof Error ? error.stack : String(error)}\n`
+		);
 		process.exitCode = 1;
 	}
 );

@@ -49,13 +49,22 @@ function drawing(zoom: number, roundBackground: boolean): Shape[] {
 		{ inside: background, colour: SLATE },
 		{ inside: triangle(z(0.16), z(0.62), z(0.08), z(0.76), z(0.24), z(0.76)), colour: PAPER },
 		{ inside: triangle(z(0.84), z(0.62), z(0.76), z(0.76), z(0.92), z(0.76)), colour: PAPER },
-		{ inside: (x, y) => segmentDistance(x, y, z(0.12), z(0.56), z(0.5), z(0.66)) <= beam, colour: ORANGE },
-		{ inside: (x, y) => segmentDistance(x, y, z(0.5), z(0.66), z(0.88), z(0.56)) <= beam, colour: ORANGE },
+		{
+			inside: (x, y) => segmentDistance(x, y, z(0.12), z(0.56), z(0.5), z(0.66)) <= beam,
+			colour: ORANGE
+		},
+		{
+			inside: (x, y) => segmentDistance(x, y, z(0.5), z(0.66), z(0.88), z(0.56)) <= beam,
+			colour: ORANGE
+		},
 		{ inside: (x, y) => Math.hypot(x - z(0.5), y - z(0.66)) <= ring, colour: ORANGE },
 		{ inside: (x, y) => Math.hypot(x - z(0.5), y - z(0.66)) <= ring * 0.5, colour: PAPER },
 		// The load arrow bears down on the hinge.
 		{ inside: triangle(z(0.5), z(0.52), z(0.4), z(0.36), z(0.6), z(0.36)), colour: PAPER },
-		{ inside: (x, y) => Math.abs(x - z(0.5)) <= 0.02 * zoom && y >= z(0.16) && y <= z(0.38), colour: PAPER }
+		{
+			inside: (x, y) => Math.abs(x - z(0.5)) <= 0.02 * zoom && y >= z(0.16) && y <= z(0.38),
+			colour: PAPER
+		}
 	];
 }
 
@@ -66,7 +75,10 @@ function rasterise(size: number, shapes: Shape[]): Buffer {
 	for (let py = 0; py < size; py++) {
 		const row = Buffer.alloc(1 + size * 4);
 		for (let px = 0; px < size; px++) {
-			let r = 0, g = 0, b = 0, a = 0;
+			let r = 0,
+				g = 0,
+				b = 0,
+				a = 0;
 			for (let sy = 0; sy < samples; sy++) {
 				for (let sx = 0; sx < samples; sx++) {
 					const x = (px + (sx + 0.5) / samples) / size;

@@ -66,6 +66,7 @@ server.listen(port, host, () => {
 		.map((n) => `http://${n!.address}:${port}`);
 	console.log(`Hingepoint is served from ${root}`);
 	console.log(`  on this machine:  http://localhost:${port}`);
-	for (const address of lan) console.log(`  on your network:  ${address}  (open on a phone on the same network)`);
+	for (const address of lan)
+		console.log(`  on your network:  ${address}  (open on a phone on the same network)`);
 	if (lan.length === 0) console.log('  no network address found: only this machine can open it');
 });

@@ -22,9 +22,9 @@ function assetsOf(html: string): string[] {
 function importsOf(file: string): string[] {
 	const code = readFileSync(join(BUILD, file), 'utf8');
 	const dir = file.slice(0, file.lastIndexOf('/') + 1);
-	return [...code.matchAll(/(?:^|[;}\s])import\s*(?:[\w${}\s,*]+from\s*)?["']([^"']+\.js)["']/g)].map((m) =>
-		new URL(m[1], `http://x/${dir}`).pathname.slice(1)
-	);
+	return [
+		...code.matchAll(/(?:^|[;}\s])import\s*(?:[\w${}\s,*]+from\s*)?["']([^"']+\.js)["']/g)
+	].map((m) => new URL(m[1], `http://x/${dir}`).pathname.slice(1));
 }
 
 function closure(entries: string[]): string[] {

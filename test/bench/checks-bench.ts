@@ -50,10 +50,22 @@ export function runChecksBench(): void {
 	console.log(
 		`single span, restrained at supports only (LTB): ${medianMs(() => run(single({ lateral: 'ends-only' })), 10, 2).toFixed(1)} ms`
 	);
-	const segment = { length: 6000, momentStart: 0, momentEnd: 0, loads: [{ kind: 'point' as const, x: 3000, value: 1e4 }] };
-	const mcr = () => computeCriticalMoment({ segment, EIz: 1.6e12, GIt: 1.2e10, EIw: 3.4e16, zg: 150 });
+	const segment = {
+		length: 6000,
+		momentStart: 0,
+		momentEnd: 0,
+		loads: [{ kind: 'point' as const, x: 3000, value: 1e4 }]
+	};
+	const mcr = () =>
+		computeCriticalMoment({ segment, EIz: 1.6e12, GIt: 1.2e10, EIw: 3.4e16, zg: 150 });
 	console.log(`one Mcr (12 sine terms): ${medianMs(mcr, 200, 20).toFixed(2)} ms`);
-	for (const [n, set] of [[2, 'en1990-6.10'], [3, 'en1990-6.10'], [3, 'en1990-6.10ab']] as const) {
-		console.log(`${n} spans, imposed patterned, ${set}: ${medianMs(() => run(multi(n, set)), 3, 1).toFixed(0)} ms`);
+	for (const [n, set] of [
+		[2, 'en1990-6.10'],
+		[3, 'en1990-6.10'],
+		[3, 'en1990-6.10ab']
+	] as const) {
+		console.log(
+			`${n} spans, imposed patterned, ${set}: ${medianMs(() => run(multi(n, set)), 3, 1).toFixed(0)} ms`
+		);
 	}
 }

@@ -51,7 +51,12 @@ function beamCase(n: number, set: string, loads: unknown[]) {
 	};
 }
 
-const point = (x: number, value: number, action = 'temporary') => ({ kind: 'point', x, value, action });
+const point = (x: number, value: number, action = 'temporary') => ({
+	kind: 'point',
+	x,
+	value,
+	action
+});
 
 /** 20 extra loads over 6 spans: alternately existing and temporary point loads. */
 const twenty = Array.from({ length: 20 }, (_, i) =>
@@ -64,7 +69,11 @@ const CASES: { name: string; target: number; json: unknown; curve?: boolean }[] 
 	{ name: '1 span', target: 10, json: beamCase(1, 'en1990-6.10', [point(3, 20)]) },
 	{ name: '3 spans, patterned', target: 50, json: beamCase(3, 'en1990-6.10', [point(3, 20)]) },
 	{ name: '6 spans, 20 loads, 6.10a/b', target: 150, json: beamCase(6, 'en1990-6.10ab', twenty) },
-	{ name: '200 loads on one span (198 + 2)', target: 100, json: beamCase(1, 'en1990-6.10', twoHundred) },
+	{
+		name: '200 loads on one span (198 + 2)',
+		target: 100,
+		json: beamCase(1, 'en1990-6.10', twoHundred)
+	},
 	{
 		name: 'governing curve, 3 spans',
 		target: 300,

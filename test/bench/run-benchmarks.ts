@@ -7,7 +7,9 @@ import { fileURLToPath, pathToFileURL } from 'node:url';
 import { dirname, join } from 'node:path';
 
 const here = dirname(fileURLToPath(import.meta.url));
-const modules = readdirSync(here).filter((name) => name.endsWith('-bench.ts')).sort();
+const modules = readdirSync(here)
+	.filter((name) => name.endsWith('-bench.ts'))
+	.sort();
 
 for (const name of modules) {
 	const module = (await import(pathToFileURL(join(here, name)).href)) as Record<string, unknown>;

@@ -10,22 +10,34 @@ import { NOTICE_KEY, test, expect } from './fixtures';
 
 async function exportFile(page: Page): Promise<string> {
 	await page.goto('/');
-	const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('export-backup').click()]);
+	const [download] = await Promise.all([
+		page.waitForEvent('download'),
+		page.getByTestId('export-backup').click()
+	]);
 	expect(download.suggestedFilename()).toMatch(/^hingepoint-backup-\d{4}-\d{2}-\d{2}\.json$/);
 	return readFile((await download.path())!, 'utf8');
 }
 
 async function importText(page: Page, text: string, name = 'backup.json'): Promise<void> {
-	await page.getByTestId('import-backup').setInputFiles({ name, mimeType: 'application/json', buffer: Buffer.from(text) });
+	await page
+		.getByTestId('import-backup')
+		.setInputFiles({ name, mimeType: 'application/json', buffer: Buffer.from(text) });
 }
 
-test('export then import on a fresh device gives the same records exactly', async ({ page, browser, baseURL }) => {
+test('export then import on a fresh device gives the same records exactly', async ({
+	page,
+	browser,
+	baseURL
+}) => {
 	await saveDemo(page, 'Export one', 'East block');
 	await saveDemo(page, 'Export two', 'West block');
 	const first = await exportFile(page);
 	const exported = JSON.parse(first);
 	expect(exported.format).toBe('hingepoint.backup');
-	expect(exported.records.map((r: { title: string }) => r.title).sort()).toEqual(['Export one', 'Export two']);
+	expect(exported.records.map((r: { title: string }) => r.title).sort()).toEqual([
+		'Export one',
+		'Export two'
+	]);
 
 	// A second phone: its own, empty database.
 	const other = await browser.newContext({ baseURL, viewport: { width: 360, height: 780 } });
@@ -63,7 +75,9 @@ test('a damaged or foreign backup is refused and nothing changes', async ({ page
 	expect(JSON.parse(await exportFile(page)).records).toEqual(before);
 });
 
-test('a backup cannot replace, hide or vouch for a check: it is added beside and checked again', async ({ page }) => {
+test('a backup cannot replace, hide or vouch for a check: it is added beside and checked again', async ({
+	page
+}) => {
 	await saveDemo(page, 'Kept here');
 	const file = JSON.parse(await exportFile(page));
 	const [mine] = file.records;
@@ -80,7 +94,13 @@ test('a backup cannot replace, hide or vouch for a check: it is added beside and
 			updatedAt: '2999-01-01T00:00:00.000Z',
 			deletedAt: '2000-01-01T00:00:00.000Z'
 		},
-		{ ...mine, id: 'broken-1', title: 'Broken', input: { ...mine.input, beam: { spans: [-1] } }, result: claim }
+		{
+			...mine,
+			id: 'broken-1',
+			title: 'Broken',
+			input: { ...mine.input, beam: { spans: [-1] } },
+			result: claim
+		}
 	];
 	await importText(page, JSON.stringify(file));
 	const message = page.getByTestId('import-message');
@@ -91,11 +111,19 @@ test('a backup cannot replace, hide or vouch for a check: it is added beside and
 	await page.reload();
 	const items = page.getByTestId('saved-item');
 	await expect(items).toHaveCount(3);
-	await expect(items.filter({ hasText: 'Kept here (imported)' }).getByTestId('saved-verdict')).toHaveText('✖ Fail');
-	await expect(items.filter({ hasText: 'Broken' }).getByTestId('saved-verdict')).toHaveText('⚠ Needs attention');
-	const original = items.filter({ has: page.getByTestId('saved-title').getByText('Kept here', { exact: true }) });
+	await expect(
+		items.filter({ hasText: 'Kept here (imported)' }).getByTestId('saved-verdict')
+	).toHaveText('✖ Fail');
+	await expect(items.filter({ hasText: 'Broken' }).getByTestId('saved-verdict')).toHaveText(
+		'⚠ Needs attention'
+	);
+	const original = items.filter({
+		has: page.getByTestId('saved-title').getByText('Kept here', { exact: true })
+	});
 	await expect(original.getByTestId('saved-verdict')).toHaveText('✔ Pass');
 	// The original opens as it was.
-	const now = JSON.parse(await exportFile(page)).records.find((r: { id: string }) => r.id === mine.id);
+	const now = JSON.parse(await exportFile(page)).records.find(
+		(r: { id: string }) => r.id === mine.id
+	);
 	expect(now).toEqual({ ...mine, computed: { verdict: 'pass', computedBy: file.engineVersion } });
 });

@@ -3,10 +3,19 @@
  * named next to its field and gives no verdict, and a half-filled form survives a reload.
  */
 import { checkCase } from '../../src/lib/engine/index';
-import { enterSimpleBeam, fieldAt, openCheck, openDemo, readLoadFactor, typeInto } from './check-helpers';
+import {
+	enterSimpleBeam,
+	fieldAt,
+	openCheck,
+	openDemo,
+	readLoadFactor,
+	typeInto
+} from './check-helpers';
 import { test, expect } from './fixtures';
 
-test('a simply supported beam typed in gives λ = 4Mp/(L·γ·P) and the engine’s verdict', async ({ page }) => {
+test('a simply supported beam typed in gives λ = 4Mp/(L·γ·P) and the engine’s verdict', async ({
+	page
+}) => {
 	await openCheck(page);
 	// Decimal commas as typed on a phone keypad.
 	await enterSimpleBeam(page, { span: '6,0', mp: '100', x: '3', load: '10' });
@@ -24,17 +33,34 @@ test('a simply supported beam typed in gives λ = 4Mp/(L·γ·P) and the engine�
 	const same = checkCase({
 		format: 'hingepoint.case',
 		version: 1,
-		beam: { spans: [6], supports: ['pin', 'pin'], section: { mp: 100 }, restraint: { lateral: 'continuous', loadHeight: 'top-flange' } },
+		beam: {
+			spans: [6],
+			supports: ['pin', 'pin'],
+			section: { mp: 100 },
+			restraint: { lateral: 'continuous', loadHeight: 'top-flange' }
+		},
 		loads: [{ kind: 'point', x: 3, value: 10, action: 'temporary' }],
-		factors: { set: 'en1990-6.10', permanent: 1.35, imposed: 1.5, temporary: 1.5, gammaM0: 1, gammaM1: 1 }
+		factors: {
+			set: 'en1990-6.10',
+			permanent: 1.35,
+			imposed: 1.5,
+			temporary: 1.5,
+			gammaM0: 1,
+			gammaM1: 1
+		}
 	});
 	expect(same.ok).toBe(true);
 	if (!same.ok) return;
 	expect(same.report.collapse!.loadFactor).toBeCloseTo(expected, 9);
-	await expect(page.getByTestId('verdict')).toHaveAttribute('data-verdict', same.report.answer.verdict ?? 'none');
+	await expect(page.getByTestId('verdict')).toHaveAttribute(
+		'data-verdict',
+		same.report.answer.verdict ?? 'none'
+	);
 	// Here bending governs, so the largest temporary load allowed is λ × P.
 	expect(same.report.answer.governing?.id).toBe('bending');
-	await expect(page.getByTestId('allowed-load').first()).toHaveText(`${(expected * P).toFixed(1)}\u00a0kN`);
+	await expect(page.getByTestId('allowed-load').first()).toHaveText(
+		`${(expected * P).toFixed(1)}\u00a0kN`
+	);
 });
 
 test('bad input shows the field’s own message and no result', async ({ page }) => {

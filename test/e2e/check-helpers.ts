@@ -25,7 +25,9 @@ export function fieldAt(page: Page, path: string) {
 /** A new blank check is on screen: the span is empty and the result bar asks for it first. */
 export async function expectBlankCheck(page: Page): Promise<void> {
 	await expect(fieldAt(page, 'beam.spans[0]')).toHaveValue('');
-	await expect(page.getByTestId('live-chip')).toContainText('Fix Span 1 — length: Not entered yet.');
+	await expect(page.getByTestId('live-chip')).toContainText(
+		'Fix Span 1 — length: Not entered yet.'
+	);
 }
 
 /** Waits for a computed result and returns λ as shown. */

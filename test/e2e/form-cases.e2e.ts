@@ -6,7 +6,9 @@ import { checkCase } from '../../src/lib/engine/index';
 import { fieldAt, openCheck, openDemo, readLoadFactor, typeInto } from './check-helpers';
 import { test, expect } from './fixtures';
 
-test('a continuous beam with a simple joint gives the engine’s λ and verdict for the same case', async ({ page }) => {
+test('a continuous beam with a simple joint gives the engine’s λ and verdict for the same case', async ({
+	page
+}) => {
 	await openDemo(page);
 	await readLoadFactor(page);
 	await page.getByText('Continuous', { exact: true }).click();
@@ -40,7 +42,14 @@ test('a continuous beam with a simple joint gives the engine’s λ and verdict 
 				{ kind: 'uniform', from: 0, to: 13.2, value: 1.5, action: 'imposed' },
 				{ kind: 'point', x: 6.3, value: 12.625, action: 'temporary' }
 			],
-			factors: { set: 'en1990-6.10', permanent: 1.35, imposed: 1.5, temporary: 1.5, gammaM0: 1, gammaM1: 1 },
+			factors: {
+				set: 'en1990-6.10',
+				permanent: 1.35,
+				imposed: 1.5,
+				temporary: 1.5,
+				gammaM0: 1,
+				gammaM1: 1
+			},
 			deflectionLimit: 200
 		},
 		{ curve: false }
@@ -50,11 +59,16 @@ test('a continuous beam with a simple joint gives the engine’s λ and verdict 
 	const lambda = same.report.collapse!.loadFactor;
 	expect(lambda).not.toBeNull();
 	await expect.poll(() => readLoadFactor(page)).toBeCloseTo(lambda!, 3);
-	await expect(page.getByTestId('verdict')).toHaveAttribute('data-verdict', same.report.answer.verdict ?? 'none');
+	await expect(page.getByTestId('verdict')).toHaveAttribute(
+		'data-verdict',
+		same.report.answer.verdict ?? 'none'
+	);
 	await expect(page.getByTestId('beam-drawing')).toHaveAttribute('aria-label', /over 3 spans/);
 });
 
-test('the chain hoist template adds 10.1 kN × 1.25 as a proposed temporary point load', async ({ page }) => {
+test('the chain hoist template adds 10.1 kN × 1.25 as a proposed temporary point load', async ({
+	page
+}) => {
 	await openCheck(page);
 	await page.getByTestId('start-blank').click();
 	await page.getByText('Known Mp', { exact: true }).click();
@@ -77,7 +91,9 @@ test('the chain hoist template adds 10.1 kN × 1.25 as a proposed temporary poin
 	await expect.poll(() => readLoadFactor(page)).toBeCloseTo((4 * 100) / (6 * 1.5 * P), 3);
 });
 
-test('a load the beam cannot carry reads FAIL in words and symbol, with λ below 1', async ({ page }) => {
+test('a load the beam cannot carry reads FAIL in words and symbol, with λ below 1', async ({
+	page
+}) => {
 	await openCheck(page);
 	await page.getByTestId('start-blank').click();
 	await page.getByText('Known Mp', { exact: true }).click();
@@ -97,7 +113,9 @@ test('a load the beam cannot carry reads FAIL in words and symbol, with λ below
 	await expect(page.getByTestId('live-chip')).toContainText('FAIL');
 });
 
-test('restraint only at the supports: the screen names the engine’s route and its reason', async ({ page }) => {
+test('restraint only at the supports: the screen names the engine’s route and its reason', async ({
+	page
+}) => {
 	await openDemo(page);
 	await readLoadFactor(page);
 	await page.getByText('Only at the supports', { exact: true }).click();
@@ -121,7 +139,14 @@ test('restraint only at the supports: the screen names the engine’s route and 
 			{ kind: 'uniform' as const, from: 0, to: 4.8, value: 1.5, action: 'imposed' as const },
 			{ kind: 'point' as const, x: 2.1, value: 12.625, action: 'temporary' as const }
 		],
-		factors: { set: 'en1990-6.10', permanent: 1.35, imposed: 1.5, temporary: 1.5, gammaM0: 1, gammaM1: 1 },
+		factors: {
+			set: 'en1990-6.10',
+			permanent: 1.35,
+			imposed: 1.5,
+			temporary: 1.5,
+			gammaM0: 1,
+			gammaM1: 1
+		},
 		deflectionLimit: 200
 	};
 	const same = checkCase(demo);
@@ -133,6 +158,7 @@ test('restraint only at the supports: the screen names the engine’s route and 
 	expect(design.route.route).not.toBe('plastic');
 	expect(design.route.reasons.length).toBeGreaterThan(0);
 	await expect(page.getByTestId('verdict')).toHaveAttribute('data-verdict', verdict ?? 'none');
-	for (const reason of design.route.reasons) await expect(page.getByTestId('route')).toContainText(reason);
+	for (const reason of design.route.reasons)
+		await expect(page.getByTestId('route')).toContainText(reason);
 	await expect(page.getByTestId('governing')).toHaveText(governing?.label ?? '—');
 });

@@ -5,7 +5,10 @@
 import { openDemo, typeInto } from './check-helpers';
 import { test, expect, waitForServiceWorkerControl } from './fixtures';
 
-test('reloads offline from the service worker and still computes the demo check', async ({ page, context }) => {
+test('reloads offline from the service worker and still computes the demo check', async ({
+	page,
+	context
+}) => {
 	await openDemo(page);
 	// An edit (the same hoist load) makes it the draft a reload brings back.
 	await typeInto(page, 'loads[2].value', '12,625');
@@ -40,7 +43,9 @@ test('an unknown path offline shows the app’s own not-found page', async ({ pa
 test.describe('first run', () => {
 	test.use({ acknowledged: false });
 
-	test('shows the engineer-of-record notice until acknowledged, then remembers it', async ({ page }) => {
+	test('shows the engineer-of-record notice until acknowledged, then remembers it', async ({
+		page
+	}) => {
 		await page.goto('/');
 		const gate = page.getByRole('dialog', { name: 'Before you start' });
 		await expect(gate).toBeVisible();

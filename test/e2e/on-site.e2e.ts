@@ -5,7 +5,15 @@
  */
 import AxeBuilder from '@axe-core/playwright';
 import type { Page } from '@playwright/test';
-import { expectBlankCheck, fieldAt, openCheck, openDemo, readLoadFactor, saveDemo, typeInto } from './check-helpers';
+import {
+	expectBlankCheck,
+	fieldAt,
+	openCheck,
+	openDemo,
+	readLoadFactor,
+	saveDemo,
+	typeInto
+} from './check-helpers';
 import { test, expect } from './fixtures';
 
 test.use({ viewport: { width: 360, height: 780 }, hasTouch: true, isMobile: true });
@@ -15,7 +23,10 @@ const FIX_SPAN = 'Fix Span 1 — length first';
 
 /** Header link "New check", as a user taps it. */
 async function tapNewCheck(page: Page): Promise<void> {
-	await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'New check' }).tap();
+	await page
+		.getByRole('navigation', { name: 'Main' })
+		.getByRole('link', { name: 'New check' })
+		.tap();
 	await expect(page.getByTestId('check-heading')).toHaveAttribute('data-ready', 'true');
 }
 
@@ -38,7 +49,9 @@ async function saveAs(page: Page, title: string): Promise<void> {
 	await expect(page.getByTestId('save-status')).toContainText('Saved');
 }
 
-test('the demo is offered on first run only, and "New check" never shows the saved check', async ({ page }) => {
+test('the demo is offered on first run only, and "New check" never shows the saved check', async ({
+	page
+}) => {
 	await openCheck(page);
 	// First run: a blank check, with the worked demo one tap away.
 	await expectBlankCheck(page);
@@ -60,7 +73,12 @@ test('the demo is offered on first run only, and "New check" never shows the sav
 	await saveAs(page, 'Second beam');
 	await page.goto('/');
 	await expect(page.getByTestId('saved-item')).toHaveCount(2);
-	await page.getByTestId('saved-item').filter({ hasText: 'Plant room beam' }).getByRole('link').first().tap();
+	await page
+		.getByTestId('saved-item')
+		.filter({ hasText: 'Plant room beam' })
+		.getByRole('link')
+		.first()
+		.tap();
 	await expect(fieldAt(page, 'beam.spans[0]')).toHaveValue('4.8');
 
 	// The page's own button does the same as the header link.
@@ -68,7 +86,9 @@ test('the demo is offered on first run only, and "New check" never shows the sav
 	await expectBlankCheck(page);
 });
 
-test('editing a saved check adds a revision; restoring the first brings the old span back', async ({ page }) => {
+test('editing a saved check adds a revision; restoring the first brings the old span back', async ({
+	page
+}) => {
 	await saveDemo(page, 'Revised beam');
 	await typeInto(page, 'beam.spans[0]', '5,2');
 	await readLoadFactor(page);
@@ -97,7 +117,9 @@ test('editing a saved check adds a revision; restoring the first brings the old 
 	await expect(fieldAt(page, 'beam.spans[0]')).toHaveValue('5.2');
 });
 
-test('unsaved edits of a saved check come back after leaving or reloading, and say so', async ({ page }) => {
+test('unsaved edits of a saved check come back after leaving or reloading, and say so', async ({
+	page
+}) => {
 	await saveDemo(page, 'Draft beam');
 	const address = page.url();
 	await typeInto(page, 'beam.spans[0]', '5,5');
@@ -134,13 +156,17 @@ test('"New check" sets an unsaved new check aside, and it can be reopened', asyn
 	await expect(fieldAt(page, 'beam.spans[0]')).toHaveValue('7,25');
 });
 
-test('an incomplete check cannot be saved: the button says why and leads to the field', async ({ page }) => {
+test('an incomplete check cannot be saved: the button says why and leads to the field', async ({
+	page
+}) => {
 	await openCheck(page);
 	await enterKnownMpBeam(page, '', '10');
 	const save = page.getByTestId('open-save');
 	await expect(save).toHaveText('Fix Load 1 — position from left end first');
 	await expect(save).toHaveAttribute('aria-disabled', 'true');
-	await expect(page.getByTestId('live-chip')).toContainText('Fix Load 1 — position from left end: Not entered yet.');
+	await expect(page.getByTestId('live-chip')).toContainText(
+		'Fix Load 1 — position from left end: Not entered yet.'
+	);
 	await save.tap({ force: true });
 	await expect(fieldAt(page, 'loads[0].x')).toBeFocused();
 	await expect(page.getByTestId('save-dialog')).toHaveCount(0);
@@ -159,7 +185,9 @@ test('an incomplete check cannot be saved: the button says why and leads to the 
 	await expect(page.getByTestId('saved-verdict')).toHaveAttribute('data-verdict', 'pass');
 });
 
-test('new loads and measured sizes start empty; a blank root radius is taken as 0 and says so', async ({ page }) => {
+test('new loads and measured sizes start empty; a blank root radius is taken as 0 and says so', async ({
+	page
+}) => {
 	await openCheck(page);
 	await page.getByRole('button', { name: '+ Point load' }).tap();
 	await expect(fieldAt(page, 'loads[0].value')).toHaveValue('');
@@ -174,7 +202,8 @@ test('new loads and measured sizes start empty; a blank root radius is taken as 
 	// A designation first, then measured sizes: nothing carried over, root radius included.
 	await page.getByTestId('section-search').fill('UB 254x146x31');
 	await page.getByText('Measured sizes', { exact: true }).tap();
-	for (const key of ['h', 'b', 'tw', 'tf', 'r']) await expect(fieldAt(page, `beam.section.${key}`)).toHaveValue('');
+	for (const key of ['h', 'b', 'tw', 'tf', 'r'])
+		await expect(fieldAt(page, `beam.section.${key}`)).toHaveValue('');
 	await expect(page.locator('#f-beam-section-r-hint')).toContainText('r = 0');
 	await expect(page.locator('#f-beam-section-r-hint')).toContainText('smallest section properties');
 	await typeInto(page, 'beam.section.h', '257');
@@ -187,7 +216,9 @@ test('new loads and measured sizes start empty; a blank root radius is taken as 
 	await expect(page.getByTestId('live-chip')).not.toContainText('Section');
 });
 
-test('the hoist template hangs from the bottom flange only when ticked, and says what it added', async ({ page }) => {
+test('the hoist template hangs from the bottom flange only when ticked, and says what it added', async ({
+	page
+}) => {
 	await openCheck(page);
 	await typeInto(page, 'beam.spans[0]', '6');
 	await page.getByTestId('section-search').fill('UB 254x146x31');
@@ -210,7 +241,9 @@ test('the hoist template hangs from the bottom flange only when ticked, and says
 	await expect(result).not.toContainText('load applied at the top flange');
 });
 
-test('the check screen with things to fix, a set-aside check and a template load: no axe violations', async ({ page }) => {
+test('the check screen with things to fix, a set-aside check and a template load: no axe violations', async ({
+	page
+}) => {
 	await openCheck(page);
 	await typeInto(page, 'beam.spans[0]', '5');
 	await page.waitForTimeout(400);
@@ -224,7 +257,9 @@ test('the check screen with things to fix, a set-aside check and a template load
 	await expect(page.getByTestId('open-save')).toHaveText(FIX_SPAN);
 	await page.screenshot({ path: 'test-results/screens/check-to-fix-360.png', fullPage: true });
 	const result = await new AxeBuilder({ page }).withTags(AXE_TAGS).analyze();
-	expect(result.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target).join(' ')}`)).toEqual([]);
+	expect(
+		result.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target).join(' ')}`)
+	).toEqual([]);
 });
 
 test('the worked demo still opens and computes from its button', async ({ page }) => {

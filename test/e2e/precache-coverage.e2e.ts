@@ -45,7 +45,9 @@ test('the manifest names the app and its icons', () => {
 		scope: '/',
 		display: 'standalone'
 	});
-	const sizes = manifest.icons.map((icon: { sizes: string; purpose: string }) => `${icon.sizes} ${icon.purpose}`);
+	const sizes = manifest.icons.map(
+		(icon: { sizes: string; purpose: string }) => `${icon.sizes} ${icon.purpose}`
+	);
 	expect(sizes).toEqual(expect.arrayContaining(['192x192 any', '512x512 any', '512x512 maskable']));
 	for (const icon of manifest.icons) {
 		const png = readFileSync(join(BUILD, icon.src));

@@ -65,25 +65,38 @@ test('delete takes a check off the list and undo brings it back exactly', async 
 	await expect(page.getByTestId('saved-title')).toHaveText(['Second beam', 'First beam']);
 	await expect(items.filter({ hasText: 'First beam' })).toContainText('North wing · B1 · C/4');
 
-	await items.filter({ hasText: 'Second beam' }).getByRole('button', { name: /Duplicate/ }).click();
+	await items
+		.filter({ hasText: 'Second beam' })
+		.getByRole('button', { name: /Duplicate/ })
+		.click();
 	await expect(items).toHaveCount(3);
-	await expect(page.getByTestId('saved-title').filter({ hasText: 'Second beam (copy)' })).toHaveCount(1);
+	await expect(
+		page.getByTestId('saved-title').filter({ hasText: 'Second beam (copy)' })
+	).toHaveCount(1);
 });
 
-test('with no IndexedDB (private mode) the app opens, computes, and says checks cannot be saved', async ({ page }) => {
+test('with no IndexedDB (private mode) the app opens, computes, and says checks cannot be saved', async ({
+	page
+}) => {
 	await page.addInitScript(() => {
 		delete (window as { indexedDB?: IDBFactory }).indexedDB;
 	});
 	await page.goto('/');
 	expect(await page.evaluate(() => typeof indexedDB)).toBe('undefined');
-	await expect(page.getByTestId('list-message')).toContainText('Checks cannot be saved on this device right now');
+	await expect(page.getByTestId('list-message')).toContainText(
+		'Checks cannot be saved on this device right now'
+	);
 	await expect(page.getByTestId('export-backup')).toBeDisabled();
 	await expect(page.getByTestId('import-backup')).toBeDisabled();
 
 	await openDemo(page);
 	// The demo's own verdict, computed on this device (generous wait: a cold engine on a slow phone).
-	await expect(page.getByTestId('verdict')).toHaveAttribute('data-verdict', /^(pass|fail|outside-scope)$/, {
-		timeout: 30_000
-	});
+	await expect(page.getByTestId('verdict')).toHaveAttribute(
+		'data-verdict',
+		/^(pass|fail|outside-scope)$/,
+		{
+			timeout: 30_000
+		}
+	);
 	await expect(page.getByTestId('session-message')).toContainText('checks cannot be saved');
 });

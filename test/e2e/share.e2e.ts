@@ -4,7 +4,14 @@
  * says so; the link reopens the same inputs.
  */
 import { ENGINEER_NOTICE_SHORT } from '../../src/lib/engine/notice';
-import { expectBlankCheck, fieldAt, openCheck, openDemo, readLoadFactor, typeInto } from './check-helpers';
+import {
+	expectBlankCheck,
+	fieldAt,
+	openCheck,
+	openDemo,
+	readLoadFactor,
+	typeInto
+} from './check-helpers';
 import { test, expect } from './fixtures';
 
 const WORDS = { pass: 'PASS', fail: 'FAIL', 'outside-scope': 'OUTSIDE SCOPE' } as const;
@@ -30,10 +37,14 @@ test.describe('with the Web Share API', () => {
 		// A smaller hoist load: λ on it rises.
 		await expect.poll(() => readLoadFactor(page)).toBeGreaterThan(demoLambda);
 		const lambda = await page.getByTestId('load-factor').textContent();
-		const verdict = (await page.getByTestId('verdict').getAttribute('data-verdict')) as keyof typeof WORDS;
+		const verdict = (await page
+			.getByTestId('verdict')
+			.getAttribute('data-verdict')) as keyof typeof WORDS;
 		await page.getByTestId('share-summary').click();
 		await expect(page.getByTestId('share-status')).toHaveText('Shared.');
-		const [sent] = await page.evaluate(() => (window as unknown as { sharedData: ShareData[] }).sharedData);
+		const [sent] = await page.evaluate(
+			() => (window as unknown as { sharedData: ShareData[] }).sharedData
+		);
 		expect(sent.text).toContain(WORDS[verdict]);
 		expect(sent.text).toContain(ENGINEER_NOTICE_SHORT);
 		expect(sent.url).toMatch(new RegExp(`^${baseURL}/check#c=`));
@@ -52,7 +63,9 @@ test.describe('with the Web Share API', () => {
 		await openDemo(page);
 		await readLoadFactor(page);
 		await page.getByTestId('share-long').click();
-		const [sent] = await page.evaluate(() => (window as unknown as { sharedData: ShareData[] }).sharedData);
+		const [sent] = await page.evaluate(
+			() => (window as unknown as { sharedData: ShareData[] }).sharedData
+		);
 		expect(sent.text).toContain(ENGINEER_NOTICE_SHORT);
 		// The long form lists every check, so it is longer than the short one.
 		expect(sent.text!.length).toBeGreaterThan(600);
@@ -68,7 +81,9 @@ test.describe('without the Web Share API', () => {
 		});
 		await openDemo(page);
 		await readLoadFactor(page);
-		const verdict = (await page.getByTestId('verdict').getAttribute('data-verdict')) as keyof typeof WORDS;
+		const verdict = (await page
+			.getByTestId('verdict')
+			.getAttribute('data-verdict')) as keyof typeof WORDS;
 		await page.getByTestId('share-summary').click();
 		await expect(page.getByTestId('share-status')).toContainText('copied to the clipboard');
 		const copied = await page.evaluate(() => navigator.clipboard.readText());
@@ -85,7 +100,8 @@ test('a damaged link is refused with a message and the form still works', async 
 });
 
 test('a link with a hollow case shows a message instead of waiting forever', async ({ page }) => {
-	const link = (value: unknown) => `/check#c=1.${Buffer.from(JSON.stringify(value), 'utf8').toString('base64url')}`;
+	const link = (value: unknown) =>
+		`/check#c=1.${Buffer.from(JSON.stringify(value), 'utf8').toString('base64url')}`;
 	const pageErrors: string[] = [];
 	page.on('pageerror', (error) => pageErrors.push(error.message));
 	await openCheck(page, link({ v: 1, B: {}, l: [] }));

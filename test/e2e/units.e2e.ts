@@ -17,7 +17,10 @@ async function chooseUnits(page: Page, units: 'SI' | 'US'): Promise<void> {
 }
 
 /** The stored record's case, read straight from IndexedDB. */
-async function readStoredCase(page: Page, id: string): Promise<{ beam: { spans: number[] }; loads: { value: number }[] }> {
+async function readStoredCase(
+	page: Page,
+	id: string
+): Promise<{ beam: { spans: number[] }; loads: { value: number }[] }> {
 	return page.evaluate(
 		(key) =>
 			new Promise((resolve, reject) => {
@@ -37,14 +40,20 @@ test('US units change the fields and results shown, not the stored case', async 
 	await saveDemo(page, 'Units check');
 	const id = new URL(page.url()).searchParams.get('id')!;
 	const lambdaSI = await readLoadFactor(page);
-	const allowedSI = Number.parseFloat((await page.getByTestId('allowed-load').first().textContent()) ?? '');
+	const allowedSI = Number.parseFloat(
+		(await page.getByTestId('allowed-load').first().textContent()) ?? ''
+	);
 
 	await chooseUnits(page, 'US');
 	await openCheck(page, `/check?id=${id}`);
 	// 4.8 m shown in ft, rounded to four decimals for editing.
-	await expect(fieldAt(page, 'beam.spans[0]')).toHaveValue(String(Math.round((4.8 / FT) * 1e4) / 1e4));
+	await expect(fieldAt(page, 'beam.spans[0]')).toHaveValue(
+		String(Math.round((4.8 / FT) * 1e4) / 1e4)
+	);
 	await expect(page.locator('label[for="f-beam-spans-0"]')).toContainText('(ft)');
-	await expect(fieldAt(page, 'loads[2].value')).toHaveValue(String(Math.round((12.625 / KIP) * 1e4) / 1e4));
+	await expect(fieldAt(page, 'loads[2].value')).toHaveValue(
+		String(Math.round((12.625 / KIP) * 1e4) / 1e4)
+	);
 	// λ is a ratio: the same in any units. The allowed load is the same force in kip.
 	expect(await readLoadFactor(page)).toBeCloseTo(lambdaSI, 3);
 	const allowedUS = await page.getByTestId('allowed-load').first().textContent();

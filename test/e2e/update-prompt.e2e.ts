@@ -22,14 +22,24 @@ test('a waiting new version shows the update notice and reloads only on tap', as
 		const toast = page.getByRole('status').filter({ hasText: 'Update ready' });
 		await expect(toast).toBeVisible({ timeout: 30_000 });
 		await page.waitForTimeout(1500);
-		expect(await page.evaluate(() => (window as unknown as { marker?: string }).marker)).toBe('still here');
+		expect(await page.evaluate(() => (window as unknown as { marker?: string }).marker)).toBe(
+			'still here'
+		);
 
-		await Promise.all([page.waitForEvent('load'), toast.getByRole('button', { name: 'Reload now' }).click()]);
-		expect(await page.evaluate(() => (window as unknown as { marker?: string }).marker)).toBeUndefined();
+		await Promise.all([
+			page.waitForEvent('load'),
+			toast.getByRole('button', { name: 'Reload now' }).click()
+		]);
+		expect(
+			await page.evaluate(() => (window as unknown as { marker?: string }).marker)
+		).toBeUndefined();
 		// The reload came after the hand-over: the new version is in charge and nothing waits.
 		const after = await page.evaluate(async () => {
 			const registration = await navigator.serviceWorker.getRegistration();
-			return { waiting: registration?.waiting ?? null, controlled: navigator.serviceWorker.controller !== null };
+			return {
+				waiting: registration?.waiting ?? null,
+				controlled: navigator.serviceWorker.controller !== null
+			};
 		});
 		expect(after).toEqual({ waiting: null, controlled: true });
 		await expect(toast).toBeHidden();

@@ -16,10 +16,13 @@ const TIME_BOUND = 5000;
 /** A valid small case built from random choices (invented numbers). */
 const validCase = fc
 	.record({
-		spans: fc.array(fc.integer({ min: 2, max: 80 }).map((d) => d / 10), {
-			minLength: 1,
-			maxLength: 3
-		}),
+		spans: fc.array(
+			fc.integer({ min: 2, max: 80 }).map((d) => d / 10),
+			{
+				minLength: 1,
+				maxLength: 3
+			}
+		),
 		left: fc.constantFrom('pin', 'fixed', 'free'),
 		right: fc.constantFrom('pin', 'fixed', 'free'),
 		inner: fc.constantFrom('pin', 'fixed'),

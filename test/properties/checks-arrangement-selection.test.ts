@@ -25,18 +25,32 @@ const beamArb = fc
 		set: fc.constantFrom('en1990-6.10', 'en1990-6.10ab'),
 		g: fc.integer({ min: 0, max: 8 }),
 		imposed: fc.array(fc.tuple(fc.nat(), fc.integer({ min: 1, max: 12 })), { maxLength: 3 }),
-		imposedPoint: fc.option(fc.tuple(fc.double({ min: 0, max: 1, noNaN: true }), fc.integer({ min: 1, max: 30 })), {
-			nil: undefined
-		}),
-		points: fc.array(fc.tuple(fc.double({ min: 0, max: 1, noNaN: true }), fc.integer({ min: -10, max: 60 })), {
-			minLength: 1,
-			maxLength: 3
-		}),
+		imposedPoint: fc.option(
+			fc.tuple(fc.double({ min: 0, max: 1, noNaN: true }), fc.integer({ min: 1, max: 30 })),
+			{
+				nil: undefined
+			}
+		),
+		points: fc.array(
+			fc.tuple(fc.double({ min: 0, max: 1, noNaN: true }), fc.integer({ min: -10, max: 60 })),
+			{
+				minLength: 1,
+				maxLength: 3
+			}
+		),
 		onSupport: fc.boolean(),
 		bearing: fc.option(fc.integer({ min: 0, max: 150 }), { nil: undefined })
 	})
 	.filter((o) => !(o.left === 'free' && o.right === 'free'))
-	.filter((o) => !(o.spans.length === 1 && (o.left === 'free' || o.right === 'free') && o.left !== 'fixed' && o.right !== 'fixed'));
+	.filter(
+		(o) =>
+			!(
+				o.spans.length === 1 &&
+				(o.left === 'free' || o.right === 'free') &&
+				o.left !== 'fixed' &&
+				o.right !== 'fixed'
+			)
+	);
 
 type Beam = typeof beamArb extends fc.Arbitrary<infer T> ? T : never;
 
@@ -52,13 +66,24 @@ function build(o: Beam) {
 		loads.push({ kind: 'uniform', from: nodes[k], to: nodes[k + 1], value: q, action: 'imposed' });
 	}
 	if (o.imposedPoint) {
-		loads.push({ kind: 'point', x: o.imposedPoint[0] * total, value: o.imposedPoint[1], action: 'imposed' });
+		loads.push({
+			kind: 'point',
+			x: o.imposedPoint[0] * total,
+			value: o.imposedPoint[1],
+			action: 'imposed'
+		});
 	}
 	for (const [t, kN] of o.points) {
 		if (kN !== 0) loads.push({ kind: 'point', x: t * total, value: kN, action: 'temporary' });
 	}
 	// A load straight over an interior support or an end: the web rows that share it.
-	if (o.onSupport) loads.push({ kind: 'point', x: nodes[Math.floor(spans.length / 2)], value: 15, action: 'temporary' });
+	if (o.onSupport)
+		loads.push({
+			kind: 'point',
+			x: nodes[Math.floor(spans.length / 2)],
+			value: 15,
+			action: 'temporary'
+		});
 	return {
 		format: 'hingepoint.case',
 		version: 1,
@@ -68,7 +93,9 @@ function build(o: Beam) {
 			section: { designation: o.designation },
 			grade: 'S275',
 			...(o.restraint ? { restraint: { lateral: o.restraint, loadHeight: 'top-flange' } } : {}),
-			...(o.bearing !== undefined ? { bearing: nodes.map(() => o.bearing), bearingLoads: o.bearing } : {})
+			...(o.bearing !== undefined
+				? { bearing: nodes.map(() => o.bearing), bearingLoads: o.bearing }
+				: {})
 		},
 		loads,
 		factors: { set: o.set }

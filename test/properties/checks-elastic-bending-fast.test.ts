@@ -39,8 +39,16 @@ const arbitraryCase = fc
 	})
 	.map((s) => {
 		const n = s.spans.length;
-		const supports: SupportKind[] = [s.left, ...s.spans.slice(1).map(() => 'pin' as const), s.right];
-		const beam: BeamLine = { spans: s.spans, supports, joints: s.spans.slice(1).map(() => 'continuous') };
+		const supports: SupportKind[] = [
+			s.left,
+			...s.spans.slice(1).map(() => 'pin' as const),
+			s.right
+		];
+		const beam: BeamLine = {
+			spans: s.spans,
+			supports,
+			joints: s.spans.slice(1).map(() => 'continuous')
+		};
 		const nodes = [0];
 		for (const L of s.spans) nodes.push(nodes[nodes.length - 1] + L);
 		const total = nodes[n];
@@ -48,16 +56,30 @@ const arbitraryCase = fc
 		if (s.g) loads.push({ kind: 'uniform', from: 0, to: total, value: s.g, action: 'permanent' });
 		for (const [i, q] of s.imposed) {
 			const k = i % n;
-			loads.push({ kind: 'uniform', from: nodes[k], to: nodes[k + 1], value: q, action: 'imposed' });
+			loads.push({
+				kind: 'uniform',
+				from: nodes[k],
+				to: nodes[k + 1],
+				value: q,
+				action: 'imposed'
+			});
 		}
 		for (const [t, kN] of s.points) {
-			if (kN !== 0) loads.push({ kind: 'point', x: t * total, value: kN * 1e3, action: 'temporary' });
+			if (kN !== 0)
+				loads.push({ kind: 'point', x: t * total, value: kN * 1e3, action: 'temporary' });
 		}
 		if (s.linear) {
 			const [a, b] = s.linear;
 			loads.push({ kind: 'linear', from: 0, to: total / 2, start: a, end: b, action: 'temporary' });
 		}
-		return { beam, nodes, loads, EI: s.spans.map((_, i) => s.EI[i] * 1e12), limit: s.spans.map((_, i) => s.limit[i] * 1e6), set: s.set };
+		return {
+			beam,
+			nodes,
+			loads,
+			EI: s.spans.map((_, i) => s.EI[i] * 1e12),
+			limit: s.spans.map((_, i) => s.limit[i] * 1e6),
+			set: s.set
+		};
 	})
 	.filter((c) => findMechanismIssues(c.beam).length === 0);
 
@@ -71,7 +93,9 @@ function makeContext(c: {
 	const hasImposed = c.loads.some((l) => l.action === 'imposed');
 	const factors = en1993.resolveFactors({ set: c.set as 'en1990-6.10' }, { hasImposed });
 	const imposedSpans = c.beam.spans.flatMap((_, i) =>
-		c.loads.some((l) => l.action === 'imposed' && l.kind !== 'point' && l.from === c.nodes[i]) ? [i] : []
+		c.loads.some((l) => l.action === 'imposed' && l.kind !== 'point' && l.from === c.nodes[i])
+			? [i]
+			: []
 	);
 	const arrangements = listLoadArrangements({
 		combinations: factors.combinations,
@@ -93,9 +117,14 @@ describe('elastic bending by superposed pieces', () => {
 					const fast = checkElasticBending(ctx, o);
 					const slow = checkElasticBendingByReanalysis(ctx, o);
 					if (slow.multiplierAtCapacity === null) expect(fast.multiplierAtCapacity).toBeNull();
-					else expectRel(fast.multiplierAtCapacity, slow.multiplierAtCapacity, 1e-9, { absolute: 1e-12 });
+					else
+						expectRel(fast.multiplierAtCapacity, slow.multiplierAtCapacity, 1e-9, {
+							absolute: 1e-12
+						});
 					expectRel(fast.utilisation, slow.utilisation, 1e-9, { absolute: 1e-12 });
-					expectRel(fast.utilisationExisting ?? 0, slow.utilisationExisting ?? 0, 1e-9, { absolute: 1e-12 });
+					expectRel(fast.utilisationExisting ?? 0, slow.utilisationExisting ?? 0, 1e-9, {
+						absolute: 1e-12
+					});
 					expect(fast.pass).toBe(slow.pass);
 				}
 			}),

@@ -51,7 +51,13 @@ const load = (L: number) =>
 				fc.integer({ min: -5, max: 20 }),
 				fc.integer({ min: -5, max: 20 })
 			)
-			.map(([a, b, s, e]): SegmentLoad => ({ kind: 'line', from: a * L, to: b * L, start: s, end: e }))
+			.map(([a, b, s, e]): SegmentLoad => ({
+				kind: 'line',
+				from: a * L,
+				to: b * L,
+				start: s,
+				end: e
+			}))
 	);
 
 const segmentCase = fc.integer({ min: 1500, max: 12000 }).chain((L) =>
@@ -65,7 +71,10 @@ const segmentCase = fc.integer({ min: 1500, max: 12000 }).chain((L) =>
 			}),
 			{ minLength: 1, maxLength: 4 }
 		),
-		weights: fc.array(fc.constantFrom(0, 0.9, 1, 1.05, 1.35, 1.5, 2.7), { minLength: 4, maxLength: 4 }),
+		weights: fc.array(fc.constantFrom(0, 0.9, 1, 1.05, 1.35, 1.5, 2.7), {
+			minLength: 4,
+			maxLength: 4
+		}),
 		zg: fc.constantFrom(-150, 0, 150)
 	})
 );
@@ -95,12 +104,19 @@ describe('largest eigenvalue by tridiagonal reduction', () => {
 					loads: p.loads
 				}));
 				// 305x165x40 UB stiffnesses, from memory (order of magnitude is all that matters).
-				const stiffness = { EIz: 210e3 * 764e4, GIt: 81e3 * 14.7e4, EIw: 210e3 * 0.164e12, zg: c.zg };
+				const stiffness = {
+					EIz: 210e3 * 764e4,
+					GIt: 81e3 * 14.7e4,
+					EIw: 210e3 * 0.164e12,
+					zg: c.zg
+				};
 				const weights = parts.map((_, i) => c.weights[i]);
 				const fast = prepareCriticalMoment({ ...stiffness, parts }).at(weights);
-				const full = prepareCriticalMoment({ ...stiffness, parts, largestEigenvalue: jacobiLargest }).at(
-					weights
-				);
+				const full = prepareCriticalMoment({
+					...stiffness,
+					parts,
+					largestEigenvalue: jacobiLargest
+				}).at(weights);
 				if (full === null) {
 					expect(fast).toBeNull();
 					return;

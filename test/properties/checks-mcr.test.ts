@@ -22,9 +22,15 @@ const props = fc.record({
 	It: fc.double({ min: 5e4, max: 2e6, noNaN: true }),
 	Iw: fc.double({ min: 1e10, max: 2e12, noNaN: true })
 });
-const stiff = (p: { Iz: number; It: number; Iw: number }) => ({ EIz: E * p.Iz, GIt: G * p.It, EIw: E * p.Iw });
+const stiff = (p: { Iz: number; It: number; Iw: number }) => ({
+	EIz: E * p.Iz,
+	GIt: G * p.It,
+	EIw: E * p.Iw
+});
 const closed = (p: { L: number; Iz: number; It: number; Iw: number }) =>
-	(Math.PI / p.L) * Math.sqrt(E * p.Iz * G * p.It) * Math.sqrt(1 + (Math.PI ** 2 * E * p.Iw) / (p.L * p.L * G * p.It));
+	(Math.PI / p.L) *
+	Math.sqrt(E * p.Iz * G * p.It) *
+	Math.sqrt(1 + (Math.PI ** 2 * E * p.Iw) / (p.L * p.L * G * p.It));
 
 describe('Mcr invariants', () => {
 	it('uniform moment equals the closed form', () => {
@@ -50,23 +56,38 @@ describe('Mcr invariants', () => {
 						length: p.L,
 						momentStart: -20e6,
 						momentEnd: psi * 20e6,
-						loads: [{ kind: 'point', x: a * p.L, value: 30e3 }, { kind: 'line', from: 0, to: p.L, start: 2, end: 5 }]
+						loads: [
+							{ kind: 'point', x: a * p.L, value: 30e3 },
+							{ kind: 'line', from: 0, to: p.L, start: 2, end: 5 }
+						]
 					};
 					const scaled: LtbSegment = {
 						...seg,
 						momentStart: k * seg.momentStart,
 						momentEnd: k * seg.momentEnd,
-						loads: [{ kind: 'point', x: a * p.L, value: k * 30e3 }, { kind: 'line', from: 0, to: p.L, start: 2 * k, end: 5 * k }]
+						loads: [
+							{ kind: 'point', x: a * p.L, value: k * 30e3 },
+							{ kind: 'line', from: 0, to: p.L, start: 2 * k, end: 5 * k }
+						]
 					};
 					const mirrored: LtbSegment = {
 						length: p.L,
 						momentStart: seg.momentEnd,
 						momentEnd: seg.momentStart,
-						loads: [{ kind: 'point', x: (1 - a) * p.L, value: 30e3 }, { kind: 'line', from: 0, to: p.L, start: 5, end: 2 }]
+						loads: [
+							{ kind: 'point', x: (1 - a) * p.L, value: 30e3 },
+							{ kind: 'line', from: 0, to: p.L, start: 5, end: 2 }
+						]
 					};
 					const base = computeCriticalMoment({ segment: seg, ...stiff(p), zg: 0 })!.mcr;
-					expect(Math.abs(computeCriticalMoment({ segment: scaled, ...stiff(p), zg: 0 })!.mcr / base - 1)).toBeLessThan(1e-8);
-					expect(Math.abs(computeCriticalMoment({ segment: mirrored, ...stiff(p), zg: 0 })!.mcr / base - 1)).toBeLessThan(1e-6);
+					expect(
+						Math.abs(computeCriticalMoment({ segment: scaled, ...stiff(p), zg: 0 })!.mcr / base - 1)
+					).toBeLessThan(1e-8);
+					expect(
+						Math.abs(
+							computeCriticalMoment({ segment: mirrored, ...stiff(p), zg: 0 })!.mcr / base - 1
+						)
+					).toBeLessThan(1e-6);
 					expect(base / closed(p)).toBeGreaterThan(1 - 1e-9);
 				}
 			),
@@ -76,17 +97,25 @@ describe('Mcr invariants', () => {
 
 	it('top-flange load < shear centre < bottom-flange load', () => {
 		fc.assert(
-			fc.property(props, fc.double({ min: 100, max: 600, noNaN: true }), fc.double({ min: 0.1, max: 0.9, noNaN: true }), (p, h, a) => {
-				const seg: LtbSegment = {
-					length: p.L,
-					momentStart: 0,
-					momentEnd: 0,
-					loads: [{ kind: 'point', x: a * p.L, value: 10e3 }, { kind: 'line', from: 0, to: p.L, start: 3, end: 3 }]
-				};
-				const at = (zg: number) => computeCriticalMoment({ segment: seg, ...stiff(p), zg })!.mcr;
-				expect(at(h / 2)).toBeLessThan(at(0));
-				expect(at(-h / 2)).toBeGreaterThan(at(0));
-			}),
+			fc.property(
+				props,
+				fc.double({ min: 100, max: 600, noNaN: true }),
+				fc.double({ min: 0.1, max: 0.9, noNaN: true }),
+				(p, h, a) => {
+					const seg: LtbSegment = {
+						length: p.L,
+						momentStart: 0,
+						momentEnd: 0,
+						loads: [
+							{ kind: 'point', x: a * p.L, value: 10e3 },
+							{ kind: 'line', from: 0, to: p.L, start: 3, end: 3 }
+						]
+					};
+					const at = (zg: number) => computeCriticalMoment({ segment: seg, ...stiff(p), zg })!.mcr;
+					expect(at(h / 2)).toBeLessThan(at(0));
+					expect(at(-h / 2)).toBeGreaterThan(at(0));
+				}
+			),
 			{ numRuns: 20 }
 		);
 	});

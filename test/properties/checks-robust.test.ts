@@ -15,7 +15,13 @@ const beamArb = fc
 		spans: fc.array(fc.double({ min: 1, max: 8, noNaN: true }), { minLength: 1, maxLength: 3 }),
 		left: fc.constantFrom('pin', 'fixed', 'free'),
 		right: fc.constantFrom('pin', 'fixed', 'free'),
-		designation: fc.constantFrom('UB 305x165x40', 'UC 203x203x46', 'UC 152x152x23', 'IPE 300', 'SHS 100x100x5.0'),
+		designation: fc.constantFrom(
+			'UB 305x165x40',
+			'UC 203x203x46',
+			'UC 152x152x23',
+			'IPE 300',
+			'SHS 100x100x5.0'
+		),
 		grade: fc.constantFrom('S275', 'S355'),
 		set: fc.constantFrom('en1990-6.10', 'en1990-6.10ab', 'custom'),
 		restraint: fc.constantFrom(undefined, 'continuous', 'ends-only', 'points'),
@@ -32,8 +38,15 @@ const beamArb = fc
 		)
 	})
 	.filter((o) => !(o.left === 'free' && o.right === 'free'))
-	.filter((o) => !(o.spans.length === 1 && (o.left === 'free' || o.right === 'free') && o.left !== 'fixed' && o.right !== 'fixed'));
-
+	.filter(
+		(o) =>
+			!(
+				o.spans.length === 1 &&
+				(o.left === 'free' || o.right === 'free') &&
+				o.left !== 'fixed' &&
+				o.right !== 'fixed'
+			)
+	);
 
 // `any`: test data assembled from the arbitrary above.
 function build(o: any) {
@@ -44,17 +57,27 @@ function build(o: any) {
 		if (l.kind === 'point') return { kind: 'point', x: p, value: l.v, action: l.action };
 		const to = q - p < 0.1 ? Math.min(total, p + 0.1) : q;
 		const from = Math.min(p, to - 0.05);
-		if (l.kind === 'uniform') return { kind: 'uniform', from, to, value: l.v / 4, action: l.action };
+		if (l.kind === 'uniform')
+			return { kind: 'uniform', from, to, value: l.v / 4, action: l.action };
 		return { kind: 'linear', from, to, start: 0, end: l.v / 4, action: l.action };
 	});
 	const restraint =
 		o.restraint === undefined
 			? undefined
-			: { lateral: o.restraint === 'points' ? [total / 3, (2 * total) / 3] : o.restraint, loadHeight: o.height };
+			: {
+					lateral: o.restraint === 'points' ? [total / 3, (2 * total) / 3] : o.restraint,
+					loadHeight: o.height
+				};
 	return {
 		format: 'hingepoint.case',
 		version: 1,
-		beam: { spans: o.spans, supports, section: { designation: o.designation }, grade: o.grade, ...(restraint ? { restraint } : {}) },
+		beam: {
+			spans: o.spans,
+			supports,
+			section: { designation: o.designation },
+			grade: o.grade,
+			...(restraint ? { restraint } : {})
+		},
 		loads,
 		factors: { set: o.set }
 	};

@@ -26,7 +26,13 @@ const build = (o: {
 		...(o.restraint ? { restraint: { lateral: 'ends-only', loadHeight: 'top-flange' } } : {})
 	},
 	loads: [
-		{ kind: 'uniform', from: 0, to: o.spans.reduce((a, b) => a + b, 0), value: o.g, action: 'permanent' },
+		{
+			kind: 'uniform',
+			from: 0,
+			to: o.spans.reduce((a, b) => a + b, 0),
+			value: o.g,
+			action: 'permanent'
+		},
 		{ kind: 'point', x: o.at, value: o.q, action: 'temporary' }
 	]
 });

@@ -22,9 +22,12 @@ const arbitraryLongBeam = fc
 		mp: fc.array(fc.integer({ min: 50, max: 300 }), { minLength: 50, maxLength: 50 }),
 		w: fc.integer({ min: 0, max: 20 }),
 		q: fc.integer({ min: 1, max: 20 }),
-		points: fc.array(fc.tuple(fc.double({ min: 0.01, max: 0.99, noNaN: true }), fc.integer({ min: 1, max: 50 })), {
-			maxLength: 6
-		})
+		points: fc.array(
+			fc.tuple(fc.double({ min: 0.01, max: 0.99, noNaN: true }), fc.integer({ min: 1, max: 50 })),
+			{
+				maxLength: 6
+			}
+		)
 	})
 	.map((s): CollapseProblem => {
 		const spans = s.spanMm.slice(0, s.n);
@@ -35,7 +38,9 @@ const arbitraryLongBeam = fc
 		// About one joint in ten is simple; never next to a free end (that would be a mechanism).
 		const joints: JointKind[] = spans
 			.slice(1)
-			.map((_, k) => (s.simple[k] === 0 && !(k === 0 && s.left === 'free') ? 'simple' : 'continuous'));
+			.map((_, k) =>
+				s.simple[k] === 0 && !(k === 0 && s.left === 'free') ? 'simple' : 'continuous'
+			);
 		const total = spans.reduce((a, b) => a + b, 0);
 		const nodes = [0];
 		for (const L of spans) nodes.push(nodes[nodes.length - 1] + L);
@@ -44,7 +49,12 @@ const arbitraryLongBeam = fc
 			: [];
 		const variableLoads: Load[] = [
 			{ kind: 'uniform', from: 0, to: total, value: s.q, action: 'temporary' },
-			...s.points.map(([t, kN]): Load => ({ kind: 'point', x: t * total, value: kN * 1e3, action: 'temporary' }))
+			...s.points.map(([t, kN]): Load => ({
+				kind: 'point',
+				x: t * total,
+				value: kN * 1e3,
+				action: 'temporary'
+			}))
 		];
 		return {
 			beam: { spans, supports, joints },
@@ -65,7 +75,9 @@ describe('long beam lines', () => {
 		fc.assert(
 			fc.property(arbitraryLongBeam, (p) => {
 				const r = solveCollapse(p);
-				expect(['mechanism', 'not-certified', 'fails-under-fixed', 'unbounded']).toContain(r.status);
+				expect(['mechanism', 'not-certified', 'fails-under-fixed', 'unbounded']).toContain(
+					r.status
+				);
 				if (r.status === 'mechanism') {
 					expect(r.certified).toBe(true);
 					expect(r.gap).toBeLessThanOrEqual(1e-6);

@@ -18,7 +18,10 @@ const elementArb = fc.integer({ min: 1000, max: 12000 }).chain((L) =>
 		loads: fc.array(
 			fc.oneof(
 				fc
-					.tuple(fc.oneof(fc.constantFrom(0, 1), fc.double({ min: 0, max: 1, noNaN: true })), fc.integer({ min: -40, max: 80 }))
+					.tuple(
+						fc.oneof(fc.constantFrom(0, 1), fc.double({ min: 0, max: 1, noNaN: true })),
+						fc.integer({ min: -40, max: 80 })
+					)
 					.map(([t, kN]): ElementLoad => ({ kind: 'point', a: t * L, P: kN * 1e3 })),
 				fc
 					.tuple(
@@ -35,7 +38,10 @@ const elementArb = fc.integer({ min: 1000, max: 12000 }).chain((L) =>
 			{ minLength: 1, maxLength: 40 }
 		),
 		forces: fc.tuple(fc.integer({ min: -1e5, max: 1e5 }), fc.integer({ min: -1e8, max: 1e8 })),
-		ends: fc.tuple(fc.double({ min: -5, max: 5, noNaN: true }), fc.double({ min: -0.01, max: 0.01, noNaN: true })),
+		ends: fc.tuple(
+			fc.double({ min: -5, max: 5, noNaN: true }),
+			fc.double({ min: -0.01, max: 0.01, noNaN: true })
+		),
 		reads: fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { maxLength: 10 })
 	})
 );
@@ -52,16 +58,34 @@ describe('element readings from a table of states', () => {
 					forces: [c.forces[0], c.forces[1], 0, 0]
 				};
 				// Scales of each quantity: what the largest terms of the sums can reach.
-				const P = Math.abs(c.forces[0]) + c.loads.reduce((s, l) => s + (l.kind === 'point' ? Math.abs(l.P) : (Math.abs(l.wa) + Math.abs(l.wb)) * c.L), 0);
+				const P =
+					Math.abs(c.forces[0]) +
+					c.loads.reduce(
+						(s, l) =>
+							s + (l.kind === 'point' ? Math.abs(l.P) : (Math.abs(l.wa) + Math.abs(l.wb)) * c.L),
+						0
+					);
 				const M = Math.abs(c.forces[1]) + P * c.L;
-				const scale = { V: P, M, slope: Math.abs(c.ends[1]) + (M * c.L) / el.EI, w: Math.abs(c.ends[0]) + c.L * (Math.abs(c.ends[1]) + (M * c.L) / el.EI) };
-				const xs = [0, c.L, ...c.loads.flatMap((l) => (l.kind === 'point' ? [l.a] : [l.a, l.b])), ...c.reads.map((t) => t * c.L)];
+				const scale = {
+					V: P,
+					M,
+					slope: Math.abs(c.ends[1]) + (M * c.L) / el.EI,
+					w: Math.abs(c.ends[0]) + c.L * (Math.abs(c.ends[1]) + (M * c.L) / el.EI)
+				};
+				const xs = [
+					0,
+					c.L,
+					...c.loads.flatMap((l) => (l.kind === 'point' ? [l.a] : [l.a, l.b])),
+					...c.reads.map((t) => t * c.L)
+				];
 				for (const x of xs) {
 					for (const side of ['left', 'right'] as const) {
 						const a = readBySums(el, x, side);
 						const b = readByTable(el, x, side);
 						for (const k of ['V', 'M', 'slope', 'w'] as const) {
-							expect(Math.abs(a[k] - b[k]), `${k} at ${x} ${side}`).toBeLessThanOrEqual(1e-12 * scale[k] + 1e-300);
+							expect(Math.abs(a[k] - b[k]), `${k} at ${x} ${side}`).toBeLessThanOrEqual(
+								1e-12 * scale[k] + 1e-300
+							);
 						}
 					}
 				}

@@ -74,7 +74,8 @@ function rowAllows(c: CheckReport['checks'][number]): number {
 
 /** Every key that names a capacity, anywhere in a plain data tree, with a number in it. */
 function findCapacityNumbers(value: unknown, path = 'report'): string[] {
-	const names = /^(multiplier|reserve|loadFactor|allowable|mpRd|vRd|mbRd|fRd|myVRd|lowerBound|upperBound|p)$/;
+	const names =
+		/^(multiplier|reserve|loadFactor|allowable|mpRd|vRd|mbRd|fRd|myVRd|lowerBound|upperBound|p)$/;
 	if (Array.isArray(value)) return value.flatMap((v, i) => findCapacityNumbers(v, `${path}[${i}]`));
 	if (value && typeof value === 'object') {
 		return Object.entries(value).flatMap(([k, v]) => {
@@ -112,7 +113,8 @@ describe('one answer', () => {
 					expect(a.multiplier).toBe(least);
 					expect(a.verdict === 'pass').toBe(a.multiplier >= 1);
 					for (const l of a.allowable) {
-						if (l.value !== null) expect(l.value).toBeCloseTo(a.multiplier * Math.abs(l.entered), 9);
+						if (l.value !== null)
+							expect(l.value).toBeCloseTo(a.multiplier * Math.abs(l.entered), 9);
 					}
 				}
 				const bending = r.checks.find((c) => c.id === 'bending');

@@ -8,7 +8,19 @@ import fc from 'fast-check';
 import { listSections, resolveSection } from '../../src/lib/engine/section/index';
 import type { SectionProps } from '../../src/lib/engine/section/index';
 
-const MONOTONE: (keyof SectionProps)[] = ['A', 'mass', 'Iy', 'Iz', 'Wely', 'Wply', 'Welz', 'Wplz', 'It', 'Iw', 'Avz'];
+const MONOTONE: (keyof SectionProps)[] = [
+	'A',
+	'mass',
+	'Iy',
+	'Iz',
+	'Wely',
+	'Wply',
+	'Welz',
+	'Wplz',
+	'It',
+	'Iw',
+	'Avz'
+];
 const designations = listSections().map((s) => s.designation);
 
 function propsAt(designation: string, loss: number): SectionProps | null {
@@ -29,7 +41,8 @@ describe('section loss', () => {
 					const moreLost = propsAt(designation, large);
 					if (!moreLost) return; // refused: the element is consumed
 					expect(lessLost).not.toBeNull();
-					for (const key of MONOTONE) expect(moreLost[key]).toBeLessThanOrEqual(lessLost![key] * (1 + 1e-12));
+					for (const key of MONOTONE)
+						expect(moreLost[key]).toBeLessThanOrEqual(lessLost![key] * (1 + 1e-12));
 				}
 			),
 			{ numRuns: 300 }
@@ -42,14 +55,18 @@ describe('section loss', () => {
 
 	it('any loss gives finite properties or an issue, never NaN', () => {
 		fc.assert(
-			fc.property(fc.constantFrom(...designations), fc.double({ min: 0, max: 40, noNaN: true }), (designation, loss) => {
-				const r = resolveSection({ designation }, { loss });
-				if (!r.ok) {
-					expect(r.issues.length).toBeGreaterThan(0);
-					return;
+			fc.property(
+				fc.constantFrom(...designations),
+				fc.double({ min: 0, max: 40, noNaN: true }),
+				(designation, loss) => {
+					const r = resolveSection({ designation }, { loss });
+					if (!r.ok) {
+						expect(r.issues.length).toBeGreaterThan(0);
+						return;
+					}
+					for (const v of Object.values(r.value.props!)) expect(Number.isFinite(v)).toBe(true);
 				}
-				for (const v of Object.values(r.value.props!)) expect(Number.isFinite(v)).toBe(true);
-			})
+			)
 		);
 	});
 });

@@ -29,8 +29,20 @@ describe('Wpl ≥ Wel', () => {
 				fc.double({ min: 2, max: 20, noNaN: true }),
 				(h, ratio, t) => {
 					const b = Math.max(h * ratio, 6 * t + 20);
-					const i = computeSectionProperties('I', { h, b, tw: t, tf: Math.min(1.5 * t, h / 5), r: t });
-					const rhs = computeSectionProperties('RHS', { h, b: Math.max(h * ratio, 4 * t), t, ro: 1.5 * t, ri: t });
+					const i = computeSectionProperties('I', {
+						h,
+						b,
+						tw: t,
+						tf: Math.min(1.5 * t, h / 5),
+						r: t
+					});
+					const rhs = computeSectionProperties('RHS', {
+						h,
+						b: Math.max(h * ratio, 4 * t),
+						t,
+						ro: 1.5 * t,
+						ri: t
+					});
 					const chs = computeSectionProperties('CHS', { d: h, t: Math.min(t, h / 4) });
 					for (const p of [i, rhs, chs]) {
 						expect(p.Wply).toBeGreaterThanOrEqual(p.Wely * (1 - 1e-12));

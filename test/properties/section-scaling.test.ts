@@ -9,7 +9,20 @@ import { computeSectionProperties } from '../../src/lib/engine/section/index';
 import type { SectionProps } from '../../src/lib/engine/section/index';
 
 const POWERS: Record<keyof SectionProps, number> = {
-	A: 2, mass: 2, Iy: 4, Iz: 4, Wely: 3, Wply: 3, Welz: 3, Wplz: 3, It: 4, Iw: 6, iy: 1, iz: 1, Avz: 2, d: 1
+	A: 2,
+	mass: 2,
+	Iy: 4,
+	Iz: 4,
+	Wely: 3,
+	Wply: 3,
+	Welz: 3,
+	Wplz: 3,
+	It: 4,
+	Iw: 6,
+	iy: 1,
+	iz: 1,
+	Avz: 2,
+	d: 1
 };
 const expectScaled = (scaled: SectionProps, base: SectionProps, k: number): void => {
 	for (const key of Object.keys(POWERS) as (keyof SectionProps)[]) {
@@ -20,19 +33,31 @@ const expectScaled = (scaled: SectionProps, base: SectionProps, k: number): void
 const scale = <T extends object>(dims: T, k: number): T =>
 	Object.fromEntries(Object.entries(dims).map(([key, v]) => [key, (v as number) * k])) as T;
 
-const iDims = fc.record({
-	h: fc.double({ min: 100, max: 1000, noNaN: true }),
-	bRatio: fc.double({ min: 0.3, max: 1.1, noNaN: true }),
-	tw: fc.double({ min: 3, max: 20, noNaN: true }),
-	tf: fc.double({ min: 4, max: 30, noNaN: true }),
-	r: fc.double({ min: 0, max: 20, noNaN: true })
-}).map(({ h, bRatio, tw, tf, r }) => ({ h, b: Math.max(h * bRatio, tw + 2 * r + 10), tw, tf: Math.min(tf, h / 4), r }));
+const iDims = fc
+	.record({
+		h: fc.double({ min: 100, max: 1000, noNaN: true }),
+		bRatio: fc.double({ min: 0.3, max: 1.1, noNaN: true }),
+		tw: fc.double({ min: 3, max: 20, noNaN: true }),
+		tf: fc.double({ min: 4, max: 30, noNaN: true }),
+		r: fc.double({ min: 0, max: 20, noNaN: true })
+	})
+	.map(({ h, bRatio, tw, tf, r }) => ({
+		h,
+		b: Math.max(h * bRatio, tw + 2 * r + 10),
+		tw,
+		tf: Math.min(tf, h / 4),
+		r
+	}));
 
 describe('scaling every dimension by k', () => {
 	it('rolled I: doubling multiplies A by 4 and Iy by 16 (and so on for every property)', () => {
 		fc.assert(
 			fc.property(iDims, fc.double({ min: 0.25, max: 4, noNaN: true }), (dims, k) => {
-				expectScaled(computeSectionProperties('I', scale(dims, k)), computeSectionProperties('I', dims), k);
+				expectScaled(
+					computeSectionProperties('I', scale(dims, k)),
+					computeSectionProperties('I', dims),
+					k
+				);
 			})
 		);
 		const base = computeSectionProperties('I', { h: 303.4, b: 165, tw: 6, tf: 10.2, r: 8.9 });
@@ -60,11 +85,23 @@ describe('scaling every dimension by k', () => {
 				fc.double({ min: 0.25, max: 4, noNaN: true }),
 				(h, ratio, t, k) => {
 					const rhs = { h, b: Math.max(h * ratio, 4 * t), t, ro: 1.5 * t, ri: t };
-					expectScaled(computeSectionProperties('RHS', scale(rhs, k)), computeSectionProperties('RHS', rhs), k);
+					expectScaled(
+						computeSectionProperties('RHS', scale(rhs, k)),
+						computeSectionProperties('RHS', rhs),
+						k
+					);
 					const chs = { d: h, t };
-					expectScaled(computeSectionProperties('CHS', scale(chs, k)), computeSectionProperties('CHS', chs), k);
+					expectScaled(
+						computeSectionProperties('CHS', scale(chs, k)),
+						computeSectionProperties('CHS', chs),
+						k
+					);
 					const flat = { h, b: t };
-					expectScaled(computeSectionProperties('flat', scale(flat, k)), computeSectionProperties('flat', flat), k);
+					expectScaled(
+						computeSectionProperties('flat', scale(flat, k)),
+						computeSectionProperties('flat', flat),
+						k
+					);
 				}
 			)
 		);

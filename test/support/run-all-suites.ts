@@ -30,8 +30,15 @@ function readJson(path: string): unknown {
 }
 
 // 1. Type check counts as one check: a type error is a failure like any other.
-const typed = run('type check', 'npx', ['svelte-kit', 'sync']) &&
-	run('svelte-check', 'npx', ['svelte-check', '--tsconfig', './tsconfig.json', '--threshold', 'error']);
+const typed =
+	run('type check', 'npx', ['svelte-kit', 'sync']) &&
+	run('svelte-check', 'npx', [
+		'svelte-check',
+		'--tsconfig',
+		'./tsconfig.json',
+		'--threshold',
+		'error'
+	]);
 total[typed ? 'passed' : 'failed'] += 1;
 
 // 2. Lint (ESLint, with the engine's layering rules) counts as one check too. Formatting is not
@@ -42,12 +49,16 @@ total[run('lint', 'npm', ['run', '--silent', 'lint']) ? 'passed' : 'failed'] += 
 const unitFile = `${results}/unit-results.json`;
 rmSync(unitFile, { force: true });
 const unitOk = run('unit, validation, property and storage tests', 'npx', [
-	'vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile=${unitFile}`
+	'vitest',
+	'run',
+	'--reporter=default',
+	'--reporter=json',
+	`--outputFile=${unitFile}`
 ]);
 const unit = readJson(unitFile) as { numPassedTests?: number; numFailedTests?: number } | null;
 total.passed += unit?.numPassedTests ?? 0;
 total.failed += unit?.numFailedTests ?? 0;
-if (!unitOk && !(unit?.numFailedTests)) total.failed += 1; // the runner itself failed
+if (!unitOk && !unit?.numFailedTests) total.failed += 1; // the runner itself failed
 
 // 4. Browser tests run against the production build: prerendering and the worker exist only there.
 const browser = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
@@ -64,10 +75,12 @@ if (!existsSync(browser)) {
 	const e2eFile = `${results}/e2e-results.json`;
 	rmSync(e2eFile, { force: true });
 	const e2eOk = run('browser tests', 'npx', ['playwright', 'test']);
-	const e2e = readJson(e2eFile) as { stats?: { expected: number; unexpected: number; flaky: number } } | null;
+	const e2e = readJson(e2eFile) as {
+		stats?: { expected: number; unexpected: number; flaky: number };
+	} | null;
 	total.passed += (e2e?.stats?.expected ?? 0) + (e2e?.stats?.flaky ?? 0);
 	total.failed += e2e?.stats?.unexpected ?? 0;
-	if (!e2eOk && !(e2e?.stats?.unexpected)) total.failed += 1;
+	if (!e2eOk && !e2e?.stats?.unexpected) total.failed += 1;
 }
 
 console.log(`\n${total.passed} passed, ${total.failed} failed`);

@@ -34,7 +34,9 @@ describe('W shapes in flexure, A992 (Fy = 50 ksi)', () => {
 	});
 
 	it('W8x31 is compact in A36 (λp = 0.38√(29000/36) = 10.79)', () => {
-		expect(classifySectionAISC(resolve({ designation: 'W8x31' }), 36 * US.ksiToMPa).category).toBe('compact');
+		expect(classifySectionAISC(resolve({ designation: 'W8x31' }), 36 * US.ksiToMPa).category).toBe(
+			'compact'
+		);
 	});
 });
 

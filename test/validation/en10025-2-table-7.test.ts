@@ -23,12 +23,15 @@ describe('EN 10025-2:2004 Table 7, ReH by nominal thickness', () => {
 	};
 	const BAND_TOPS = [16, 40, 63, 80, 100, 150, 200, 250];
 
-	it.each(Object.entries(TABLE))('%s steps at 16, 40, 63, 80, 100, 150, 200 mm', (grade, values) => {
-		BAND_TOPS.forEach((top, i) => {
-			expect(fyOf(grade, top)).toBe(values[i]); // t at the top of the band (t ≤ top)
-			expect(fyOf(grade, top - 0.5)).toBe(values[i]);
-		});
-	});
+	it.each(Object.entries(TABLE))(
+		'%s steps at 16, 40, 63, 80, 100, 150, 200 mm',
+		(grade, values) => {
+			BAND_TOPS.forEach((top, i) => {
+				expect(fyOf(grade, top)).toBe(values[i]); // t at the top of the band (t ≤ top)
+				expect(fyOf(grade, top - 0.5)).toBe(values[i]);
+			});
+		}
+	);
 
 	it('fu is the lower end of Rm for 3 ≤ t ≤ 100: 360, 410, 470 N/mm²', () => {
 		const fu = (g: string) => (resolveGrade(g, 10) as { ok: true; value: { fu: number } }).value.fu;
@@ -80,13 +83,16 @@ describe('older steel and iron', () => {
 		expect(r.warnings.map((w) => w.code)).toContain('grade-needs-confirmation');
 	});
 
-	it.each(['cast-iron', 'wrought-iron', 'Cast iron'])('%s is refused for plastic analysis with the reason', (id) => {
-		const r = resolveGrade(id, 10);
-		expect(r.ok).toBe(false);
-		if (r.ok) return;
-		expect(r.issues[0].code).toBe('material-not-ductile');
-		expect(r.issues[0].message).toMatch(/plastic/);
-	});
+	it.each(['cast-iron', 'wrought-iron', 'Cast iron'])(
+		'%s is refused for plastic analysis with the reason',
+		(id) => {
+			const r = resolveGrade(id, 10);
+			expect(r.ok).toBe(false);
+			if (r.ok) return;
+			expect(r.issues[0].code).toBe('material-not-ductile');
+			expect(r.issues[0].message).toMatch(/plastic/);
+		}
+	);
 
 	it('a user fy with fu/fy below 1.10 is flagged as not ductile (EN 1993-1-1 3.2.2)', () => {
 		const r = resolveGrade({ fy: 400, fu: 420 }, 10);

@@ -28,7 +28,11 @@ const loads: Load[] = [
 /** Largest Qk (N) over the arrangements of a factor set, by the midspan-hinge closed form. */
 function largestQk(set: 'en1990-6.10' | 'en1990-6.10ab', extra: Record<string, number> = {}) {
 	const f = resolveFactors({ set, ...extra }, { hasImposed: false });
-	const arrangements = listLoadArrangements({ combinations: f.combinations, spanCount: 1, imposedSpans: [] });
+	const arrangements = listLoadArrangements({
+		combinations: f.combinations,
+		spanCount: 1,
+		imposedSpans: []
+	});
 	let best = Infinity;
 	let name = '';
 	for (const arrangement of arrangements) {
@@ -73,7 +77,10 @@ describe('recommended factors (EN 1990 Table A1.2(B))', () => {
 	});
 
 	it('a separate temporary factor and edited γM values are kept', () => {
-		const f = resolveFactors({ set: 'en1990-6.10', gammaT: 1.6, gammaM0: 1.05 }, { hasImposed: false });
+		const f = resolveFactors(
+			{ set: 'en1990-6.10', gammaT: 1.6, gammaM0: 1.05 },
+			{ hasImposed: false }
+		);
 		expect(f.combinations[0].gammaTemporary).toBe(1.6);
 		expect(f.gammaM0).toBe(1.05);
 	});
@@ -106,15 +113,25 @@ describe('worked example: 305x165x40 UB S275, 6 m, gk 4 kN/m, Qk at midspan', ()
 describe('load patterns (EN 1990 A1.3.1, single-source permanent load)', () => {
 	it('lists 2 permanent factors × 2^k imposed patterns per combination', () => {
 		const f = resolveFactors({ set: 'en1990-6.10' }, { hasImposed: true });
-		const all = listLoadArrangements({ combinations: f.combinations, spanCount: 3, imposedSpans: [0, 1, 2] });
+		const all = listLoadArrangements({
+			combinations: f.combinations,
+			spanCount: 3,
+			imposedSpans: [0, 1, 2]
+		});
 		expect(all).toHaveLength(2 * 2 * 8);
 		expect(new Set(all.map((a) => a.name)).size).toBe(all.length);
 	});
 
 	it('puts imposed load only on the spans of the pattern and permanent load everywhere', () => {
-		const f = resolveFactors({ set: 'custom', gammaGsup: 1.2, gammaGinf: 0.9, gammaQ: 1.6 }, { hasImposed: true });
-		const arrangement = listLoadArrangements({ combinations: f.combinations, spanCount: 2, imposedSpans: [0, 1] })
-			.find((a) => a.imposedBySpan[0] === 0 && a.imposedBySpan[1] > 0 && a.permanent === 'inf')!;
+		const f = resolveFactors(
+			{ set: 'custom', gammaGsup: 1.2, gammaGinf: 0.9, gammaQ: 1.6 },
+			{ hasImposed: true }
+		);
+		const arrangement = listLoadArrangements({
+			combinations: f.combinations,
+			spanCount: 2,
+			imposedSpans: [0, 1]
+		}).find((a) => a.imposedBySpan[0] === 0 && a.imposedBySpan[1] > 0 && a.permanent === 'inf')!;
 		const d = applyArrangement({
 			loads: [
 				{ kind: 'uniform', from: 0, to: 8000, value: 2, action: 'imposed' },

@@ -35,7 +35,7 @@ function leastQk(psi0T?: number): { qk: number; name: string } {
 		const d = applyArrangement({ loads, spans: [L], arrangement });
 		const w = d.fixed.reduce((s, l) => s + (l.kind === 'uniform' ? l.value : 0), 0);
 		const q = d.variable.reduce((s, l) => s + (l.kind === 'point' ? l.value : 0), 0) / 1000;
-		const qk = (((Mp - (w * L * L) / 8) * 4) / (q * L)) / 1000;
+		const qk = ((Mp - (w * L * L) / 8) * 4) / (q * L) / 1000;
 		if (qk < best.qk) best = { qk, name: arrangement.name };
 	}
 	return best;
@@ -50,7 +50,7 @@ describe('ψ0 of the temporary (construction) load', () => {
 	});
 
 	it('6.10 with imposed load leading governs: Qk by hand 56.34 kN', () => {
-		const byHand = (((Mp - ((1.35 * 4 + 1.5 * 3) * L * L) / 8) * 4) / (1.5 * 1.0 * L)) / 1000;
+		const byHand = ((Mp - ((1.35 * 4 + 1.5 * 3) * L * L) / 8) * 4) / (1.5 * 1.0 * L) / 1000;
 		const r = leastQk();
 		expectRel(r.qk, byHand, 1e-9);
 		expectRel(r.qk, 56.34, 1e-3);
@@ -59,7 +59,7 @@ describe('ψ0 of the temporary (construction) load', () => {
 
 	it('with the imposed-load ψ0 = 0.7 taken for it the answer would be 59.04 kN, unsafe', () => {
 		// Temporary leading then governs: 1.35·gk + 1.5·0.7·qk with the temporary load at 1.5.
-		const byHand = (((Mp - ((1.35 * 4 + 1.5 * 0.7 * 3) * L * L) / 8) * 4) / (1.5 * L)) / 1000;
+		const byHand = ((Mp - ((1.35 * 4 + 1.5 * 0.7 * 3) * L * L) / 8) * 4) / (1.5 * L) / 1000;
 		expectRel(leastQk(0.7).qk, byHand, 1e-9);
 		expect(leastQk(0.7).qk).toBeGreaterThan(leastQk().qk);
 	});

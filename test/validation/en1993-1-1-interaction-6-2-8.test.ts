@@ -24,13 +24,15 @@ describe('ρ (EN 1993-1-1 6.2.8(3))', () => {
 
 	it('is (2VEd/Vpl,Rd − 1)² above, reaching 1 at VEd = Vpl,Rd', () => {
 		const vEd = 200e3;
-		expectRel(computeShearReduction({ vEd, vplRd }), (2 * vEd / vplRd - 1) ** 2, 1e-12);
+		expectRel(computeShearReduction({ vEd, vplRd }), ((2 * vEd) / vplRd - 1) ** 2, 1e-12);
 		expectRel(computeShearReduction({ vEd, vplRd }), 0.06524, 1e-3);
 		expectRel(computeShearReduction({ vEd: vplRd, vplRd }), 1, 1e-12);
 	});
 
 	it('ignores the sign of the shear', () => {
-		expect(computeShearReduction({ vEd: -250e3, vplRd })).toBe(computeShearReduction({ vEd: 250e3, vplRd }));
+		expect(computeShearReduction({ vEd: -250e3, vplRd })).toBe(
+			computeShearReduction({ vEd: 250e3, vplRd })
+		);
 	});
 });
 
@@ -49,6 +51,8 @@ describe('My,V,Rd (EN 1993-1-1 eq. 6.30)', () => {
 
 	it('equals Mpl,Rd when ρ = 0 and never exceeds it', () => {
 		expectRel(computeReducedMomentResistance({ ...section, rho: 0 }), 623e3 * 275, 1e-12);
-		expect(computeReducedMomentResistance({ ...section, rho: -0.5 })).toBeLessThanOrEqual(623e3 * 275);
+		expect(computeReducedMomentResistance({ ...section, rho: -0.5 })).toBeLessThanOrEqual(
+			623e3 * 275
+		);
 	});
 });

@@ -23,7 +23,9 @@ import { expectRel } from '../support/expect-rel';
 const E = 210_000;
 const G = 81_000;
 const mcrUniform = (L: number, Iz: number, It: number, Iw: number) =>
-	(Math.PI / L) * Math.sqrt(E * Iz * G * It) * Math.sqrt(1 + (Math.PI ** 2 * E * Iw) / (L * L * G * It));
+	(Math.PI / L) *
+	Math.sqrt(E * Iz * G * It) *
+	Math.sqrt(1 + (Math.PI ** 2 * E * Iw) / (L * L * G * It));
 
 // Closed forms of eq. 6.56 and 6.57, written out independently of the engine.
 const chi656 = (l: number, a: number) => {
@@ -93,33 +95,74 @@ describe('Mb,Rd (6.3.2.1) for uniform moment, fork supports, load at the shear c
 	it('305x165x40 UB S275, 6 m: Mcr 96.90 kNm, λ̄ 1.3297, χ 0.5080, Mb,Rd 87.04 kNm (curve b)', () => {
 		const mcr = mcrUniform(6000, 764e4, 14.7e4, 0.164e12);
 		expectRel(mcr, 96.9e6, 1e-3);
-		const r = computeLtbResistance({ Wy: 623e3, fy: 275, mcr, gammaM1: 1, curve: 'b', method: 'rolled' });
+		const r = computeLtbResistance({
+			Wy: 623e3,
+			fy: 275,
+			mcr,
+			gammaM1: 1,
+			curve: 'b',
+			method: 'rolled'
+		});
 		expectRel(r.lambdaBar, Math.sqrt((623e3 * 275) / mcr), 1e-12);
 		expectRel(r.chiLT, chi657(r.lambdaBar, 0.34), 1e-12);
 		expectRel(r.mbRd, 87.04e6, 1e-3);
 		// 6.3.2.2 curve a for comparison: 77.79 kNm.
-		const g = computeLtbResistance({ Wy: 623e3, fy: 275, mcr, gammaM1: 1, curve: 'a', method: 'general' });
+		const g = computeLtbResistance({
+			Wy: 623e3,
+			fy: 275,
+			mcr,
+			gammaM1: 1,
+			curve: 'a',
+			method: 'general'
+		});
 		expectRel(g.mbRd, 77.79e6, 1e-3);
 	});
 
 	it('IPE 300 S355, 5 m: Mb,Rd 106.71 kNm (6.3.2.3 b) and 94.47 kNm (6.3.2.2 a)', () => {
 		const mcr = mcrUniform(5000, 603.8e4, 20.12e4, 0.1259e12);
 		expectRel(mcr, 115.68e6, 1e-3);
-		const r = computeLtbResistance({ Wy: 628.4e3, fy: 355, mcr, gammaM1: 1, curve: 'b', method: 'rolled' });
+		const r = computeLtbResistance({
+			Wy: 628.4e3,
+			fy: 355,
+			mcr,
+			gammaM1: 1,
+			curve: 'b',
+			method: 'rolled'
+		});
 		expectRel(r.mbRd, 106.71e6, 1e-3);
-		const g = computeLtbResistance({ Wy: 628.4e3, fy: 355, mcr, gammaM1: 1, curve: 'a', method: 'general' });
+		const g = computeLtbResistance({
+			Wy: 628.4e3,
+			fy: 355,
+			mcr,
+			gammaM1: 1,
+			curve: 'a',
+			method: 'general'
+		});
 		expectRel(g.mbRd, 94.47e6, 1e-3);
 	});
 
 	it('IPE 200 S235, 5 m: Mb,Rd 25.63 kNm (6.3.2.3 b)', () => {
 		const mcr = mcrUniform(5000, 142.4e4, 6.98e4, 0.01299e12);
 		expectRel(mcr, 28.19e6, 1e-3);
-		const r = computeLtbResistance({ Wy: 220.6e3, fy: 235, mcr, gammaM1: 1, curve: 'b', method: 'rolled' });
+		const r = computeLtbResistance({
+			Wy: 220.6e3,
+			fy: 235,
+			mcr,
+			gammaM1: 1,
+			curve: 'b',
+			method: 'rolled'
+		});
 		expectRel(r.mbRd, 25.63e6, 1e-3);
 	});
 
 	it('divides by γM1', () => {
-		const base = { Wy: 623e3, fy: 275, mcr: 96.9e6, curve: 'b' as const, method: 'rolled' as const };
+		const base = {
+			Wy: 623e3,
+			fy: 275,
+			mcr: 96.9e6,
+			curve: 'b' as const,
+			method: 'rolled' as const
+		};
 		const a = computeLtbResistance({ ...base, gammaM1: 1 });
 		const b = computeLtbResistance({ ...base, gammaM1: 1.1 });
 		expectRel(b.mbRd, a.mbRd / 1.1, 1e-12);

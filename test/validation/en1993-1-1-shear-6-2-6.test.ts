@@ -44,7 +44,11 @@ describe('shear area of rolled I sections (EN 1993-1-1 6.2.6(3)(a))', () => {
 describe('Vpl,Rd = Av(fy/√3)/γM0 (EN 1993-1-1 eq. 6.18)', () => {
 	it('305x165x40 UB S275: 318.6 kN; S355: 411.3 kN (eq. 6.18 computed)', () => {
 		const Av = computeShearArea({ ...ub305, eta: 1 })!;
-		expectRel(computePlasticShearResistance({ Av, fy: 275, gammaM0: 1 }), (Av * 275) / Math.sqrt(3), 1e-12);
+		expectRel(
+			computePlasticShearResistance({ Av, fy: 275, gammaM0: 1 }),
+			(Av * 275) / Math.sqrt(3),
+			1e-12
+		);
 		expectRel(computePlasticShearResistance({ Av, fy: 275, gammaM0: 1 }), 318.6e3, 2e-4);
 		expectRel(computePlasticShearResistance({ Av, fy: 355, gammaM0: 1 }), 411.3e3, 2e-4);
 	});
@@ -68,12 +72,18 @@ describe('shear buckling limit hw/tw ≤ 72ε/η (EN 1993-1-1 6.2.6(6), from mem
 		expectRel(r.ratio, 50.4, 2e-3);
 		expectRel(r.limit, (72 * Math.sqrt(235 / 355)) / 1.2, 1e-12);
 		expect(r.needsShearBucklingCheck).toBe(true);
-		expect(checkWebSlenderness({ hw, tw: ub457.tw, fy: 355, eta: 1 }).needsShearBucklingCheck).toBe(false);
+		expect(checkWebSlenderness({ hw, tw: ub457.tw, fy: 355, eta: 1 }).needsShearBucklingCheck).toBe(
+			false
+		);
 	});
 
 	it('is exactly at the limit when hw/tw = 72ε/η (boundary not exceeded)', () => {
 		const limit = 72 * Math.sqrt(235 / 235);
-		expect(checkWebSlenderness({ hw: limit * 5, tw: 5, fy: 235, eta: 1 }).needsShearBucklingCheck).toBe(false);
-		expect(checkWebSlenderness({ hw: limit * 5 + 0.01, tw: 5, fy: 235, eta: 1 }).needsShearBucklingCheck).toBe(true);
+		expect(
+			checkWebSlenderness({ hw: limit * 5, tw: 5, fy: 235, eta: 1 }).needsShearBucklingCheck
+		).toBe(false);
+		expect(
+			checkWebSlenderness({ hw: limit * 5 + 0.01, tw: 5, fy: 235, eta: 1 }).needsShearBucklingCheck
+		).toBe(true);
 	});
 });

@@ -6,7 +6,10 @@
  * (SCI P363, from memory). Closed forms are evaluated here.
  */
 import { describe, expect, it } from 'vitest';
-import { computeEndMomentRatio, computeStableLength } from '../../src/lib/engine/checks/en1993/stable-length';
+import {
+	computeEndMomentRatio,
+	computeStableLength
+} from '../../src/lib/engine/checks/en1993/stable-length';
 import { runDesignChecks } from '../../src/lib/engine/checks/run-checks';
 import { resolveSection } from '../../src/lib/engine/section/index';
 import { resolveGrade } from '../../src/lib/engine/material/index';
@@ -25,7 +28,9 @@ describe('Lstable (6.3.5.3)', () => {
 	it('is continuous at ψ = 0.625 and reaches 100·ε·iz at ψ = −1', () => {
 		const at = computeStableLength({ ...ub, psi: 0.625 })!;
 		expect(Math.abs(at - 35 * eps * 38.6)).toBeLessThan(1e-9);
-		expect(Math.abs(computeStableLength({ ...ub, psi: -1 })! - 100 * eps * 38.6)).toBeLessThan(1e-9);
+		expect(Math.abs(computeStableLength({ ...ub, psi: -1 })! - 100 * eps * 38.6)).toBeLessThan(
+			1e-9
+		);
 	});
 
 	it('does not apply when h/tf > 40ε', () => {
@@ -67,6 +72,8 @@ describe('restraint at the hinge and the plastic route', () => {
 	it('restraints 2 m either side (ψ = 1/3: 2000 mm > (60 − 40/3)·ε·iz ≈ 1666 mm) do not', () => {
 		const Ls = computeStableLength({ ...ub, psi: 1 / 3 })!;
 		expect(Math.abs(Ls - (60 - 40 / 3) * eps * 38.6)).toBeLessThan(1e-9);
-		expect(runDesignChecks(input([1000, 3000, 5000])).verdict.route).toBe('elastic-plastic-section');
+		expect(runDesignChecks(input([1000, 3000, 5000])).verdict.route).toBe(
+			'elastic-plastic-section'
+		);
 	});
 });

@@ -67,7 +67,9 @@ describe('hollow sections (Table 5.2)', () => {
 		const slender = classifySectionEN(resolve({ shape: 'CHS', d: 323.9, t: 5 }), fy);
 		expect(slender.elements[0].ratio).toBeCloseTo(323.9 / 5, 12);
 		const { class1, class2, class3 } = slender.elements[0].limits;
-		expect([class1 / (50 * e2), class2 / (70 * e2), class3 / (90 * e2)].map((x) => x.toFixed(12))).toEqual(['1.000000000000', '1.000000000000', '1.000000000000']);
+		expect(
+			[class1 / (50 * e2), class2 / (70 * e2), class3 / (90 * e2)].map((x) => x.toFixed(12))
+		).toEqual(['1.000000000000', '1.000000000000', '1.000000000000']);
 		expect(slender.class).toBe(4); // 64.8 > 59.6
 		expect(classifySectionEN(resolve({ designation: 'CHS 114.3x5.0' }), fy).class).toBe(1); // 22.9
 	});

@@ -22,7 +22,16 @@ import { expectRel } from '../support/expect-rel';
 
 const E = 210_000;
 const ub = { hw: 303.4 - 2 * 10.2, tw: 6, bf: 165, tf: 10.2, fyw: 275, fyf: 275, E, gammaM1: 1 };
-const uc = { hw: 254.1 - 2 * 14.2, tw: 8.6, bf: 254.6, tf: 14.2, fyw: 275, fyf: 275, E, gammaM1: 1 };
+const uc = {
+	hw: 254.1 - 2 * 14.2,
+	tw: 8.6,
+	bf: 254.6,
+	tf: 14.2,
+	fyw: 275,
+	fyf: 275,
+	E,
+	gammaM1: 1
+};
 
 /** Independent evaluation of 6.1–6.10 for types (a) and (b). */
 function byHand(s: typeof ub, kF: number, ss: number) {

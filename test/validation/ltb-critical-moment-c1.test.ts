@@ -24,7 +24,10 @@ const It = 14.7e4;
 const Iw = 0.164e12;
 const h = 303.4;
 const stiff = { EIz: E * Iz, GIt: G * It, EIw: E * Iw };
-const mcrUniform = (Math.PI / L) * Math.sqrt(E * Iz * G * It) * Math.sqrt(1 + (Math.PI ** 2 * E * Iw) / (L * L * G * It));
+const mcrUniform =
+	(Math.PI / L) *
+	Math.sqrt(E * Iz * G * It) *
+	Math.sqrt(1 + (Math.PI ** 2 * E * Iw) / (L * L * G * It));
 
 const c1 = (segment: LtbSegment, zg = 0) =>
 	computeCriticalMoment({ segment, ...stiff, zg })!.mcr / mcrUniform;
@@ -56,7 +59,11 @@ describe('uniform moment (C1 = 1)', () => {
 	});
 
 	it('does not depend on the size or sign of the moment', () => {
-		const big = computeCriticalMoment({ segment: { ...endMoments(1), momentStart: -200e6, momentEnd: -200e6 }, ...stiff, zg: 0 })!;
+		const big = computeCriticalMoment({
+			segment: { ...endMoments(1), momentStart: -200e6, momentEnd: -200e6 },
+			...stiff,
+			zg: 0
+		})!;
 		expect(Math.abs(big.mcr / mcrUniform - 1)).toBeLessThan(1e-9);
 		expect(Math.abs(big.factor * 200e6 - big.mcr)).toBeLessThan(1e-6 * big.mcr);
 	});
@@ -110,7 +117,9 @@ describe('load height (C2 effect)', () => {
 		const Pz = (Math.PI ** 2 * E * Iz) / (L * L);
 		const c2zg = 0.454 * zg;
 		const formula =
-			1.127 * Pz * (Math.sqrt(Iw / Iz + (L * L * G * It) / (Math.PI ** 2 * E * Iz) + c2zg ** 2) - c2zg);
+			1.127 *
+			Pz *
+			(Math.sqrt(Iw / Iz + (L * L * G * It) / (Math.PI ** 2 * E * Iz) + c2zg ** 2) - c2zg);
 		const ours = computeCriticalMoment({ segment: udl, ...stiff, zg })!.mcr;
 		expect(Math.abs(ours / formula - 1)).toBeLessThan(0.05);
 	});
@@ -118,6 +127,12 @@ describe('load height (C2 effect)', () => {
 
 describe('segments with no moment', () => {
 	it('returns null (nothing can buckle)', () => {
-		expect(computeCriticalMoment({ segment: { length: L, momentStart: 0, momentEnd: 0, loads: [] }, ...stiff, zg: 0 })).toBeNull();
+		expect(
+			computeCriticalMoment({
+				segment: { length: L, momentStart: 0, momentEnd: 0, loads: [] },
+				...stiff,
+				zg: 0
+			})
+		).toBeNull();
 	});
 });

@@ -22,7 +22,11 @@ import { describe, expect, it } from 'vitest';
 import { checkCase } from '../../src/lib/engine/index';
 import { expectRel } from '../support/expect-rel';
 
-const caseFile = (extra: Record<string, unknown> = {}, beam: Record<string, unknown> = {}, q = 10) => ({
+const caseFile = (
+	extra: Record<string, unknown> = {},
+	beam: Record<string, unknown> = {},
+	q = 10
+) => ({
 	format: 'hingepoint.case',
 	version: 1,
 	title: 'Worked example (invented site)',
@@ -115,14 +119,19 @@ describe('restrained: plastic collapse with EN 1990 factors', () => {
 
 describe('unrestrained over the span (lateral restraint at the supports only)', () => {
 	it('uses the elastic route with Mb,Rd; Qk,max lies between the C1 = 1.127 and 1.348 values', () => {
-		const r = run(caseFile({}, { restraint: { lateral: 'ends-only', loadHeight: 'shear-centre' } }));
+		const r = run(
+			caseFile({}, { restraint: { lateral: 'ends-only', loadHeight: 'shear-centre' } })
+		);
 		expect(r.design.route.route).toBe('elastic-plastic-section');
 		expect(r.answer.governing?.id).toBe('ltb');
 		const qk = r.answer.allowable[0].value!;
 		// Qk,max from Mb,Rd (6.3.2.3, curve b) with Mcr = C1·Mcr(uniform), computed here.
 		const p = r.sections[0].props!;
 		const [E, G, L] = [210_000, 81_000, 6000];
-		const mcr0 = (Math.PI / L) * Math.sqrt(E * p.Iz * G * p.It) * Math.sqrt(1 + (Math.PI ** 2 * E * p.Iw) / (L * L * G * p.It));
+		const mcr0 =
+			(Math.PI / L) *
+			Math.sqrt(E * p.Iz * G * p.It) *
+			Math.sqrt(1 + (Math.PI ** 2 * E * p.Iw) / (L * L * G * p.It));
 		const qkFor = (c1: number) => {
 			const l = Math.sqrt((p.Wply * 275) / (c1 * mcr0));
 			const phi = 0.5 * (1 + 0.34 * (l - 0.4) + 0.75 * l * l);
@@ -146,7 +155,8 @@ describe('unrestrained over the span (lateral restraint at the supports only)', 
 
 	it('a top-flange load allows less than a load at the shear centre, a bottom-flange load more', () => {
 		const at = (loadHeight: string) =>
-			run(caseFile({}, { restraint: { lateral: 'ends-only', loadHeight } })).answer.allowable[0].value!;
+			run(caseFile({}, { restraint: { lateral: 'ends-only', loadHeight } })).answer.allowable[0]
+				.value!;
 		expect(at('top-flange')).toBeLessThan(at('shear-centre'));
 		expect(at('bottom-flange')).toBeGreaterThan(at('shear-centre'));
 	});
@@ -163,7 +173,7 @@ describe('bending with shear at the hinges (EN 1993-1-1 6.2.8)', () => {
 		const Aw = (dims.h - 2 * dims.tf) * dims.tw;
 		const vpl = (r.checks.find((c) => c.id === 'shear')!.vRd as number) * 1e3; // N
 		const myV = (v: number) => {
-			const rho = v > 0.5 * vpl ? (2 * v / vpl - 1) ** 2 : 0;
+			const rho = v > 0.5 * vpl ? ((2 * v) / vpl - 1) ** 2 : 0;
 			return (props.Wply - (rho * Aw * Aw) / (4 * dims.tw)) * 275;
 		};
 		// Solve W = 8·My,V,Rd(W/2)/L by fixed-point iteration (N, mm).
@@ -181,7 +191,10 @@ describe('bending with shear at the hinges (EN 1993-1-1 6.2.8)', () => {
 		// End hinges carry the full end shear wL/2 (between 0.5 and 1.0 Vpl,Rd here); the midspan
 		// hinge carries none. Stiff bearings of 250 mm keep the supports out of the answer.
 		const r = run({
-			...caseFile({ factors: { temporary: 1 } }, { spans: [5], supports: ['fixed', 'fixed'], bearing: [250, 250] }),
+			...caseFile(
+				{ factors: { temporary: 1 } },
+				{ spans: [5], supports: ['fixed', 'fixed'], bearing: [250, 250] }
+			),
 			loads: [{ kind: 'uniform', from: 0, to: 5, value: 10, action: 'temporary' }]
 		});
 		const props = r.sections[0].props!;
@@ -190,7 +203,7 @@ describe('bending with shear at the hinges (EN 1993-1-1 6.2.8)', () => {
 		const vpl = (r.checks.find((c) => c.id === 'shear')!.vRd as number) * 1e3; // N
 		const mp = props.Wply * 275;
 		const myV = (v: number) => {
-			const rho = v > 0.5 * vpl ? (2 * v / vpl - 1) ** 2 : 0;
+			const rho = v > 0.5 * vpl ? ((2 * v) / vpl - 1) ** 2 : 0;
 			return (props.Wply - (rho * Aw * Aw) / (4 * dims.tw)) * 275;
 		};
 		let w = (16 * mp) / 5000 ** 2; // N/mm

@@ -26,13 +26,18 @@ function formatCheckText(r: CheckReport, warnings: { path: string; message: stri
 		lines.push(`  governing: ${a.governing.label}${u}`);
 	}
 	if (a.multiplier !== null) {
-		lines.push(`  multiplier on the proposed loads ${fmt(a.multiplier)}; reserve ${fmt(a.reserve! * 100, 3)} %`);
+		lines.push(
+			`  multiplier on the proposed loads ${fmt(a.multiplier)}; reserve ${fmt(a.reserve! * 100, 3)} %`
+		);
 	}
 	for (const t of a.allowable) lines.push(`  largest proposed load: ${describeAllowable(t)}`);
 	for (const reason of a.reasons) lines.push(`  - ${reason}`);
 	lines.push('', `Route: ${r.design.route.route}`, ...r.design.route.reasons.map((t) => `  ${t}`));
-	lines.push(`  ${r.design.basis}; factor set ${r.design.factorSet}, ${r.design.arrangementsTried} load arrangements tried`);
-	if (r.design.governingArrangement) lines.push(`  governing arrangement: ${r.design.governingArrangement}`);
+	lines.push(
+		`  ${r.design.basis}; factor set ${r.design.factorSet}, ${r.design.arrangementsTried} load arrangements tried`
+	);
+	if (r.design.governingArrangement)
+		lines.push(`  governing arrangement: ${r.design.governingArrangement}`);
 	r.sections.forEach((s, i) => {
 		const g = r.grades[i];
 		const cls = s.class === null ? 'class not known' : `Class ${s.class}`;
@@ -48,21 +53,27 @@ function formatCheckText(r: CheckReport, warnings: { path: string; message: stri
 	}
 	const c = r.collapse;
 	if (c) {
-		const role = c.decides ? 'the bending check of the plastic route' : 'for information, it does not decide';
+		const role = c.decides
+			? 'the bending check of the plastic route'
+			: 'for information, it does not decide';
 		lines.push('', `Plastic collapse in bending (partial result; ${role}):`);
 		if (c.loadFactor === null) lines.push(`  no load factor: ${c.message ?? c.status}`);
 		else {
 			const proof = c.certified ? ' (certified: bounds meet)' : ' — NOT CERTIFIED';
 			lines.push(`  load factor λ = ${fmt(c.loadFactor)}${proof}`);
 			if (c.mechanism) lines.push(`  mechanism: ${c.mechanism.name}`);
-			for (const h of c.hinges) lines.push(`  hinge at x = ${fmt(h.x)} m, M = ${fmt(h.moment)} kNm`);
+			for (const h of c.hinges)
+				lines.push(`  hinge at x = ${fmt(h.x)} m, M = ${fmt(h.moment)} kNm`);
 			if (c.message) lines.push(`  ${c.message}`);
 		}
 	}
 	if (r.capacityCurve?.min) {
 		const m = r.capacityCurve.min;
 		const by = m.governing ? `, governed by ${m.governing.label}` : '';
-		lines.push('', `Single proposed point load anywhere on the beam: least ${fmt(m.p)} kN at x = ${fmt(m.x)} m${by}`);
+		lines.push(
+			'',
+			`Single proposed point load anywhere on the beam: least ${fmt(m.p)} kN at x = ${fmt(m.x)} m${by}`
+		);
 	}
 	const e = r.effects;
 	lines.push('', 'Elastic, unfactored loads:');

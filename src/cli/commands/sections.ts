@@ -34,7 +34,9 @@ export const sectionsCommand: CliCommand = {
 			);
 			return s.designation.padEnd(COLUMNS[0][1]) + cells.join('');
 		});
-		process.stdout.write([head.join(''), ...lines, `${sections.length} sections`].join('\n') + '\n');
+		process.stdout.write(
+			[head.join(''), ...lines, `${sections.length} sections`].join('\n') + '\n'
+		);
 		return 0;
 	}
 };

@@ -6,7 +6,14 @@
 import { PDFDocument, StandardFonts } from 'pdf-lib';
 import { drawBeam } from './draw-beam';
 import { PAPER_SIZE, type SheetContext } from './sheet-context';
-import { drawAnswer, drawChecks, drawHeading, drawInputs, drawNotes, drawRecord } from './sheet-blocks';
+import {
+	drawAnswer,
+	drawChecks,
+	drawHeading,
+	drawInputs,
+	drawNotes,
+	drawRecord
+} from './sheet-blocks';
 import { drawDiagrams } from './sheet-diagrams';
 import { drawFooter, footerTop } from './sheet-footer';
 import { SheetPen } from './sheet-pen';

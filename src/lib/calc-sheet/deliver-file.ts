@@ -30,6 +30,10 @@ export async function deliverFile(file: File): Promise<Delivery> {
 
 /** A file name from the check's title and the date, e.g. `calc-sheet-hoist-beam.pdf`. */
 export function sheetFileName(title: string): string {
-	const slug = title.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60);
+	const slug = title
+		.toLowerCase()
+		.replace(/[^a-z0-9]+/g, '-')
+		.replace(/^-|-$/g, '')
+		.slice(0, 60);
 	return `calc-sheet${slug ? `-${slug}` : ''}.pdf`;
 }

@@ -44,7 +44,15 @@ export function drawBeam(pen: SheetPen, r: SheetReport, units: UnitSystem): void
 
 function drawSupport(pen: SheetPen, kind: string, x: number, axis: number): void {
 	if (kind === 'pin') {
-		pen.polyline([[x, axis + 1], [x - 6, axis + 11], [x + 6, axis + 11], [x, axis + 1]], 0.8);
+		pen.polyline(
+			[
+				[x, axis + 1],
+				[x - 6, axis + 11],
+				[x + 6, axis + 11],
+				[x, axis + 1]
+			],
+			0.8
+		);
 	} else if (kind === 'fixed') {
 		pen.line(x, axis - 10, x, axis + 10, 1.6);
 		// Hatching on the wall side.
@@ -57,7 +65,14 @@ function drawSupport(pen: SheetPen, kind: string, x: number, axis: number): void
 function drawLoads(pen: SheetPen, r: SheetReport, sx: (x: number) => number, axis: number): void {
 	const arrow = (x: number, from: number) => {
 		pen.line(x, from, x, axis - 2, 0.7);
-		pen.polyline([[x - 2.5, axis - 6], [x, axis - 2], [x + 2.5, axis - 6]], 0.7);
+		pen.polyline(
+			[
+				[x - 2.5, axis - 6],
+				[x, axis - 2],
+				[x + 2.5, axis - 6]
+			],
+			0.7
+		);
 	};
 	r.case.loads.forEach((l, i) => {
 		const name = `L${i + 1}${l.action === 'temporary' ? '*' : ''}`;

@@ -22,14 +22,29 @@ export interface PlotSpec {
 }
 
 /** Draws the plot in a frame at (left, top) of the given size. */
-export function drawPlot(pen: SheetPen, spec: PlotSpec, left: number, top: number, width: number, height: number): void {
+export function drawPlot(
+	pen: SheetPen,
+	spec: PlotSpec,
+	left: number,
+	top: number,
+	width: number,
+	height: number
+): void {
 	pen.box(left, top, width, height, 0.4);
-	const titleUsed = pen.textAt(spec.title, left + 4, top + 2, { size: 7, bold: true, width: width - 8 });
+	const titleUsed = pen.textAt(spec.title, left + 4, top + 2, {
+		size: 7,
+		bold: true,
+		width: width - 8
+	});
 	const captionRoom = 18 * pen.scale;
 	const inner = { top: top + titleUsed + 6, bottom: top + height - captionRoom - 4 };
 	const x0 = left + 8;
 	const x1 = left + width - 8;
-	const values = [...spec.y.filter((v): v is number => v !== null), ...(spec.limits ?? []).map((l) => l.value), 0];
+	const values = [
+		...spec.y.filter((v): v is number => v !== null),
+		...(spec.limits ?? []).map((l) => l.value),
+		0
+	];
 	const lo = Math.min(...values);
 	const hi = Math.max(...values);
 	const span = hi - lo || 1;
@@ -39,7 +54,8 @@ export function drawPlot(pen: SheetPen, spec: PlotSpec, left: number, top: numbe
 			? inner.top + ((v - lo) / span) * (inner.bottom - inner.top)
 			: inner.bottom - ((v - lo) / span) * (inner.bottom - inner.top);
 	pen.line(sx(0), sy(0), sx(spec.length), sy(0), 0.5);
-	for (const l of spec.limits ?? []) pen.line(sx(l.from), sy(l.value), sx(l.to), sy(l.value), 0.5, true);
+	for (const l of spec.limits ?? [])
+		pen.line(sx(l.from), sy(l.value), sx(l.to), sy(l.value), 0.5, true);
 	let run: [number, number][] = [];
 	spec.x.forEach((x, i) => {
 		const v = spec.y[i];
@@ -50,5 +66,9 @@ export function drawPlot(pen: SheetPen, spec: PlotSpec, left: number, top: numbe
 	});
 	pen.polyline(run, 1);
 	for (const m of spec.marks ?? []) pen.box(sx(m.x) - 2, sy(m.y) - 2, 4, 4, 0.8);
-	pen.textAt(spec.caption, left + 4, top + height - captionRoom - 1, { size: 6.5, width: width - 8, grey: true });
+	pen.textAt(spec.caption, left + 4, top + height - captionRoom - 1, {
+		size: 6.5,
+		width: width - 8,
+		grey: true
+	});
 }

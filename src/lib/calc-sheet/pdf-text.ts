@@ -45,7 +45,9 @@ const POWERS = '⁰¹²³⁴⁵⁶⁷⁸⁹';
 
 function canShow(ch: string): boolean {
 	const code = ch.codePointAt(0) ?? 0;
-	return (code >= 0x20 && code <= 0x7e) || (code >= 0xa0 && code <= 0xff) || WIN_ANSI_EXTRA.includes(ch);
+	return (
+		(code >= 0x20 && code <= 0x7e) || (code >= 0xa0 && code <= 0xff) || WIN_ANSI_EXTRA.includes(ch)
+	);
 }
 
 /**

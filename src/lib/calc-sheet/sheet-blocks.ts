@@ -23,7 +23,12 @@ export function drawAnswer(pen: SheetPen, r: SheetReport, units: UnitSystem): vo
 }
 
 /** Label and value pairs in two columns. */
-export function drawPairs(pen: SheetPen, pairs: [string, string][], columns: 1 | 2, size = 7.5): void {
+export function drawPairs(
+	pen: SheetPen,
+	pairs: [string, string][],
+	columns: 1 | 2,
+	size = 7.5
+): void {
 	const colWidth = (pen.right - pen.left) / columns;
 	const labelWidth = 62 * pen.scale;
 	for (let i = 0; i < pairs.length; i += columns) {

@@ -13,7 +13,11 @@ export const DIAGRAM_HEIGHT = 118;
 
 /** The governing moment diagram as a plot, or null when the report has none to draw. */
 export function momentPlot(r: SheetReport, units: UnitSystem): PlotSpec | null {
-	const length = toDisplay(r.case.beam.spans.reduce((s, L) => s + L, 0), 'length', units);
+	const length = toDisplay(
+		r.case.beam.spans.reduce((s, L) => s + L, 0),
+		'length',
+		units
+	);
 	const m = (v: number) => toDisplay(v, 'moment', units);
 	const at = (v: number) => toDisplay(v, 'length', units);
 	const extremes = (M: number[]) => {
@@ -63,17 +67,24 @@ export function momentPlot(r: SheetReport, units: UnitSystem): PlotSpec | null {
 export function curvePlot(r: SheetReport, units: UnitSystem): PlotSpec | null {
 	const k = r.capacityCurve;
 	if (!k || k.points.length < 2) return null;
-	const length = toDisplay(r.case.beam.spans.reduce((s, L) => s + L, 0), 'length', units);
+	const length = toDisplay(
+		r.case.beam.spans.reduce((s, L) => s + L, 0),
+		'length',
+		units
+	);
 	const least = k.min
 		? `least ${formatQuantity(k.min.p, 'force', units)} at ${formatQuantity(k.min.x, 'length', units)}` +
 			(k.min.governing ? ` (${k.min.governing.label})` : '')
 		: 'nothing limits a single point load';
 	return {
-		title: 'Governing capacity curve: largest single proposed point load along the beam (partial result)',
+		title:
+			'Governing capacity curve: largest single proposed point load along the beam (partial result)',
 		length,
 		x: k.points.map((p) => toDisplay(p.x, 'length', units)),
 		y: k.points.map((p) => (p.p === null ? null : toDisplay(p.p, 'force', units))),
-		marks: k.min ? [{ x: toDisplay(k.min.x, 'length', units), y: toDisplay(k.min.p, 'force', units) }] : [],
+		marks: k.min
+			? [{ x: toDisplay(k.min.x, 'length', units), y: toDisplay(k.min.p, 'force', units) }]
+			: [],
 		caption: `${least}; with the existing loads and no other proposed load.`
 	};
 }
@@ -86,7 +97,10 @@ export function drawDiagrams(pen: SheetPen, r: SheetReport, units: UnitSystem): 
 	const half = (pen.right - pen.left - gap) / 2;
 	const plots: [PlotSpec | null, string][] = [
 		[momentPlot(r, units), routeSentence(r)],
-		[curvePlot(r, units), 'No capacity curve: outside scope, or no proposed load to move along the beam.']
+		[
+			curvePlot(r, units),
+			'No capacity curve: outside scope, or no proposed load to move along the beam.'
+		]
 	];
 	plots.forEach(([plot, instead], i) => {
 		const left = pen.left + i * (half + gap);

@@ -71,7 +71,13 @@ export class SheetPen {
 		const step = size * 1.25;
 		lines.forEach((line, i) => {
 			const baseline = this.y + size + i * step;
-			this.page.drawText(line, { x, y: this.height - baseline, size, font, color: style.grey ? GREY : INK });
+			this.page.drawText(line, {
+				x,
+				y: this.height - baseline,
+				size,
+				font,
+				color: style.grey ? GREY : INK
+			});
 		});
 		const used = lines.length * step;
 		this.y += used;
@@ -105,7 +111,9 @@ export class SheetPen {
 	/** An open polyline through top-down points, drawn as one vector path. */
 	polyline(points: [number, number][], thickness = 0.8, fill = false): void {
 		if (points.length < 2) return;
-		const path = points.map(([x, y], i) => `${i ? 'L' : 'M'}${x.toFixed(2)} ${y.toFixed(2)}`).join(' ');
+		const path = points
+			.map(([x, y], i) => `${i ? 'L' : 'M'}${x.toFixed(2)} ${y.toFixed(2)}`)
+			.join(' ');
 		// drawSvgPath measures y downward from the origin given: the page's top-left corner.
 		this.page.drawSvgPath(fill ? `${path} Z` : path, {
 			x: 0,

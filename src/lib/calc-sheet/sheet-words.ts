@@ -64,7 +64,10 @@ export function recordLines(r: SheetReport, c: SheetContext): [string, string][]
 		['Prepared by', c.preparedBy || '-'],
 		['Check', c.record ? `${c.record.id}, revision ${c.record.revision}` : 'not saved'],
 		['Versions', `app ${c.appVersion}, engine ${r.engineVersion}`],
-		['Units', c.units === 'US' ? 'US customary (ft, kip, kip/ft, kip-ft, in)' : 'SI (m, kN, kN/m, kNm, mm)']
+		[
+			'Units',
+			c.units === 'US' ? 'US customary (ft, kip, kip/ft, kip-ft, in)' : 'SI (m, kN, kN/m, kNm, mm)'
+		]
 	];
 }
 
@@ -94,8 +97,12 @@ export function inputLines(r: SheetReport, units: UnitSystem): [string, string][
 	const beam = r.case.beam;
 	const spans = beam.spans.map((L) => formatQuantity(L, 'length', units)).join(' + ');
 	const supports = beam.supports.map((s) => SUPPORT_WORDS[s] ?? s).join(', ');
-	const joints = beam.joints?.some((j) => j === 'simple') ? `; joints ${beam.joints.join(', ')}` : '';
-	const loss = beam.sectionLoss ? `; loss ${formatQuantity(beam.sectionLoss, 'dimension', units)} per face` : '';
+	const joints = beam.joints?.some((j) => j === 'simple')
+		? `; joints ${beam.joints.join(', ')}`
+		: '';
+	const loss = beam.sectionLoss
+		? `; loss ${formatQuantity(beam.sectionLoss, 'dimension', units)} per face`
+		: '';
 	const grades = [...new Set(r.grades.map((g) => g?.name ?? 'given Mp'))].join(' / ');
 	const factors = Object.entries(r.design.factors)
 		.map(([k, v]) => `${k} ${v}`)
@@ -141,6 +148,8 @@ export function routeSentence(r: SheetReport): string {
 	const why = r.design.route.reasons[0] ? ` ${r.design.route.reasons[0]}` : '';
 	if (r.collapse?.decides) return `Plastic collapse analysis governs bending.${why}`;
 	const resistance =
-		r.design.route.route === 'elastic-first-yield' ? 'first yield' : 'the plastic section resistance';
+		r.design.route.route === 'elastic-first-yield'
+			? 'first yield'
+			: 'the plastic section resistance';
 	return `Elastic analysis with ${resistance} governs; the plastic collapse does not decide.${why}`;
 }

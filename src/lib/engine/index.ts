@@ -21,8 +21,7 @@ export type { ActionCategory, BeamLine, JointKind, Load, SupportKind } from './m
 
 /** Outcome of `checkCase`: input problems, or a report with any warnings about the input. */
 export type CheckOutcome =
-	| { ok: false; issues: InputIssue[] }
-	| { ok: true; report: CheckReport; warnings: InputIssue[] };
+	{ ok: false; issues: InputIssue[] } | { ok: true; report: CheckReport; warnings: InputIssue[] };
 
 /**
  * Validates a case file and, when it is valid, computes its report. Never throws for bad input

@@ -17,6 +17,11 @@ export const appManifest = {
 	icons: [
 		{ src: '/icons/icon-192.png', sizes: '192x192', type: 'image/png', purpose: 'any' },
 		{ src: '/icons/icon-512.png', sizes: '512x512', type: 'image/png', purpose: 'any' },
-		{ src: '/icons/icon-maskable-512.png', sizes: '512x512', type: 'image/png', purpose: 'maskable' }
+		{
+			src: '/icons/icon-maskable-512.png',
+			sizes: '512x512',
+			type: 'image/png',
+			purpose: 'maskable'
+		}
 	]
 };

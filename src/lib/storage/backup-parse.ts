@@ -1,12 +1,7 @@
 import { findHostileShape } from './backup-guard';
 import { readBackupPhotos } from './backup-photos';
 import { isPlainObject } from './case-file';
-import {
-	BACKUP_FORMAT,
-	BACKUP_VERSION,
-	MAX_BACKUP_CHARS,
-	MAX_BACKUP_RECORDS
-} from './constants';
+import { BACKUP_FORMAT, BACKUP_VERSION, MAX_BACKUP_CHARS, MAX_BACKUP_RECORDS } from './constants';
 import { upgradeRecord } from './record-upgrade';
 import type { CheckRecord, PhotoRecord, Revision } from './types';
 import { findRecordProblem } from './validate-record';
@@ -16,8 +11,7 @@ export type BackupRefusal = { ok: false; reason: 'damaged' | 'foreign' | 'newer'
 
 /** A backup read and checked in full, its records brought to the current shape. */
 export type ParsedBackup =
-	| { ok: true; records: CheckRecord[]; photos: PhotoRecord[] }
-	| BackupRefusal;
+	{ ok: true; records: CheckRecord[]; photos: PhotoRecord[] } | BackupRefusal;
 
 /**
  * Reads a backup file's text and checks all of it before anything is written: damaged (not
@@ -28,7 +22,10 @@ export type ParsedBackup =
 export function parseBackup(text: string): ParsedBackup {
 	if (text.length > MAX_BACKUP_CHARS) {
 		const mb = Math.round(MAX_BACKUP_CHARS / 1e6);
-		return refuse('damaged', `This file is larger than any backup (over ${mb} MB). Nothing was imported.`);
+		return refuse(
+			'damaged',
+			`This file is larger than any backup (over ${mb} MB). Nothing was imported.`
+		);
 	}
 	let data: unknown;
 	try {

@@ -66,8 +66,7 @@ export class CheckStore {
 
 /** Outcome of opening the store. */
 export type OpenStoreResult =
-	| { ok: true; store: CheckStore }
-	| { ok: false; reason: 'storage'; message: string };
+	{ ok: true; store: CheckStore } | { ok: false; reason: 'storage'; message: string };
 
 /**
  * Opens (creating or upgrading as needed) the saved-checks database. Data written by a newer app

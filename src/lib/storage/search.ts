@@ -21,7 +21,9 @@ export function collectSearchText(record: CheckRecord): string {
 		typeof place === 'string'
 			? place
 			: typeof place === 'object' && place !== null
-				? Object.values(place).filter((v) => typeof v === 'string').join(' ')
+				? Object.values(place)
+						.filter((v) => typeof v === 'string')
+						.join(' ')
 				: '';
 	return [record.title, placeText, record.notes, readSectionDesignation(record.input)]
 		.filter((part) => typeof part === 'string')
@@ -29,5 +31,8 @@ export function collectSearchText(record: CheckRecord): string {
 }
 
 function normalise(text: string): string {
-	return text.normalize('NFD').replace(/\p{Diacritic}/gu, '').toLowerCase();
+	return text
+		.normalize('NFD')
+		.replace(/\p{Diacritic}/gu, '')
+		.toLowerCase();
 }

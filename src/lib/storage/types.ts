@@ -79,18 +79,11 @@ export interface PhotoRecord {
 
 /** Why a storage call failed. */
 export type StoreFailureReason =
-	| 'invalid'
-	| 'quota'
-	| 'read-only'
-	| 'closed'
-	| 'not-found'
-	| 'newer'
-	| 'storage';
+	'invalid' | 'quota' | 'read-only' | 'closed' | 'not-found' | 'newer' | 'storage';
 
 /** Outcome of a storage call: never an exception for an expected failure. */
 export type StoreResult<T> =
-	| { ok: true; value: T }
-	| { ok: false; reason: StoreFailureReason; message: string };
+	{ ok: true; value: T } | { ok: false; reason: StoreFailureReason; message: string };
 
 /** Optional clock for calls that stamp a date (tests pass a fixed one). */
 export interface ClockOptions {

@@ -37,11 +37,25 @@ export function readLoadChoice(load: CaseLoad, length: number): LoadChoice {
  */
 export function convertLoad(load: CaseLoad, choice: LoadChoice, length: number): CaseLoad {
 	// A size not entered yet stays empty (Math.max would read it as 0).
-	const size = load.kind !== 'linear' ? load.value : isBlank(load.end) ? load.start : isBlank(load.start) ? load.end : Math.max(load.start, load.end);
+	const size =
+		load.kind !== 'linear'
+			? load.value
+			: isBlank(load.end)
+				? load.start
+				: isBlank(load.start)
+					? load.end
+					: Math.max(load.start, load.end);
 	const { action } = load;
 	if (choice === 'point') return { kind: 'point', x: round(length / 2), value: size, action };
 	if (choice === 'whole') return { kind: 'uniform', from: 0, to: length, value: size, action };
-	if (choice === 'part') return { kind: 'uniform', from: round(length / 4), to: round((3 * length) / 4), value: size, action };
+	if (choice === 'part')
+		return {
+			kind: 'uniform',
+			from: round(length / 4),
+			to: round((3 * length) / 4),
+			value: size,
+			action
+		};
 	return { kind: 'linear', from: 0, to: length, start: 0, end: size, action };
 }
 

@@ -25,7 +25,11 @@ export function composeShareTexts(
 		report.answer.message
 	].join('\n');
 	// Place, date and who checked it are not the engine's business: they head the text here.
-	const header = [context.place ? `Place: ${context.place}` : '', context.date ? `Date: ${context.date}` : '', context.by ? `By: ${context.by}` : '']
+	const header = [
+		context.place ? `Place: ${context.place}` : '',
+		context.date ? `Date: ${context.date}` : '',
+		context.by ? `By: ${context.by}` : ''
+	]
 		.filter(Boolean)
 		.join('\n');
 	const join = (body: string) => (header ? `${header}\n${body}` : body);

@@ -48,12 +48,19 @@ function reportOf(c: CaseFile): CheckReport {
 	return out.report;
 }
 
-const FONTS = fileURLToPath(new URL('../../../node_modules/pdfjs-dist/standard_fonts/', import.meta.url));
+const FONTS = fileURLToPath(
+	new URL('../../../node_modules/pdfjs-dist/standard_fonts/', import.meta.url)
+);
 
 /** The page size and its text in content order (drawn top to bottom), one string. */
-async function readPdf(bytes: Uint8Array): Promise<{ text: string; size: number[]; pages: number }> {
-	const pdf = await getDocument({ data: bytes.slice(), isEvalSupported: false, standardFontDataUrl: FONTS })
-		.promise;
+async function readPdf(
+	bytes: Uint8Array
+): Promise<{ text: string; size: number[]; pages: number }> {
+	const pdf = await getDocument({
+		data: bytes.slice(),
+		isEvalSupported: false,
+		standardFontDataUrl: FONTS
+	}).promise;
 	const page = await pdf.getPage(1);
 	const content = await page.getTextContent();
 	const text = content.items
@@ -108,7 +115,10 @@ describe('buildCalcSheet', () => {
 		const bytes = await buildCalcSheet(report, { ...context, units: 'US', paper: 'letter' });
 		const { text, size } = await readPdf(bytes);
 		expect(size).toEqual([612, 792]);
-		const printed = formatQuantity(report.answer.allowable[0].value!, 'force', 'US').replace('\u00a0', ' ');
+		const printed = formatQuantity(report.answer.allowable[0].value!, 'force', 'US').replace(
+			'\u00a0',
+			' '
+		);
 		expect(printed).toMatch(/kip$/);
 		expect(text).toContain(`Largest proposed load: ${printed} (load 2, hoist)`);
 		expect(text).toContain('19.69 ft');
@@ -120,8 +130,11 @@ describe('buildCalcSheet', () => {
 		expect(report.answer.verdict).toBe('outside-scope');
 		const { text } = await readPdf(await buildCalcSheet(report, context));
 		expect(text).toContain('OUTSIDE SCOPE');
-		for (const reason of report.answer.reasons) expect(text).toContain(toPdfText(reason).slice(0, 40));
-		expect(text).not.toMatch(/Largest proposed load|Governing check|\d kNm|Governing capacity curve/);
+		for (const reason of report.answer.reasons)
+			expect(text).toContain(toPdfText(reason).slice(0, 40));
+		expect(text).not.toMatch(
+			/Largest proposed load|Governing check|\d kNm|Governing capacity curve/
+		);
 		// The only forces printed are the loads as entered.
 		const forces = [...text.matchAll(/(\d+(?:\.\d+)?) kN(?![\w/])/g)].map((m) => Number(m[1]));
 		expect(forces).toEqual([20]);

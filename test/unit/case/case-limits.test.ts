@@ -164,7 +164,12 @@ describe('limits of the case file', () => {
 	});
 
 	it('span range 0.1 m to 100 m; the message names the unit and the range', () => {
-		for (const [span, ok] of [[0.1, true], [100, true], [0.09, false], [100.5, false]] as const) {
+		for (const [span, ok] of [
+			[0.1, true],
+			[100, true],
+			[0.09, false],
+			[100.5, false]
+		] as const) {
 			const c = base();
 			c.beam.spans = [span];
 			c.loads = [];

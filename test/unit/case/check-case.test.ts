@@ -182,7 +182,11 @@ describe('checkCase: the answer for zero, upward and mixed proposed loads', () =
 	it('with no deciding check limiting an upward load, it is said to relieve the beam', () => {
 		// A point load at a support goes straight into it: no bending check is affected.
 		const r = run(simpleCase({ mp: 100, loads: [udl(5, 'permanent'), point(0, -10)] }));
-		expect(r.answer.allowable[0]).toMatchObject({ value: null, effect: 'relieves', direction: 'up' });
+		expect(r.answer.allowable[0]).toMatchObject({
+			value: null,
+			effect: 'relieves',
+			direction: 'up'
+		});
 		expect(r.answer.message).toMatch(/relieves the beam/);
 	});
 
@@ -194,7 +198,9 @@ describe('checkCase: the answer for zero, upward and mixed proposed loads', () =
 		expect(r.answer.allowable.map((l) => l.unit)).toEqual(['kN', 'kN/m']);
 		expectRel(r.answer.allowable[0].value!, 10 * t);
 		expectRel(r.answer.allowable[1].value!, 2 * t);
-		expect(r.answer.message).toMatch(/Largest proposed loads, together: .* kN \(load 1\); .* kN\/m \(load 2\)/);
+		expect(r.answer.message).toMatch(
+			/Largest proposed loads, together: .* kN \(load 1\); .* kN\/m \(load 2\)/
+		);
 	});
 });
 

@@ -181,9 +181,17 @@ describe('parseCase: every problem names its field', () => {
 		['load beyond any plausible size', (c: any) => (c.loads[0].value = 1.5e62), 'loads[0].value'],
 		['span beyond any plausible size', (c: any) => (c.beam.spans = [1e9]), 'beam.spans[0]'],
 		// Regression: 3.5e-323 kN passed and made "allowed ÷ entered" Infinity (found by fuzzing).
-		['load too small to mean anything', (c: any) => (c.loads[0].value = 3.5e-323), 'loads[0].value'],
+		[
+			'load too small to mean anything',
+			(c: any) => (c.loads[0].value = 3.5e-323),
+			'loads[0].value'
+		],
 		['span too short to mean anything', (c: any) => (c.beam.spans = [1e-6]), 'beam.spans[0]'],
-		['factor too small to mean anything', (c: any) => (c.factors = { imposed: 1e-9 }), 'factors.imposed'],
+		[
+			'factor too small to mean anything',
+			(c: any) => (c.factors = { imposed: 1e-9 }),
+			'factors.imposed'
+		],
 		['missing action', (c: any) => delete c.loads[0].action, 'loads[0].action'],
 		['unknown load kind', (c: any) => (c.loads[2].kind = 'moment'), 'loads[2].kind'],
 		['fy of zero', (c: any) => (c.beam.grade = { fy: 0 }), 'beam.grade.fy'],

@@ -53,7 +53,11 @@ describe('findMultiplierAtCapacity', () => {
 	});
 
 	it('handles a non-linear utilisation: √(0.25 + t²) = 1 at t = √0.75', () => {
-		expectRel(findMultiplierAtCapacity({ utilisation: (t) => Math.sqrt(0.25 + t * t) })!, Math.sqrt(0.75), 1e-6);
+		expectRel(
+			findMultiplierAtCapacity({ utilisation: (t) => Math.sqrt(0.25 + t * t) })!,
+			Math.sqrt(0.75),
+			1e-6
+		);
 	});
 
 	it('refuses NaN (a broken invariant)', () => {
@@ -64,17 +68,33 @@ describe('findMultiplierAtCapacity', () => {
 describe('computeSegmentMoment (statics)', () => {
 	const L = 6000;
 	it('UDL: wx(L − x)/2', () => {
-		const seg = { length: L, momentStart: 0, momentEnd: 0, loads: [{ kind: 'line' as const, from: 0, to: L, start: 4, end: 4 }] };
-		for (const x of [0, 1000, 3000, 4500]) expectRel(computeSegmentMoment(seg, x), (4 * x * (L - x)) / 2, 1e-12);
+		const seg = {
+			length: L,
+			momentStart: 0,
+			momentEnd: 0,
+			loads: [{ kind: 'line' as const, from: 0, to: L, start: 4, end: 4 }]
+		};
+		for (const x of [0, 1000, 3000, 4500])
+			expectRel(computeSegmentMoment(seg, x), (4 * x * (L - x)) / 2, 1e-12);
 	});
 
 	it('point load P at a: Pab/L under the load', () => {
-		const seg = { length: L, momentStart: 0, momentEnd: 0, loads: [{ kind: 'point' as const, x: 2000, value: 10e3 }] };
+		const seg = {
+			length: L,
+			momentStart: 0,
+			momentEnd: 0,
+			loads: [{ kind: 'point' as const, x: 2000, value: 10e3 }]
+		};
 		expectRel(computeSegmentMoment(seg, 2000), (10e3 * 2000 * 4000) / L, 1e-12);
 	});
 
 	it('triangular load 0 → w: largest moment wL²/(9√3) at L/√3', () => {
-		const seg = { length: L, momentStart: 0, momentEnd: 0, loads: [{ kind: 'line' as const, from: 0, to: L, start: 0, end: 6 }] };
+		const seg = {
+			length: L,
+			momentStart: 0,
+			momentEnd: 0,
+			loads: [{ kind: 'line' as const, from: 0, to: L, start: 0, end: 6 }]
+		};
 		expectRel(computeSegmentMoment(seg, L / Math.sqrt(3)), (6 * L * L) / (9 * Math.sqrt(3)), 1e-10);
 	});
 

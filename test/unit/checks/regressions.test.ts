@@ -18,6 +18,7 @@ describe('shear-reduced plastic check', () => {
 	it('keeps the reduced hinge capacity positive (shipped: capacity-not-positive thrown)', () => {
 		const out = checkCase(load('regression-shear-zeroes-capacity'));
 		expect(out.ok && out.report.design.route.route).toBe('plastic');
-		if (out.ok) for (const r of out.report.checks) expect(Number.isFinite(r.utilisation)).toBe(true);
+		if (out.ok)
+			for (const r of out.report.checks) expect(Number.isFinite(r.utilisation)).toBe(true);
 	});
 });

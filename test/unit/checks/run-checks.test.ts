@@ -19,7 +19,12 @@ function member(designation: string, grade: string) {
 	return { section: s.value, grade: g.value };
 }
 
-function simpleBeam(designation: string, grade: string, loads: Load[], extra: Partial<DesignCheckInput> = {}): DesignCheckInput {
+function simpleBeam(
+	designation: string,
+	grade: string,
+	loads: Load[],
+	extra: Partial<DesignCheckInput> = {}
+): DesignCheckInput {
 	const m = member(designation, grade);
 	return {
 		beam: { spans: [6000], supports: ['pin', 'pin'], joints: [] },
@@ -41,7 +46,8 @@ const q10: Load = { kind: 'point', x: 3000, value: 10e3, action: 'temporary' };
  * λ on the central point load of the 6 m simply supported beam above when the midspan moment
  * reaches M: 1.5·Q·λ·L/4 + 1.35·g·L²/8 = M (statics of a simply supported beam; EN 1990 6.10 factors).
  */
-const lambdaAtMidspanMoment = (M: number) => ((4 * M) / 6000 - (1.35 * 4 * 6000) / 2) / (1.5 * 10e3);
+const lambdaAtMidspanMoment = (M: number) =>
+	((4 * M) / 6000 - (1.35 * 4 * 6000) / 2) / (1.5 * 10e3);
 
 describe('routes by section class', () => {
 	it('Class 1 restrained: plastic collapse, λ = (4Mp/L − 1.35·g·L/2)/(1.5·Q)', () => {
@@ -78,7 +84,9 @@ describe('routes by section class', () => {
 
 describe('restraint', () => {
 	it('a midspan hinge with the flange restrained only at the supports: elastic route, LTB governs', () => {
-		const out = runDesignChecks(simpleBeam('UB 305x165x40', 'S275', [g4, q10], { restraint: { kind: 'ends-only' } }));
+		const out = runDesignChecks(
+			simpleBeam('UB 305x165x40', 'S275', [g4, q10], { restraint: { kind: 'ends-only' } })
+		);
 		expect(out.verdict.route).toBe('elastic-plastic-section');
 		expect(out.verdict.routeReasons[0]).toMatch(/6\.3\.5/);
 		expect(out.verdict.governing?.id).toBe('ltb');
@@ -86,7 +94,9 @@ describe('restraint', () => {
 
 	it('a restraint at the hinge with short enough segments keeps the plastic route', () => {
 		const at = Array.from({ length: 11 }, (_, i) => 500 + i * 500);
-		const out = runDesignChecks(simpleBeam('UB 305x165x40', 'S275', [g4, q10], { restraint: { kind: 'points', at } }));
+		const out = runDesignChecks(
+			simpleBeam('UB 305x165x40', 'S275', [g4, q10], { restraint: { kind: 'points', at } })
+		);
 		expect(out.verdict.route).toBe('plastic');
 	});
 
@@ -163,7 +173,9 @@ describe('regressions', () => {
 	});
 
 	it('shear above Vpl,Rd at a hinge caps ρ at 1 instead of throwing (short propped cantilever)', () => {
-		const input = simpleBeam('UB 305x165x40', 'S275', [{ kind: 'point', x: 400, value: 100e3, action: 'temporary' }]);
+		const input = simpleBeam('UB 305x165x40', 'S275', [
+			{ kind: 'point', x: 400, value: 100e3, action: 'temporary' }
+		]);
 		input.beam = { spans: [2000], supports: ['fixed', 'pin'], joints: [] };
 		const out = runDesignChecks(input);
 		expect(out.verdict.verdict).toBe('pass');

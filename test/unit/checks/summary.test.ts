@@ -31,7 +31,16 @@ const demo: SummaryInput = {
 	governing: { label: 'Bending', utilisation: 0.27 },
 	reserve: 554,
 	allowable: ['65.4 kN (load 2, hoist)'],
-	checks: [{ label: 'Shear', clause: 'EN 1993-1-1 6.2.6', utilisation: 0.07, pass: true, level: 'governing', details: ['VEd 23.7 kN'] }],
+	checks: [
+		{
+			label: 'Shear',
+			clause: 'EN 1993-1-1 6.2.6',
+			utilisation: 0.07,
+			pass: true,
+			level: 'governing',
+			details: ['VEd 23.7 kN']
+		}
+	],
 	notice: 'Screening aid only. The engineer of record decides.',
 	notices: [],
 	assumptions: ['Ductile steel.']
@@ -112,11 +121,16 @@ describe('summary units', () => {
 		expect(si.summary.long).toContain('hoist temporary 10 kN at 3 m');
 		expect(us.summary.long).toContain(`hoist temporary 2.25 kip at ${sig3(3 / FT_M)} ft`);
 		expect(us.summary.long).toContain('Beam: 19.7 ft (pin-pin)');
-		expect(us.summary.long).toContain(`permanent ${sig3(4 / (KIP_KN / FT_M))} kip/ft from 0 to 19.7 ft`);
+		expect(us.summary.long).toContain(
+			`permanent ${sig3(4 / (KIP_KN / FT_M))} kip/ft from 0 to 19.7 ft`
+		);
 		expect(us.summary.long).toContain('Units: US customary');
 		// Route reasons, notices and assumptions quote the checks' own SI words; the rest is US.
 		const long = us.summary.long;
-		const own = long.slice(0, long.indexOf('Notices:')).split('\n').filter((l) => !l.startsWith('Route:'));
+		const own = long
+			.slice(0, long.indexOf('Notices:'))
+			.split('\n')
+			.filter((l) => !l.startsWith('Route:'));
 		expect(own.length).toBeGreaterThan(10);
 		expect(own.join('\n')).not.toMatch(/\d (kN|kNm|kN\/m|m|mm)\b/);
 	});
@@ -124,21 +138,31 @@ describe('summary units', () => {
 	it('gives the same largest proposed load, converted from the SI answer', () => {
 		const allowed = si.answer.allowable[0].value;
 		expect(allowed).not.toBeNull();
-		expect(si.summary.short).toContain(`Largest proposed load: ${sig3(allowed!)} kN (load 2, hoist)`);
-		expect(us.summary.short).toContain(`Largest proposed load: ${sig3(allowed! / KIP_KN)} kip (load 2, hoist)`);
+		expect(si.summary.short).toContain(
+			`Largest proposed load: ${sig3(allowed!)} kN (load 2, hoist)`
+		);
+		expect(us.summary.short).toContain(
+			`Largest proposed load: ${sig3(allowed! / KIP_KN)} kip (load 2, hoist)`
+		);
 	});
 
 	it('writes moments in kip·ft and the restraint position in ft', () => {
 		const bending = si.checks.find((c) => typeof c.mEd === 'number');
 		expect(bending).toBeDefined();
-		expect(us.summary.long).toContain(`MEd ${sig3((bending!.mEd as number) / (KIP_KN * FT_M))} kip·ft`);
+		expect(us.summary.long).toContain(
+			`MEd ${sig3((bending!.mEd as number) / (KIP_KN * FT_M))} kip·ft`
+		);
 		expect(si.summary.long).toContain('held laterally at the supports and at 3 m');
-		expect(us.summary.long).toContain(`at the supports and at ${Number((3 / FT_M).toPrecision(4))} ft`);
+		expect(us.summary.long).toContain(
+			`at the supports and at ${Number((3 / FT_M).toPrecision(4))} ft`
+		);
 		expect(us.summary.short).toContain('Restraint: compression flange held laterally');
 	});
 
 	it('states the basis and factor set in a sentence', () => {
-		expect(si.summary.short).toMatch(/Checked to .+, with the factor set EN 1990 expression 6\.10\./);
+		expect(si.summary.short).toMatch(
+			/Checked to .+, with the factor set EN 1990 expression 6\.10\./
+		);
 		expect(us.summary.long).toContain(`Checked to ${si.design.basis}`);
 	});
 

@@ -31,7 +31,11 @@ describe('decideRoute', () => {
 	});
 
 	it('Class 1 with a hinge in an unrestrained segment falls back to the elastic route and says why', () => {
-		const r = decideRoute({ ...ok, hingesRestrained: false, hingeRestraintNote: 'no restraint near the hinge' });
+		const r = decideRoute({
+			...ok,
+			hingesRestrained: false,
+			hingeRestraintNote: 'no restraint near the hinge'
+		});
 		expect(r.route).toBe('elastic-plastic-section');
 		expect(r.reasons[0]).toContain('no restraint near the hinge');
 	});
@@ -40,7 +44,9 @@ describe('decideRoute', () => {
 		expect(decideRoute({ ...ok, sectionClass: 4 }).reasons[0]).toMatch(/Class 4/);
 		expect(decideRoute({ ...ok, ductile: false }).reasons[0]).toMatch(/not ductile/);
 		expect(decideRoute({ ...ok, gradeConfirmed: false }).reasons[0]).toMatch(/not been confirmed/);
-		expect(decideRoute({ ...ok, needsShearBucklingCheck: true }).reasons[0]).toMatch(/shear buckling/);
+		expect(decideRoute({ ...ok, needsShearBucklingCheck: true }).reasons[0]).toMatch(
+			/shear buckling/
+		);
 		expect(decideRoute({ ...ok, collapseCertified: false }).route).toBe('outside-scope');
 	});
 
@@ -76,7 +82,11 @@ describe('decideVerdict', () => {
 	});
 
 	it('fails when one governing check fails', () => {
-		const v = decideVerdict({ scope, checks: [row({ utilisation: 1.01, pass: false, multiplierAtCapacity: 0.9 })], loadFactor: 2 });
+		const v = decideVerdict({
+			scope,
+			checks: [row({ utilisation: 1.01, pass: false, multiplierAtCapacity: 0.9 })],
+			loadFactor: 2
+		});
 		expect(v.verdict).toBe('fail');
 		expect(v.reserve).toBeCloseTo(-10, 12);
 	});
@@ -84,7 +94,17 @@ describe('decideVerdict', () => {
 	it('does not fail on a warning-level check, but warns', () => {
 		const v = decideVerdict({
 			scope,
-			checks: [row({}), row({ id: 'deflection-temporary', label: 'Deflection', level: 'warning', utilisation: 1.3, pass: false, multiplierAtCapacity: 0.77 })],
+			checks: [
+				row({}),
+				row({
+					id: 'deflection-temporary',
+					label: 'Deflection',
+					level: 'warning',
+					utilisation: 1.3,
+					pass: false,
+					multiplierAtCapacity: 0.77
+				})
+			],
 			loadFactor: 2
 		});
 		expect(v.verdict).toBe('pass');
@@ -95,19 +115,37 @@ describe('decideVerdict', () => {
 	it('warns when the existing loads alone use more than 80 % (common practice)', () => {
 		const v = decideVerdict({ scope, checks: [row({ utilisationExisting: 0.85 })], loadFactor: 2 });
 		expect(v.warnings[0]).toMatch(/85 %/);
-		expect(decideVerdict({ scope, checks: [row({ utilisationExisting: 0.8 })], loadFactor: 2 }).warnings).toEqual([]);
+		expect(
+			decideVerdict({ scope, checks: [row({ utilisationExisting: 0.8 })], loadFactor: 2 }).warnings
+		).toEqual([]);
 	});
 
 	it('gives no verdict numbers outside scope', () => {
-		const v = decideVerdict({ scope: decideRoute({ ...ok, sectionClass: 4 }), checks: [], loadFactor: null });
-		expect(v).toMatchObject({ verdict: 'outside-scope', governing: null, reserve: null, allowableMultiplier: null });
+		const v = decideVerdict({
+			scope: decideRoute({ ...ok, sectionClass: 4 }),
+			checks: [],
+			loadFactor: null
+		});
+		expect(v).toMatchObject({
+			verdict: 'outside-scope',
+			governing: null,
+			reserve: null,
+			allowableMultiplier: null
+		});
 	});
 });
 
 describe('checkDeflection (span/limit, common practice)', () => {
 	it('compares with span/200 and a cantilever as a span of twice its length', () => {
-		expect(checkDeflection({ deflection: 15, span: 6000, cantilever: false, limit: 200 }).utilisation).toBeCloseTo(0.5, 12);
-		expect(checkDeflection({ deflection: 10, span: 2000, cantilever: true, limit: 200 }).utilisation).toBeCloseTo(0.5, 12);
-		expect(checkDeflection({ deflection: 0, span: 6000, cantilever: false, limit: 200 }).spanOverDeflection).toBeNull();
+		expect(
+			checkDeflection({ deflection: 15, span: 6000, cantilever: false, limit: 200 }).utilisation
+		).toBeCloseTo(0.5, 12);
+		expect(
+			checkDeflection({ deflection: 10, span: 2000, cantilever: true, limit: 200 }).utilisation
+		).toBeCloseTo(0.5, 12);
+		expect(
+			checkDeflection({ deflection: 0, span: 6000, cantilever: false, limit: 200 })
+				.spanOverDeflection
+		).toBeNull();
 	});
 });

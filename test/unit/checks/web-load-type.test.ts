@@ -128,11 +128,10 @@ describe('web rows name their type from the geometry', () => {
 	});
 
 	it('a load over an end support is one row, the lower of (b) and (c)', () => {
-		const rows = run(
-			{ spans: [4000], supports: ['pin', 'pin'], joints: [] },
-			[q(0), q(2000)],
-			{ supports: 100, loads: 40 }
-		);
+		const rows = run({ spans: [4000], supports: ['pin', 'pin'], joints: [] }, [q(0), q(2000)], {
+			supports: 100,
+			loads: 40
+		});
 		// ss = the shorter bearing, 40 mm; kF(c) = 2 + 6·40/428 = 2.56 < 3.5, so (c) governs.
 		expect(rows[0].label).toBe('Web at support 1 (type c, end support)');
 		expect(rows[0].values.ss).toBe(40);
@@ -140,11 +139,10 @@ describe('web rows name their type from the geometry', () => {
 	});
 
 	it('a built-in end has no bearing row; a load near it counts the end as unstiffened', () => {
-		const rows = run(
-			{ spans: [4000], supports: ['fixed', 'pin'], joints: [] },
-			[q(200)],
-			{ supports: 100, loads: 40 }
-		);
+		const rows = run({ spans: [4000], supports: ['fixed', 'pin'], joints: [] }, [q(200)], {
+			supports: 100,
+			loads: 40
+		});
 		expect(rows.map((r) => r.label)).toEqual([
 			'Web at support 2 (type c, end support)',
 			'Web under point load 1 (type c, near the built-in end)'

@@ -31,7 +31,14 @@ describe('check command', () => {
 		expect(report.answer.multiplier).toBe(report.collapse.loadFactor);
 		expect(report.answer.allowable[0]).toMatchObject({ load: 0, unit: 'kN' });
 		expect(report).toMatchObject({ format: 'hingepoint.report', version: 2 });
-		for (const gone of ['mpRd', 'temporaryCapacity', 'allowable', 'reserve', 'verdict', 'governing']) {
+		for (const gone of [
+			'mpRd',
+			'temporaryCapacity',
+			'allowable',
+			'reserve',
+			'verdict',
+			'governing'
+		]) {
 			expect(report).not.toHaveProperty(gone);
 		}
 		const keys = ['answer', 'checks', 'design', 'collapse', 'effects', 'sections', 'grades'];

@@ -97,16 +97,14 @@ export function arbitraryBeamSpec(options: BeamArbitraryOptions = {}): fc.Arbitr
 						: fc.constant<LoadSpec[]>([]),
 					variable: fc.array(arbitraryLoad(L, upward), { minLength: 1, maxLength: 4 })
 				})
-				.map(
-					(loads): ProblemSpec => ({
-						spans: b.spans,
-						supports: [b.ends[0], ...b.inner, b.ends[1]],
-						joints: b.joints,
-						Mp,
-						fixed: loads.fixed,
-						variable: loads.variable
-					})
-				);
+				.map((loads): ProblemSpec => ({
+					spans: b.spans,
+					supports: [b.ends[0], ...b.inner, b.ends[1]],
+					joints: b.joints,
+					Mp,
+					fixed: loads.fixed,
+					variable: loads.variable
+				}));
 		});
 }
 

@@ -44,19 +44,21 @@ export const loadsOn = (total: number): fc.Arbitrary<Load[]> => {
 		.tuple(pos, pos)
 		.filter(([a, b]) => a !== b)
 		.map(([a, b]) => [Math.min(a, b), Math.max(a, b)]);
-	const uniform = fc.record({ r: range, v: value }).map(
-		({ r, v }): Load => ({ kind: 'uniform', from: r[0], to: r[1], value: v, action: 'imposed' })
-	);
-	const linear = fc.record({ r: range, s: value, e: value }).map(
-		({ r, s, e }): Load => ({
-			kind: 'linear',
-			from: r[0],
-			to: r[1],
-			start: s,
-			end: e,
-			action: 'permanent'
-		})
-	);
+	const uniform = fc.record({ r: range, v: value }).map(({ r, v }): Load => ({
+		kind: 'uniform',
+		from: r[0],
+		to: r[1],
+		value: v,
+		action: 'imposed'
+	}));
+	const linear = fc.record({ r: range, s: value, e: value }).map(({ r, s, e }): Load => ({
+		kind: 'linear',
+		from: r[0],
+		to: r[1],
+		start: s,
+		end: e,
+		action: 'permanent'
+	}));
 	return fc.array(fc.oneof(pointLoad, uniform, linear), { minLength: 1, maxLength: 4 });
 };
 

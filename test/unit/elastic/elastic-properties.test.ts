@@ -67,7 +67,11 @@ describe('elastic analysis invariants', () => {
 					joints: [...c.beam.joints].reverse()
 				};
 				const r = solve(c.beam, c.EI, c.loads);
-				const m = solve(mirrored, [...c.EI].reverse(), c.loads.map((l) => mirrorLoad(l, Lt)));
+				const m = solve(
+					mirrored,
+					[...c.EI].reverse(),
+					c.loads.map((l) => mirrorLoad(l, Lt))
+				);
 				const x = t * Lt;
 				const fScale = sumLoads(c.loads.map(absLoad)).force + 1;
 				expect(closeTo(m.at(Lt - x, 'left').M, r.at(x, 'right').M, fScale * Lt)).toBe(true);

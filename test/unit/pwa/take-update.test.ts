@@ -1,5 +1,10 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { SKIP_WAITING, takeWaitingWorker, type ContainerLike, type WorkerLike } from '../../../src/lib/pwa/take-update';
+import {
+	SKIP_WAITING,
+	takeWaitingWorker,
+	type ContainerLike,
+	type WorkerLike
+} from '../../../src/lib/pwa/take-update';
 
 /** A service worker whose state the test moves by hand, as the browser would. */
 class FakeWorker extends EventTarget implements WorkerLike {

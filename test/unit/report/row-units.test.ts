@@ -9,14 +9,32 @@ import { describe, expect, it } from 'vitest';
 import { checkCase } from '../../../src/lib/engine/index';
 import { findRowKeyUnit } from '../../../src/lib/engine/report/check-rows';
 
-const FIXED = new Set(['id', 'label', 'clause', 'level', 'utilisation', 'pass', 'utilisationExisting', 'multiplier', 'x', 'arrangement', 'note']);
+const FIXED = new Set([
+	'id',
+	'label',
+	'clause',
+	'level',
+	'utilisation',
+	'pass',
+	'utilisationExisting',
+	'multiplier',
+	'x',
+	'arrangement',
+	'note'
+]);
 
 function report(spans: number[], supports: string[], lateral: string) {
 	const total = spans.reduce((a, b) => a + b, 0);
 	const out = checkCase({
 		format: 'hingepoint.case',
 		version: 1,
-		beam: { spans, supports, section: { designation: 'UB 305x165x40' }, grade: 'S275', restraint: { lateral } },
+		beam: {
+			spans,
+			supports,
+			section: { designation: 'UB 305x165x40' },
+			grade: 'S275',
+			restraint: { lateral }
+		},
 		loads: [
 			{ kind: 'uniform', from: 0, to: total, value: 5, action: 'permanent' },
 			{ kind: 'point', x: 1, value: 60, action: 'temporary' },
@@ -47,7 +65,8 @@ describe('check rows in declared units', () => {
 			}
 		}
 		// The beams raise every kind of row, so the table is tested against all of them.
-		for (const id of ['bending', 'shear', 'interaction', 'ltb', 'web', 'deflection-total']) expect(ids).toContain(id);
+		for (const id of ['bending', 'shear', 'interaction', 'ltb', 'web', 'deflection-total'])
+			expect(ids).toContain(id);
 	});
 
 	it('shear resistance is in kN: Vpl,Rd = Av·fy/(√3·γM0) (EN 1993-1-1 6.2.6)', () => {
@@ -56,6 +75,8 @@ describe('check rows in declared units', () => {
 		const A = r.sections[0].props!.A;
 		const Av = Math.max(A - 2 * d.b * d.tf + (d.tw + 2 * d.r) * d.tf, d.h * d.tw - 2 * d.tf * d.tw);
 		const shear = r.checks.find((c) => c.id === 'shear')!;
-		expect(Math.abs((shear.vRd as number) / ((Av * 275) / Math.sqrt(3) / 1000) - 1)).toBeLessThan(1e-9);
+		expect(Math.abs((shear.vRd as number) / ((Av * 275) / Math.sqrt(3) / 1000) - 1)).toBeLessThan(
+			1e-9
+		);
 	});
 });

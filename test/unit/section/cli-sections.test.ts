@@ -6,7 +6,10 @@ import { describe, expect, it } from 'vitest';
 import { spawnSync } from 'node:child_process';
 
 function runCli(...args: string[]) {
-	const r = spawnSync('npx', ['tsx', 'src/cli/main.ts', ...args], { encoding: 'utf8', timeout: 60_000 });
+	const r = spawnSync('npx', ['tsx', 'src/cli/main.ts', ...args], {
+		encoding: 'utf8',
+		timeout: 60_000
+	});
 	return { code: r.status, stdout: r.stdout, stderr: r.stderr };
 }
 
@@ -20,7 +23,11 @@ interface SectionJson {
 }
 
 const PROP_KEYS = ['A', 'mass', 'Iy', 'Iz', 'Wely', 'Wply', 'Welz', 'Wplz', 'It', 'Iw', 'Avz'];
-const DIM_KEYS: Record<string, string[]> = { I: ['h', 'b', 'tw', 'tf', 'r'], RHS: ['h', 'b', 't', 'ro', 'ri'], CHS: ['d', 't'] };
+const DIM_KEYS: Record<string, string[]> = {
+	I: ['h', 'b', 'tw', 'tf', 'r'],
+	RHS: ['h', 'b', 't', 'ro', 'ri'],
+	CHS: ['d', 't']
+};
 
 describe('hingepoint sections --json', () => {
 	it('prints every library section with designation, family, standard, shape, dims and props', () => {
@@ -29,7 +36,17 @@ describe('hingepoint sections --json', () => {
 		const list = JSON.parse(stdout) as SectionJson[];
 		expect(list.length).toBeGreaterThan(300);
 		const families = new Set(list.map((s) => s.family));
-		expect([...families].sort()).toEqual(['CHS', 'HEA', 'HEB', 'IPE', 'RHS', 'SHS', 'UB', 'UC', 'W']);
+		expect([...families].sort()).toEqual([
+			'CHS',
+			'HEA',
+			'HEB',
+			'IPE',
+			'RHS',
+			'SHS',
+			'UB',
+			'UC',
+			'W'
+		]);
 		for (const s of list) {
 			expect(typeof s.designation).toBe('string');
 			expect(typeof s.standard).toBe('string');

@@ -30,7 +30,8 @@ describe('identifySection', () => {
 		expect(got).toHaveLength(4);
 		expect(got[0].section.designation).toBe('IPE 300');
 		for (const c of got) expect(c.section.family).toBe('IPE');
-		for (let i = 1; i < got.length; i++) expect(got[i].score).toBeGreaterThanOrEqual(got[i - 1].score);
+		for (let i = 1; i < got.length; i++)
+			expect(got[i].score).toBeGreaterThanOrEqual(got[i - 1].score);
 	});
 
 	it('returns nothing when nothing was measured', () => {

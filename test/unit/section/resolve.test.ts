@@ -32,7 +32,11 @@ describe('resolveSection forms', () => {
 		const r = resolveSection({ designation: 'UB 305x165x41' });
 		expect(r.ok).toBe(false);
 		if (r.ok) return;
-		expect(r.issues[0]).toMatchObject({ path: 'designation', code: 'section-unknown', severity: 'error' });
+		expect(r.issues[0]).toMatchObject({
+			path: 'designation',
+			code: 'section-unknown',
+			severity: 'error'
+		});
 		expect(r.issues[0].message).toMatch(/UB 305x165x40/);
 	});
 

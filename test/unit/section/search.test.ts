@@ -29,7 +29,8 @@ describe('findSection', () => {
 	});
 
 	it('finds every library section by its own canonical designation', () => {
-		for (const s of listSections()) expect(findSection(s.designation)?.designation).toBe(s.designation);
+		for (const s of listSections())
+			expect(findSection(s.designation)?.designation).toBe(s.designation);
 	});
 
 	it.each(['UB 305x165x41', 'UC 305x165x40', 'XYZ 305x165x40', '', 'IPE', 'HEB 310'])(

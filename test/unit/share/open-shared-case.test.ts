@@ -25,7 +25,11 @@ function answer(json: string): { code: string; message: string } {
 }
 
 // A valid link in short keys: one span, pins both ends, a library section, one point load.
-const VALID = { v: 1, B: { s: [4], u: ['p', 'p'], n: { e: 'UB 254x146x31' }, g: 'S275' }, l: [{ k: 'p', x: 2, a: 10, c: 't' }] };
+const VALID = {
+	v: 1,
+	B: { s: [4], u: ['p', 'p'], n: { e: 'UB 254x146x31' }, g: 'S275' },
+	l: [{ k: 'p', x: 2, a: 10, c: 't' }]
+};
 const withBeam = (beam: object) => JSON.stringify({ ...VALID, B: { ...VALID.B, ...beam } });
 
 describe('opening a shared link', () => {
@@ -55,7 +59,10 @@ describe('opening a shared link', () => {
 		expect(answer('null').code).toBe('link-damaged');
 		expect(answer(JSON.stringify({ v: 1, B: null, l: null })).code).toBe('link-damaged');
 		const cases: [string, RegExp][] = [
-			[JSON.stringify({ v: 1, B: { s: null, u: null, n: null }, l: [null] }), /beam\.spans: missing/],
+			[
+				JSON.stringify({ v: 1, B: { s: null, u: null, n: null }, l: [null] }),
+				/beam\.spans: missing/
+			],
 			[withBeam({ s: ['4'] }), /beam\.spans\[0\]: not a number/],
 			[withBeam({ u: [null, 'p'] }), /beam\.supports\[0\]: not text/],
 			[withBeam({ n: null }), /beam\.section: missing/],
@@ -66,9 +73,18 @@ describe('opening a shared link', () => {
 			[withBeam({ G: [{}, 100] }), /beam\.bearing\[0\]: not a number/],
 			[withBeam({ j: [null] }), /beam\.joints\[0\]: not text/],
 			[JSON.stringify({ ...VALID, l: [null] }), /loads\[0\]: not a load/],
-			[JSON.stringify({ ...VALID, l: [{ k: null }] }), /loads\[0\]\.kind: not point, uniform or linear/],
-			[JSON.stringify({ ...VALID, l: [{ k: 'p', x: [], a: 1, c: 't' }] }), /loads\[0\]\.x: not a number/],
-			[JSON.stringify({ ...VALID, l: [{ k: 'u', F: 0, T: 4, a: 1, c: null }] }), /loads\[0\]\.action: not text/],
+			[
+				JSON.stringify({ ...VALID, l: [{ k: null }] }),
+				/loads\[0\]\.kind: not point, uniform or linear/
+			],
+			[
+				JSON.stringify({ ...VALID, l: [{ k: 'p', x: [], a: 1, c: 't' }] }),
+				/loads\[0\]\.x: not a number/
+			],
+			[
+				JSON.stringify({ ...VALID, l: [{ k: 'u', F: 0, T: 4, a: 1, c: null }] }),
+				/loads\[0\]\.action: not text/
+			],
 			[JSON.stringify({ ...VALID, f: null }), /factors: not an object/],
 			[JSON.stringify({ ...VALID, i: null }), /title: not text/]
 		];
@@ -81,12 +97,15 @@ describe('opening a shared link', () => {
 
 	it('opens numbers not entered yet (null), which the form shows empty and the engine names', () => {
 		expect(answer(withBeam({ s: [null], G: [null, null] })).code).toBe('ok');
-		expect(answer(JSON.stringify({ ...VALID, l: [{ k: 'p', x: null, a: null, c: 't' }] })).code).toBe('ok');
+		expect(
+			answer(JSON.stringify({ ...VALID, l: [{ k: 'p', x: null, a: null, c: 't' }] })).code
+		).toBe('ok');
 	});
 
 	it('refuses a field named __proto__ anywhere, even one that would fill in what is missing', () => {
 		// JSON.parse makes `__proto__` an own field; a copy made key by key would make it the prototype.
-		const onTop = '{"v":1,"__proto__":{"x":1},"B":{"s":[4],"u":["p","p"],"n":{"e":"UB 254x146x31"}},"l":[]}';
+		const onTop =
+			'{"v":1,"__proto__":{"x":1},"B":{"s":[4],"u":["p","p"],"n":{"e":"UB 254x146x31"}},"l":[]}';
 		expect(answer(onTop)).toEqual({
 			code: 'link-incomplete',
 			message: expect.stringMatching(/\(__proto__: a field named __proto__ is not accepted\)/)
@@ -124,7 +143,9 @@ describe('opening a shared link', () => {
 	it('lets huge but finite numbers through to the engine, and refuses infinite ones', () => {
 		// The engine's range checks give field messages for these; the screen can show them.
 		expect(answer(withBeam({ s: [1e308] })).code).toBe('ok');
-		expect(answer(JSON.stringify({ ...VALID, l: [{ k: 'p', x: 1e308, a: -1e308, c: 't' }] })).code).toBe('ok');
+		expect(
+			answer(JSON.stringify({ ...VALID, l: [{ k: 'p', x: 1e308, a: -1e308, c: 't' }] })).code
+		).toBe('ok');
 		// JSON has no Infinity, but 1e400 parses to it.
 		const infinite = JSON.stringify(VALID).replace('"s":[4]', '"s":[1e400]');
 		expect(answer(infinite).message).toMatch(/beam\.spans\[0\]: not a number/);
@@ -133,7 +154,12 @@ describe('opening a shared link', () => {
 	it('gives the screen a readable case or a message, whatever the link holds (property)', () => {
 		const anyPayload = fc.oneof(
 			fc.jsonValue().map((value) => linkTo(JSON.stringify(value))),
-			fc.record({ v: fc.constant(1), B: fc.dictionary(fc.constantFrom('s', 'u', 'j', 'n', 'g', 'R', 'G', 'w'), fc.jsonValue()), l: fc.array(fc.jsonValue()) })
+			fc
+				.record({
+					v: fc.constant(1),
+					B: fc.dictionary(fc.constantFrom('s', 'u', 'j', 'n', 'g', 'R', 'G', 'w'), fc.jsonValue()),
+					l: fc.array(fc.jsonValue())
+				})
 				.map((value) => linkTo(JSON.stringify(value))),
 			fc.string().map((text) => `#c=${text}`)
 		);
@@ -152,7 +178,18 @@ describe('opening a shared link', () => {
 	});
 
 	it('gives the screen a readable case or a message when any one field of a good link is replaced (property)', () => {
-		const paths: string[][] = [['B'], ['l'], ['B', 's'], ['B', 'u'], ['B', 'n'], ['B', 'g'], ['B', 'R'], ['l', '0'], ['l', '0', 'k'], ['l', '0', 'x']];
+		const paths: string[][] = [
+			['B'],
+			['l'],
+			['B', 's'],
+			['B', 'u'],
+			['B', 'n'],
+			['B', 'g'],
+			['B', 'R'],
+			['l', '0'],
+			['l', '0', 'k'],
+			['l', '0', 'x']
+		];
 		fc.assert(
 			fc.property(fc.constantFrom(...paths), fc.jsonValue(), (path, replacement) => {
 				const value = JSON.parse(JSON.stringify(VALID));

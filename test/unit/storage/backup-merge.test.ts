@@ -72,14 +72,21 @@ describe('planImport', () => {
 
 	it('counts added checks whose verdict needs attention', () => {
 		const attention = { verdict: 'needs-attention' as const, computedBy: '1' };
-		const plan = planImport([record('a')], [record('a', { notes: 'x', computed: attention })], counter());
+		const plan = planImport(
+			[record('a')],
+			[record('a', { notes: 'x', computed: attention })],
+			counter()
+		);
 		expect(plan.counts).toEqual({ added: 0, beside: 1, skipped: 0, attention: 1, photos: 0 });
 	});
 
 	it('treats key order, verdicts and results as not part of the content', () => {
 		const reordered = reverseKeys(record('a')) as CheckRecord;
 		expect(Object.keys(reordered)[0]).toBe('deletedAt');
-		const claimed = record('a', { result: { verdict: 'pass' }, computed: { verdict: 'pass', computedBy: 'x' } });
+		const claimed = record('a', {
+			result: { verdict: 'pass' },
+			computed: { verdict: 'pass', computedBy: 'x' }
+		});
 		expect(contentKey(reordered)).toBe(contentKey(record('a')));
 		expect(contentKey(claimed)).toBe(contentKey(record('a')));
 		expect(contentKey(record('a', { input: demoCase('UB', 7) }))).not.toBe(contentKey(record('a')));

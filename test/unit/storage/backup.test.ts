@@ -126,7 +126,9 @@ describe('importBackup only adds', () => {
 	it('recognises a copy kept beside when the same file is imported again', async () => {
 		const store = await openFreshStore('beside-twice');
 		const [a] = await fill(store, ['Beam']);
-		const file = fileOf([{ ...a, input: demoCase('UB', 9), updatedAt: '2027-01-01T00:00:00.000Z' }]);
+		const file = fileOf([
+			{ ...a, input: demoCase('UB', 9), updatedAt: '2027-01-01T00:00:00.000Z' }
+		]);
 		expect(await importBackup(store, file, stubEngine())).toEqual(counts(0, 1, 0));
 		expect(await importBackup(store, file, stubEngine())).toEqual(counts(0, 0, 1));
 		expect((await live(store)).map((r) => r.title).sort()).toEqual(['Beam', 'Beam (imported)']);
@@ -180,7 +182,13 @@ describe('importBackup only adds', () => {
 		const [a] = await fill(store, ['Local']);
 		const claims = { verdict: 'pass', answer: { verdict: 'pass' } };
 		const file = fileOf([
-			{ ...a, id: 'long', input: demoCase('UB', 14), result: claims, computed: { verdict: 'pass', computedBy: 'stub-1' } },
+			{
+				...a,
+				id: 'long',
+				input: demoCase('UB', 14),
+				result: claims,
+				computed: { verdict: 'pass', computedBy: 'stub-1' }
+			},
 			{ ...a, id: 'bad', input: demoCase('UB', -1), result: claims },
 			{ ...a, id: 'fine', input: demoCase('UB', 4), result: claims }
 		]);
@@ -250,17 +258,37 @@ describe('importBackup refuses a bad file and changes nothing', () => {
 			[good.slice(0, Math.floor(good.length / 2)), 'damaged', /cut short/],
 			['', 'damaged', /not readable JSON/],
 			[withRecord({ ...parsed.records[0], updatedAt: 'yesterday' }), 'damaged', /updatedAt/],
-			[JSON.stringify({ ...parsed, records: [parsed.records[0], parsed.records[0]] }), 'damaged', /twice/],
+			[
+				JSON.stringify({ ...parsed, records: [parsed.records[0], parsed.records[0]] }),
+				'damaged',
+				/twice/
+			],
 			[JSON.stringify({ ...parsed, records: 'none' }), 'damaged', /no list/],
 			[JSON.stringify({ ...parsed, records: new Array(5001).fill(null) }), 'damaged', /more than/],
-			[JSON.stringify({ format: 'some-other-app', version: 1, records: [] }), 'foreign', /not a Hingepoint backup/],
+			[
+				JSON.stringify({ format: 'some-other-app', version: 1, records: [] }),
+				'foreign',
+				/not a Hingepoint backup/
+			],
 			[JSON.stringify(demoCase()), 'foreign', /single Hingepoint case/],
 			[JSON.stringify([1, 2, 3]), 'foreign', /not a Hingepoint backup/],
 			[JSON.stringify({ ...parsed, version: BACKUP_VERSION + 1 }), 'newer', /newer version/],
 			[withRecord({ ...parsed.records[0], id: 'n', schemaVersion: 9 }), 'newer', /newer version/],
-			[fileOf([JSON.parse(recordText.replace('{', '{"__proto__":{"polluted":true},'))]), 'damaged', /__proto__/],
-			[`{"format":"${BACKUP_FORMAT}","version":1,"__proto__":{"records":[]},"records":[]}`, 'damaged', /__proto__/],
-			[withRecord({ ...parsed.records[0], input: { ...parsed.records[0].input, constructor: 1 } }), 'damaged', /constructor/],
+			[
+				fileOf([JSON.parse(recordText.replace('{', '{"__proto__":{"polluted":true},'))]),
+				'damaged',
+				/__proto__/
+			],
+			[
+				`{"format":"${BACKUP_FORMAT}","version":1,"__proto__":{"records":[]},"records":[]}`,
+				'damaged',
+				/__proto__/
+			],
+			[
+				withRecord({ ...parsed.records[0], input: { ...parsed.records[0].input, constructor: 1 } }),
+				'damaged',
+				/constructor/
+			],
 			[withRecord({ ...parsed.records[0], notes: deep }), 'damaged', /nesting/],
 			[' '.repeat(MAX_BACKUP_CHARS + 1), 'damaged', /larger than any backup/]
 		];

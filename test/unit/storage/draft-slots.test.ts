@@ -1,6 +1,12 @@
 /** Drafts in slots: the current one, one per saved check being edited, and ones set aside. */
 import { describe, expect, it } from 'vitest';
-import { clearDraft, listDrafts, loadDraft, moveDraft, saveDraft } from '../../../src/lib/storage/drafts';
+import {
+	clearDraft,
+	listDrafts,
+	loadDraft,
+	moveDraft,
+	saveDraft
+} from '../../../src/lib/storage/drafts';
 import { openFreshStore } from '../../storage/support';
 
 const NOW = new Date('2026-05-01T00:00:00.000Z');
@@ -11,7 +17,10 @@ describe('draft slots', () => {
 		await saveDraft(store, { form: { span: 4 }, now: NOW });
 		await saveDraft(store, { form: { span: 7 }, recordId: 'r1', slot: 'check:r1', now: NOW });
 		expect(await loadDraft(store)).toMatchObject({ ok: true, value: { form: { span: 4 } } });
-		expect(await loadDraft(store, 'check:r1')).toMatchObject({ ok: true, value: { recordId: 'r1', form: { span: 7 } } });
+		expect(await loadDraft(store, 'check:r1')).toMatchObject({
+			ok: true,
+			value: { recordId: 'r1', form: { span: 7 } }
+		});
 		await clearDraft(store, 'check:r1');
 		expect(await loadDraft(store, 'check:r1')).toEqual({ ok: true, value: null });
 		expect(await loadDraft(store)).toMatchObject({ value: { form: { span: 4 } } });

@@ -87,7 +87,9 @@ describe('SavedChecks verdicts', () => {
 	it('says why a bad file was refused and changes nothing', async () => {
 		const store = await openFreshStore('state-refuse');
 		const state = stateFor(store);
-		await state.importFrom('{"format":"hingepoint.backup","version":1,"records":[],"__proto__":{}}');
+		await state.importFrom(
+			'{"format":"hingepoint.backup","version":1,"records":[],"__proto__":{}}'
+		);
 		expect(state.importMessage).toMatch(/^Backup refused, nothing changed: .*__proto__/);
 		expect(state.records).toEqual([]);
 		let read = false;

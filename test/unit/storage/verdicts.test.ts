@@ -32,7 +32,12 @@ describe('storeVerdicts', () => {
 		if (!a.ok || !b.ok) throw new Error('save failed');
 		const ra = a.value.record;
 		const rb = b.value.record;
-		const edited = await updateCheck(store, ra.id, { title: 'A2' }, { now: new Date('2030-01-01T00:00:00.000Z') });
+		const edited = await updateCheck(
+			store,
+			ra.id,
+			{ title: 'A2' },
+			{ now: new Date('2030-01-01T00:00:00.000Z') }
+		);
 		await deleteCheck(store, rb.id);
 		const written = await storeVerdicts(store, [
 			{ id: ra.id, updatedAt: ra.updatedAt, computed: fail },

@@ -4,7 +4,12 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { applyLayout, BEAM_LAYOUTS, detectLayout, totalLength } from '../../../src/lib/ui/state/beam-layout';
+import {
+	applyLayout,
+	BEAM_LAYOUTS,
+	detectLayout,
+	totalLength
+} from '../../../src/lib/ui/state/beam-layout';
 import { convertLoad, readLoadChoice, LOAD_CHOICES } from '../../../src/routes/check/load-kinds';
 
 describe('beam layouts', () => {
@@ -29,8 +34,14 @@ describe('beam layouts', () => {
 	});
 
 	it('gives a continuous beam 2 to 5 spans and an overhang a free end', () => {
-		expect(applyLayout({ spans: [6], supports: ['pin', 'pin'] }, 'continuous', 9).spans).toHaveLength(5);
-		expect(applyLayout({ spans: [6], supports: ['pin', 'pin'] }, 'overhang').supports).toEqual(['pin', 'pin', 'free']);
+		expect(
+			applyLayout({ spans: [6], supports: ['pin', 'pin'] }, 'continuous', 9).spans
+		).toHaveLength(5);
+		expect(applyLayout({ spans: [6], supports: ['pin', 'pin'] }, 'overhang').supports).toEqual([
+			'pin',
+			'pin',
+			'free'
+		]);
 		expect(totalLength({ spans: [4, 1.5] })).toBe(5.5);
 	});
 });
@@ -43,6 +54,12 @@ describe('load kinds', () => {
 			expect(converted.action).toBe('temporary');
 			expect(readLoadChoice(converted, 6)).toBe(id);
 		}
-		expect(convertLoad(hoist, 'whole', 6)).toEqual({ kind: 'uniform', from: 0, to: 6, value: 12.5, action: 'temporary' });
+		expect(convertLoad(hoist, 'whole', 6)).toEqual({
+			kind: 'uniform',
+			from: 0,
+			to: 6,
+			value: 12.5,
+			action: 'temporary'
+		});
 	});
 });

@@ -20,7 +20,13 @@ describe('blank fields', () => {
 	it('a new check and a new load start with no size, position, span or action', () => {
 		expect(createBlankCase().beam.spans).toEqual([null]);
 		expect(createLoad('point', 6)).toEqual({ kind: 'point', x: null, value: null, action: null });
-		expect(createLoad('whole', 6)).toEqual({ kind: 'uniform', from: 0, to: 6, value: null, action: null });
+		expect(createLoad('whole', 6)).toEqual({
+			kind: 'uniform',
+			from: 0,
+			to: 6,
+			value: null,
+			action: null
+		});
 	});
 
 	it('a cleared field holds null and shows empty; a cleared root radius drops out of the case', () => {
@@ -29,9 +35,13 @@ describe('blank fields', () => {
 		form.setText('loads[2].value', '');
 		expect(form.case.loads[2]).toMatchObject({ value: null });
 		expect(form.local).toEqual({});
-		form.update((c) => (c.beam.section = { shape: 'I', h: 257.2, b: 146.1, tw: 6.1, tf: 8.6, r: 7.6 }));
+		form.update(
+			(c) => (c.beam.section = { shape: 'I', h: 257.2, b: 146.1, tw: 6.1, tf: 8.6, r: 7.6 })
+		);
 		form.setText('beam.section.r', ' ');
-		expect('r' in form.case.beam.section && (form.case.beam.section as { r?: number }).r).toBeUndefined();
+		expect(
+			'r' in form.case.beam.section && (form.case.beam.section as { r?: number }).r
+		).toBeUndefined();
 	});
 
 	it('names an empty field as not entered, first in the list to fix', () => {
@@ -39,12 +49,22 @@ describe('blank fields', () => {
 		form.load(createBlankCase());
 		form.outcome = {
 			state: 'issues',
-			issues: [{ path: 'beam.spans[0]', code: 'not-a-number', message: 'The span (m) must be a number.', severity: 'error' }]
+			issues: [
+				{
+					path: 'beam.spans[0]',
+					code: 'not-a-number',
+					message: 'The span (m) must be a number.',
+					severity: 'error'
+				}
+			]
 		};
 		expect(form.messages['beam.spans[0]']).toBe(BLANK_MESSAGE);
 		expect(form.problems).toEqual([{ path: 'beam.spans[0]', message: BLANK_MESSAGE }]);
 		form.setText('beam.spans[0]', '5x');
-		expect(form.problems[0]).toMatchObject({ path: 'beam.spans[0]', message: expect.stringMatching(/not a number/) });
+		expect(form.problems[0]).toMatchObject({
+			path: 'beam.spans[0]',
+			message: expect.stringMatching(/not a number/)
+		});
 	});
 
 	it('whole-beam loads follow a span cleared and typed again', () => {

@@ -26,12 +26,18 @@ describe('CheckForm: answer first, curve after', () => {
 		curve.resolve(report('with curve'));
 		await curve.promise;
 		await Promise.resolve();
-		expect(form.outcome?.state === 'report' && form.outcome.report.engineVersion).toBe('with curve');
+		expect(form.outcome?.state === 'report' && form.outcome.report.engineVersion).toBe(
+			'with curve'
+		);
 	});
 
 	it('drops a curve that arrives after the case changed', async () => {
 		const curve = deferred();
-		const form = new CheckForm({ run: () => report('answer'), runCurve: () => curve.promise, delay: 10_000 });
+		const form = new CheckForm({
+			run: () => report('answer'),
+			runCurve: () => curve.promise,
+			delay: 10_000
+		});
 		form.load(createDemoCase());
 		await form.runNow();
 		form.setText('beam.spans[0]', '5');

@@ -33,7 +33,10 @@ class FakePort implements EnginePort {
 
 // Only the identity matters to the runner: the fake worker never reads the case.
 const caseNamed = (title: string) => ({ title }) as unknown as CaseFile;
-const refused = { ok: false, issues: [] } as unknown as Extract<EngineReply, { result: unknown }>['result'];
+const refused = { ok: false, issues: [] } as unknown as Extract<
+	EngineReply,
+	{ result: unknown }
+>['result'];
 
 let ports: FakePort[];
 const spawn = () => {
@@ -187,7 +190,9 @@ describe('engine runner', () => {
 		ports[0].onerror?.({ message: 'out of memory' });
 		const outcome = await second;
 		expect(outcome.state).toBe('error');
-		expect(outcome.state === 'error' && outcome.message).toMatch(/stopped unexpectedly \(out of memory\)/);
+		expect(outcome.state === 'error' && outcome.message).toMatch(
+			/stopped unexpectedly \(out of memory\)/
+		);
 		runner.run(caseNamed('c'));
 		expect(ports).toHaveLength(2);
 	});
@@ -203,7 +208,9 @@ describe('engine runner', () => {
 			}
 		});
 		const outcome = await runner.run(caseNamed('deep'));
-		expect(outcome.state === 'error' && outcome.message).toMatch(/could not be passed to the engine/);
+		expect(outcome.state === 'error' && outcome.message).toMatch(
+			/could not be passed to the engine/
+		);
 	});
 
 	it('answers with a message when the answer cannot be read', async () => {

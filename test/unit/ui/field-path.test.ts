@@ -1,6 +1,11 @@
 /** Field paths, the same strings the engine uses to name a field in its input issues. */
 import { describe, expect, it } from 'vitest';
-import { readPath, shiftListKeys, splitPath, writePath } from '../../../src/lib/ui/state/field-path';
+import {
+	readPath,
+	shiftListKeys,
+	splitPath,
+	writePath
+} from '../../../src/lib/ui/state/field-path';
 
 describe('field paths', () => {
 	it('splits keys and indices', () => {
@@ -17,7 +22,13 @@ describe('field paths', () => {
 	});
 
 	it('renumbers list keys after an item is removed and drops the removed item’s keys', () => {
-		const texts = { 'loads[0].x': 'a', 'loads[1].x': 'b', 'loads[2].value': 'c', 'loads[10].x': 'd', 'beam.spans[0]': 'e' };
+		const texts = {
+			'loads[0].x': 'a',
+			'loads[1].x': 'b',
+			'loads[2].value': 'c',
+			'loads[10].x': 'd',
+			'beam.spans[0]': 'e'
+		};
 		expect(shiftListKeys(texts, 'loads', 1)).toEqual({
 			'loads[0].x': 'a',
 			'loads[1].value': 'c',

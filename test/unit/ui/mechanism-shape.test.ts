@@ -6,13 +6,19 @@
 import { describe, expect, it } from 'vitest';
 import { computeMechanismShape } from '../../../src/lib/ui/components/drawing/mechanism-shape';
 
-const at = (shape: { x: number; v: number }[] | null, x: number) => shape?.find((p) => Math.abs(p.x - x) < 1e-9)?.v;
+const at = (shape: { x: number; v: number }[] | null, x: number) =>
+	shape?.find((p) => Math.abs(p.x - x) < 1e-9)?.v;
 
 describe('computeMechanismShape', () => {
 	it('simply supported, hinge at a: two straight pieces meeting under the hinge', () => {
 		const a = 2;
 		const L = 6;
-		const shape = computeMechanismShape({ spans: [L], supports: ['pin', 'pin'], joints: [], hinges: [a] });
+		const shape = computeMechanismShape({
+			spans: [L],
+			supports: ['pin', 'pin'],
+			joints: [],
+			hinges: [a]
+		});
 		expect(shape?.map((p) => p.x)).toEqual([0, a, L]);
 		expect(at(shape, 0)).toBe(0);
 		expect(at(shape, L)).toBe(0);
@@ -20,16 +26,28 @@ describe('computeMechanismShape', () => {
 	});
 
 	it('fixed at both ends with hinges at the ends and at midspan: the same kinked line', () => {
-		const shape = computeMechanismShape({ spans: [6], supports: ['fixed', 'fixed'], joints: [], hinges: [0, 3, 6] });
+		const shape = computeMechanismShape({
+			spans: [6],
+			supports: ['fixed', 'fixed'],
+			joints: [],
+			hinges: [0, 3, 6]
+		});
 		expect(shape?.map((p) => p.v)).toEqual([0, 1, 0]);
 	});
 
 	it('a built-in end without a hinge cannot turn: no mechanism from one span hinge', () => {
-		expect(computeMechanismShape({ spans: [6], supports: ['fixed', 'pin'], joints: [], hinges: [3] })).toBeNull();
+		expect(
+			computeMechanismShape({ spans: [6], supports: ['fixed', 'pin'], joints: [], hinges: [3] })
+		).toBeNull();
 	});
 
 	it('cantilever: rigid rotation about the root hinge, the tip moves most', () => {
-		const shape = computeMechanismShape({ spans: [3], supports: ['fixed', 'free'], joints: [], hinges: [0] });
+		const shape = computeMechanismShape({
+			spans: [3],
+			supports: ['fixed', 'free'],
+			joints: [],
+			hinges: [0]
+		});
 		expect(at(shape, 0)).toBe(0);
 		expect(at(shape, 3)).toBeCloseTo(1, 12);
 	});

@@ -11,7 +11,10 @@ describe('findSaveBlock', () => {
 			{ path: 'loads[1].x', message: 'Not entered yet.' },
 			{ path: 'beam.spans[0]', message: 'Not entered yet.' }
 		];
-		expect(findSaveBlock(problems, null)).toEqual({ reason: 'Fix Load 2 — position from left end first', path: 'loads[1].x' });
+		expect(findSaveBlock(problems, null)).toEqual({
+			reason: 'Fix Load 2 — position from left end first',
+			path: 'loads[1].x'
+		});
 	});
 
 	it('refuses a check the engine could not answer, or has not answered yet', () => {

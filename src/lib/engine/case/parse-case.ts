@@ -50,9 +50,7 @@ export function parseCase(json: unknown): Checked<CaseModel> {
 	if (b.selfWeight !== undefined && typeof b.selfWeight !== 'boolean')
 		addError(issues, 'beam.selfWeight', 'not-a-boolean', 'selfWeight must be true or false.');
 	const materials =
-		beam && loss !== undefined
-			? parseSections(b, spansM?.length, loss, issues, issues)
-			: undefined;
+		beam && loss !== undefined ? parseSections(b, spansM?.length, loss, issues, issues) : undefined;
 	const loads = parseLoads(json.loads, spansM, issues);
 	const factors = parseFactors(json.factors, issues);
 	const restraint = parseRestraint(b.restraint, spansM, issues);

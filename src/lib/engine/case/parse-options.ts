@@ -84,7 +84,10 @@ export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFact
 	}
 	// Names of the factor sets the design checks know (checks/en1993/factors.ts).
 	const sets = ['en1990-6.10', 'en1990-6.10ab', 'custom'] as const;
-	if (value.set !== undefined && !readChoice(value.set, 'factors.set', issues, sets, 'factor set')) {
+	if (
+		value.set !== undefined &&
+		!readChoice(value.set, 'factors.set', issues, sets, 'factor set')
+	) {
 		ok = false;
 	}
 	if (!ok) return undefined;

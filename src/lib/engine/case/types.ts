@@ -59,7 +59,6 @@ export interface CaseFactors {
 	set?: string;
 }
 
-
 /** The beam as written in a case file: spans in m, section dimensions in mm. */
 export interface CaseBeam {
 	spans: number[];
@@ -140,7 +139,10 @@ export interface CaseModel {
 	/** True when the file gave no restraint and the cautious default was taken. */
 	restraintAssumed?: boolean;
 	/** Lateral restraint positions converted to mm. */
-	restraint?: { lateral: 'continuous' | 'ends-only' | number[]; loadHeight?: CaseRestraint['loadHeight'] };
+	restraint?: {
+		lateral: 'continuous' | 'ends-only' | number[];
+		loadHeight?: CaseRestraint['loadHeight'];
+	};
 	/** Stiff bearing length per support, mm. */
 	bearing?: number[];
 	/** Stiff bearing length under point loads, mm. */

@@ -74,7 +74,12 @@ export function decideAnswer(checked: DesignCheckOutcome, loads: Load[]): Answer
 		existingFail
 	};
 	if (v.verdict === 'outside-scope') {
-		return { ...none, verdict: 'outside-scope', reasons: v.routeReasons, noProposedLoad: active.length === 0 };
+		return {
+			...none,
+			verdict: 'outside-scope',
+			reasons: v.routeReasons,
+			noProposedLoad: active.length === 0
+		};
 	}
 	if (active.length === 0) return { ...none, verdict: null, noProposedLoad: true };
 	const m = v.allowableMultiplier;
@@ -85,7 +90,14 @@ export function decideAnswer(checked: DesignCheckOutcome, loads: Load[]): Answer
 			const effect = entered < 0 ? 'relieves' : 'not-limited';
 			return { index, kind: l.kind, entered, value: null, direction, effect };
 		}
-		return { index, kind: l.kind, entered, value: m * Math.abs(entered), direction, effect: 'limited' };
+		return {
+			index,
+			kind: l.kind,
+			entered,
+			value: m * Math.abs(entered),
+			direction,
+			effect: 'limited'
+		};
 	});
 	return {
 		verdict: v.verdict,

@@ -96,7 +96,10 @@ export function checkElasticBending(ctx: CheckContext, o: ElasticBendingOptions)
 		const fixedW = groups.map((g) => (g.kind === 'temporary' ? 0 : g.weight(arr)));
 		const allW = groups.map((g) => g.weight(arr));
 		const fixed = combineMomentPieces(pieces, fixedW);
-		const variable = combineMomentPieces(pieces, allW.map((w, i) => w - fixedW[i]));
+		const variable = combineMomentPieces(
+			pieces,
+			allW.map((w, i) => w - fixedW[i])
+		);
 		const f = factorOf(fixed, variable);
 		const factor = f === null ? null : f.status === 'reached' ? f.factor : 0;
 		const u = inverse(combineMomentPieces(pieces, allW));

@@ -9,8 +9,7 @@ import type { SpanMember } from './member';
 
 const NO_STIFFNESS =
 	'Moments need the stiffness of each span: a span is given by its Mp only and the spans differ.';
-const NO_SECTION =
-	'Deflections need the section’s Iy: the section is given by its Mp only.';
+const NO_SECTION = 'Deflections need the section’s Iy: the section is given by its Mp only.';
 
 /**
  * Moments and deflections of the characteristic loads.
@@ -24,7 +23,9 @@ export function summariseCharacteristicEffects(
 	const notAvailable: string[] = [];
 	const all = effects.characteristic.all;
 	// With a placeholder EI moments are right only when every span has the same section.
-	const uniform = members.every((m) => m.designation === members[0].designation && m.mp === members[0].mp);
+	const uniform = members.every(
+		(m) => m.designation === members[0].designation && m.mp === members[0].mp
+	);
 	if (!all || (!stiffnessKnown && !uniform)) {
 		if (!stiffnessKnown && !uniform) notAvailable.push(NO_STIFFNESS);
 		return { maxMoment: null, maxDeflection: null, notAvailable };

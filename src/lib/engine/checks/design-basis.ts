@@ -36,7 +36,10 @@ export interface DesignBasis<Settings> {
 	resolveFactors(settings: Settings, options: { hasImposed: boolean }): BasisFactors;
 	decideRoute(input: ScopeInput): ScopeDecision;
 	/** Section class for major-axis bending (null when it cannot be found, e.g. a known Mp). */
-	classifySection(section: ResolvedSection, fy: number): { class: SectionClass | null; note?: string };
+	classifySection(
+		section: ResolvedSection,
+		fy: number
+	): { class: SectionClass | null; note?: string };
 	/** Bending resistance for the route, N·mm. */
 	computeBendingResistance(o: {
 		Wpl: number;

@@ -48,7 +48,9 @@ export function computeGoverningCurve(
 	const shared: DesignRunOptions = { memo: new Map(), skipInformationCollapse: true };
 	// A proposed point load is moved in place (same size, same order), so that at its own position
 	// the run is the answer's own run; without one, a unit trial load is added.
-	const proposed = input.loads.find((l) => l.kind === 'point' && l.action === 'temporary' && l.value > 0);
+	const proposed = input.loads.find(
+		(l) => l.kind === 'point' && l.action === 'temporary' && l.value > 0
+	);
 	const size = proposed?.kind === 'point' ? proposed.value : UNIT_TRIAL;
 	const loadsAt = (x: number): Load[] => {
 		const trial: Load = { kind: 'point', x, value: size, action: 'temporary' };
@@ -61,7 +63,8 @@ export function computeGoverningCurve(
 		const v = run({ ...input, loads: loadsAt(x) }, shared).verdict;
 		if (v.verdict === 'outside-scope') return { x, p: null, governing: null, outsideScope: true };
 		const m = v.allowableMultiplier;
-		const governing = m === null || !v.governing ? null : { id: v.governing.id, label: v.governing.label };
+		const governing =
+			m === null || !v.governing ? null : { id: v.governing.id, label: v.governing.label };
 		return { x, p: m === null ? null : m * size, governing, outsideScope: false };
 	};
 	const points = listPositions(input).map(evaluate);

@@ -65,7 +65,8 @@ export function selectLinearArrangements(
 	const keep = new Set<number>();
 	for (const e of extremes) {
 		// Round-off of this sum against the checks' own: generous, it only adds arrangements.
-		const slack = 1e-9 * (e.size + Math.abs(e.slope) * Math.max(1, Number.isFinite(reach) ? reach : 1));
+		const slack =
+			1e-9 * (e.size + Math.abs(e.slope) * Math.max(1, Number.isFinite(reach) ? reach : 1));
 		let room = Math.max(e.top + e.slope - u1, e.top - u0);
 		if (root <= SEARCH_LIMIT) room = Math.max(room, e.top + reach * e.slope - 1);
 		if (room + slack >= 0) listWithin(e, room + slack, keep);
@@ -130,7 +131,13 @@ function listWithin(e: Extreme, room: number, keep: Set<number>): void {
 			// Costs are sorted: once one is too dear, so are the rest.
 			if (cost > left) return;
 			if (what === 'permanent') visit(c + 1, left - cost, permanent === 'sup' ? 'inf' : 'sup', on);
-			else visit(c + 1, left - cost, permanent, on.map((b, k) => (k === what ? !b : b)));
+			else
+				visit(
+					c + 1,
+					left - cost,
+					permanent,
+					on.map((b, k) => (k === what ? !b : b))
+				);
 		}
 	};
 	visit(0, room, e.permanent, e.on);

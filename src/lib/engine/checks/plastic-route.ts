@@ -53,7 +53,10 @@ function solveArrangement(
 	arrangement: LoadArrangement,
 	vRd: (number | null)[]
 ): PlasticArrangement {
-	const capacity = buildCapacity(ctx.beam.spans, ctx.members.map((m) => m.mp / ctx.gammaM0));
+	const capacity = buildCapacity(
+		ctx.beam.spans,
+		ctx.members.map((m) => m.mp / ctx.gammaM0)
+	);
 	const d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement });
 	return solvePlasticArrangement({
 		basis: ctx.basis,
@@ -136,7 +139,6 @@ function isCertified(all: PlasticArrangement[], g: PlasticArrangement): boolean 
 	const lambda = g.loadFactor;
 	return all.every(
 		(p) =>
-			p.certified ||
-			(lambda !== null && 'lowerBound' in p.result && p.result.lowerBound >= lambda)
+			p.certified || (lambda !== null && 'lowerBound' in p.result && p.result.lowerBound >= lambda)
 	);
 }

@@ -57,7 +57,9 @@ export function runDesignChecks(
 ): DesignCheckOutcome {
 	const { beam } = input;
 	const members = input.sections.map((s, i) => describeMember(s, input.grades[i]?.fy ?? 0));
-	const classes = input.sections.map((s, i) => basis.classifySection(s, members[i].fy || 235).class);
+	const classes = input.sections.map(
+		(s, i) => basis.classifySection(s, members[i].fy || 235).class
+	);
 	const sectionClass = Math.max(...classes.map((c) => c ?? 1)) as SectionClass;
 	const hasImposed = input.loads.some((l) => l.action === 'imposed');
 	const factors = basis.resolveFactors(input.factors, { hasImposed });
@@ -259,7 +261,10 @@ function pickBendingGoverning(checks: CheckResult[]): CheckResult | undefined {
 	const rank = (c: CheckResult) => c.multiplierAtCapacity ?? Number.MAX_VALUE;
 	return checks
 		.filter((c) => c.id === 'ltb' || c.id === 'bending')
-		.reduce<CheckResult | undefined>((best, c) => (!best || rank(c) < rank(best) ? c : best), undefined);
+		.reduce<CheckResult | undefined>(
+			(best, c) => (!best || rank(c) < rank(best) ? c : best),
+			undefined
+		);
 }
 
 function deflectionInput(ctx: CheckContext, input: DesignCheckInput) {

@@ -58,10 +58,7 @@ export interface CheckResult {
  * - `outside-scope`: the tool cannot give an answer for this beam
  */
 export type AnalysisRoute =
-	| 'plastic'
-	| 'elastic-plastic-section'
-	| 'elastic-first-yield'
-	| 'outside-scope';
+	'plastic' | 'elastic-plastic-section' | 'elastic-first-yield' | 'outside-scope';
 
 /** Outcome of the whole check. */
 export type VerdictKind = 'pass' | 'fail' | 'outside-scope';

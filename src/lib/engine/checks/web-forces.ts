@@ -60,9 +60,7 @@ export function listWebForces(
 			...nearestEnd(ctx, x, reach),
 			flange: loaded ? 'both' : 'bottom',
 			name: `support ${node + 1}`,
-			force: loaded
-				? (arr, t) => Math.max(reaction(arr, t), pointForce(x, arr, t))
-				: reaction,
+			force: loaded ? (arr, t) => Math.max(reaction(arr, t), pointForce(x, arr, t)) : reaction,
 			sources: { node, loadAt: loaded ? x : null }
 		});
 	});
@@ -106,7 +104,10 @@ function nearestEnd(ctx: CheckContext, x: number, ss: number) {
  * constant time.
  */
 function makePointForce(ctx: CheckContext) {
-	const cache = new Map<LoadArrangement, { fixed: Map<number, number>; variable: Map<number, number> }>();
+	const cache = new Map<
+		LoadArrangement,
+		{ fixed: Map<number, number>; variable: Map<number, number> }
+	>();
 	const sumByPosition = (ls: ReturnType<typeof applyArrangement>['fixed']) => {
 		const out = new Map<number, number>();
 		for (const l of ls) if (l.kind === 'point') out.set(l.x, (out.get(l.x) ?? 0) + l.value);

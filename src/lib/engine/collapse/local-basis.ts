@@ -81,7 +81,9 @@ function listLocalSelfStresses(model: FieldModel): number[][] {
 function isSelfStress(model: FieldModel, v: number[]): boolean {
 	let size = 0;
 	for (const x of v) size += Math.abs(x);
-	return model.E.every((row) => Math.abs(dot(row, v)) <= 1e-12 * size * Math.max(1, ...row.map(Math.abs)));
+	return model.E.every(
+		(row) => Math.abs(dot(row, v)) <= 1e-12 * size * Math.max(1, ...row.map(Math.abs))
+	);
 }
 
 /** The first `count` vectors of the list that are linearly independent (Gram–Schmidt). */

@@ -40,9 +40,12 @@ export function validateCollapseProblem(problem: CollapseProblem): InputIssue[] 
 	let reach = 0;
 	caps.forEach((c, i) => {
 		const path = `capacity[${problem.capacity.indexOf(c)}]`;
-		if (
-			!(c.sagging > 0 && c.hogging > 0 && Number.isFinite(c.sagging) && Number.isFinite(c.hogging))
-		) {
+		if (!(
+			c.sagging > 0 &&
+			c.hogging > 0 &&
+			Number.isFinite(c.sagging) &&
+			Number.isFinite(c.hogging)
+		)) {
 			issues.push(
 				error(path, 'capacity-not-positive', 'Moment resistances must be positive numbers.')
 			);

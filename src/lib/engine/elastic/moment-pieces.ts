@@ -39,16 +39,15 @@ function fitCubic(read: (s: number) => number, a: number, h: number): number[] {
 	const t = [0, h / 3, (2 * h) / 3, h];
 	const f = t.map((u) => read(a + u));
 	if (h <= 0) return [f[0], 0, 0, 0];
-	const d1 = [(f[1] - f[0]) / (t[1] - t[0]), (f[2] - f[1]) / (t[2] - t[1]), (f[3] - f[2]) / (t[3] - t[2])];
+	const d1 = [
+		(f[1] - f[0]) / (t[1] - t[0]),
+		(f[2] - f[1]) / (t[2] - t[1]),
+		(f[3] - f[2]) / (t[3] - t[2])
+	];
 	const d2 = [(d1[1] - d1[0]) / (t[2] - t[0]), (d1[2] - d1[1]) / (t[3] - t[1])];
 	const d3 = (d2[1] - d2[0]) / (t[3] - t[0]);
 	// f0 + d1 u + d2 u(u − t1) + d3 u(u − t1)(u − t2)
-	return [
-		f[0],
-		d1[0] - d2[0] * t[1] + d3 * t[1] * t[2],
-		d2[0] - d3 * (t[1] + t[2]),
-		d3
-	];
+	return [f[0], d1[0] - d2[0] * t[1] + d3 * t[1] * t[2], d2[0] - d3 * (t[1] + t[2]), d3];
 }
 
 /** Σ wᵢ·piecesᵢ (groups with weight 0 are skipped). */

@@ -11,7 +11,10 @@ const ALL_ROWS = [...GRADE_ROWS, ...HISTORIC_GRADE_ROWS];
 
 /** Turns the way people write grades (`s275jr`, `A572 Gr 50`, `astm a992`) into a library id. */
 function normaliseGradeId(text: string): string {
-	const t = text.trim().toLowerCase().replace(/^astm\s*/, '');
+	const t = text
+		.trim()
+		.toLowerCase()
+		.replace(/^astm\s*/, '');
 	const en = t.match(/^s\s?(235|275|355|460)/);
 	if (en) return `S${en[1]}`;
 	if (/^a\s?572/.test(t)) return 'A572-50';
@@ -93,8 +96,7 @@ export function resolveGrade(spec: GradeSpec, thickness: number): Checked<SteelG
 	if (!band) {
 		const top = row.bands[row.bands.length - 1].upTo;
 		const message =
-			`${row.name} is specified only up to ${top} mm thick; ` +
-			`this element is ${thickness} mm.`;
+			`${row.name} is specified only up to ${top} mm thick; ` + `this element is ${thickness} mm.`;
 		return { ok: false, issues: [makeIssue('', 'thickness-beyond-grade', message)] };
 	}
 	const value: SteelGrade = {

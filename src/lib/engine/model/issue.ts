@@ -12,7 +12,8 @@ export interface InputIssue {
 	severity: 'error' | 'warning';
 }
 
-export type Checked<T> = { ok: true; value: T; warnings: InputIssue[] } | { ok: false; issues: InputIssue[] };
+export type Checked<T> =
+	{ ok: true; value: T; warnings: InputIssue[] } | { ok: false; issues: InputIssue[] };
 
 /**
  * Throws when a number that is about to enter a result is not finite: a broken invariant,

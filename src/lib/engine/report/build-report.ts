@@ -73,7 +73,15 @@ export function buildCheckReport(
 		version: REPORT_VERSION,
 		title: model.title,
 		engineVersion: ENGINE_VERSION,
-		units: { length: 'm', force: 'kN', lineLoad: 'kN/m', moment: 'kNm', deflection: 'mm', section: 'mm', stress: 'MPa' },
+		units: {
+			length: 'm',
+			force: 'kN',
+			lineLoad: 'kN/m',
+			moment: 'kNm',
+			deflection: 'mm',
+			section: 'mm',
+			stress: 'MPa'
+		},
 		answer,
 		checks: outside ? [] : checked.checks.map(reportCheckRow),
 		design: designPart,
@@ -122,7 +130,10 @@ export function describeRestraint(
 			: r.kind === 'ends-only'
 				? 'compression flange held laterally only at the supports'
 				: `compression flange held laterally at the supports and at ${r.at
-						.map((x) => `${Number(convertTo(mmToM(x), 'length', units).toPrecision(4))} ${unitSymbol('length', units)}`)
+						.map(
+							(x) =>
+								`${Number(convertTo(mmToM(x), 'length', units).toPrecision(4))} ${unitSymbol('length', units)}`
+						)
 						.join(', ')}`;
 	return `${held}; ${at[height]}`;
 }
@@ -152,7 +163,8 @@ function summarise(
 		loads: model.file.loads.map((l) => ({
 			action: l.action,
 			kind: l.kind,
-			value: l.kind === 'linear' ? (Math.abs(l.end) > Math.abs(l.start) ? l.end : l.start) : l.value,
+			value:
+				l.kind === 'linear' ? (Math.abs(l.end) > Math.abs(l.start) ? l.end : l.start) : l.value,
 			...(l.kind === 'point' ? { at: l.x } : { from: l.from, to: l.to }),
 			label: l.label ?? null
 		})),

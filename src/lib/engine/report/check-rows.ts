@@ -51,7 +51,6 @@ export const ROW_KEY_UNITS: Record<string, { unit: string; convert: (v: number) 
 	loadFactor: { unit: '', convert: same }
 };
 
-
 /** The unit entry of a row key; numbered keys (vEd1, myVRd2 …) read like their stem. */
 export function findRowKeyUnit(key: string): (typeof ROW_KEY_UNITS)[string] | undefined {
 	return ROW_KEY_UNITS[key] ?? ROW_KEY_UNITS[key.replace(/\d+$/, '')];
@@ -116,7 +115,8 @@ export function reportCheckRow(c: CheckResult): CheckRowReport {
 export function reportDesignChecks(o: DesignCheckOutcome): DesignCheckReport {
 	const v = o.verdict;
 	const fromCheck = o.checks.find((c) => c.id === v.governing?.id)?.arrangement ?? null;
-	const governingArrangement = v.route === 'plastic' ? (o.collapse?.arrangement ?? fromCheck) : fromCheck;
+	const governingArrangement =
+		v.route === 'plastic' ? (o.collapse?.arrangement ?? fromCheck) : fromCheck;
 	return {
 		basis: o.basis,
 		route: { route: v.route, reasons: v.routeReasons },

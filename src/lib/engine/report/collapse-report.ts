@@ -24,7 +24,13 @@ export function reportCollapse(
 		sagging: nmmToKNm(s.sagging),
 		hogging: nmmToKNm(s.hogging)
 	}));
-	const base = { label: LABEL, decides: o.decides, appliesTo: o.appliesTo, arrangement: c.arrangement, resistance } as const;
+	const base = {
+		label: LABEL,
+		decides: o.decides,
+		appliesTo: o.appliesTo,
+		arrangement: c.arrangement,
+		resistance
+	} as const;
 	if (result.status === 'fails-under-fixed' || result.status === 'unbounded') {
 		return {
 			...base,

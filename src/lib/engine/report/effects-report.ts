@@ -7,13 +7,18 @@ import type { LocatedValue } from '../elastic/index';
 import { mmToM, nmmToKNm } from '../units';
 import type { DesignMomentsReport, EffectsReport } from './types';
 
-const located = (v: LocatedValue | null) => (v ? { x: mmToM(v.x), value: nmmToKNm(v.value) } : null);
+const located = (v: LocatedValue | null) =>
+	v ? { x: mmToM(v.x), value: nmmToKNm(v.value) } : null;
 
 /** The effects part of the report; all null when the run stopped before any analysis. */
 export function reportEffects(e: CharacteristicEffects | null): EffectsReport {
 	if (!e) return { maxMoment: null, maxDeflection: null, notAvailable: [] };
 	const d = e.maxDeflection;
-	const deflection = (v: LocatedValue & { span: number }) => ({ x: mmToM(v.x), value: v.value, span: v.span });
+	const deflection = (v: LocatedValue & { span: number }) => ({
+		x: mmToM(v.x),
+		value: v.value,
+		span: v.span
+	});
 	return {
 		maxMoment: e.maxMoment && {
 			maxSagging: located(e.maxMoment.maxSagging),
@@ -29,10 +34,13 @@ export function reportEffects(e: CharacteristicEffects | null): EffectsReport {
 }
 
 /** The elastic design moments in output units (m, kNm). */
-export function reportDesignMoments(d: DesignMoments | null | undefined): DesignMomentsReport | null {
+export function reportDesignMoments(
+	d: DesignMoments | null | undefined
+): DesignMomentsReport | null {
 	if (!d) return null;
 	return {
-		label: 'elastic design moments (design loads as entered) and the resistance they are checked against',
+		label:
+			'elastic design moments (design loads as entered) and the resistance they are checked against',
 		arrangement: d.arrangement,
 		x: d.x.map(mmToM),
 		M: d.M.map(nmmToKNm),

@@ -15,7 +15,13 @@ const ft = US.ftToM;
 
 /** Per quantity: how many SI output units one shown unit is, and its symbol. */
 const SHOWN: Record<SummaryUnits, Record<SummaryQuantity, [toSI: number, symbol: string]>> = {
-	si: { length: [1, 'm'], force: [1, 'kN'], lineLoad: [1, 'kN/m'], moment: [1, 'kNm'], small: [1, 'mm'] },
+	si: {
+		length: [1, 'm'],
+		force: [1, 'kN'],
+		lineLoad: [1, 'kN/m'],
+		moment: [1, 'kNm'],
+		small: [1, 'mm']
+	},
 	us: {
 		length: [ft, 'ft'],
 		force: [kip, 'kip'],

@@ -5,13 +5,7 @@
  * the units asked for (see summary-units.ts).
  */
 import { toPlainText } from './plain-text';
-import {
-	convertTo,
-	formatIn,
-	formatNumber,
-	UNITS_WORDS,
-	type SummaryUnits
-} from './summary-units';
+import { convertTo, formatIn, formatNumber, UNITS_WORDS, type SummaryUnits } from './summary-units';
 import type { VerdictKind } from '../checks/types';
 
 export { formatNumber } from './summary-units';
@@ -184,7 +178,9 @@ export function writeLongSummary(s: SummaryInput): string {
 		'Loads (characteristic):',
 		...s.loads.map((l) => `  • ${describeLoad(l, s.units)}`),
 		describeFactors(s),
-		`Factors: ${Object.entries(s.factors).map(([k, v]) => `${k} ${v}`).join(', ')}`,
+		`Factors: ${Object.entries(s.factors)
+			.map(([k, v]) => `${k} ${v}`)
+			.join(', ')}`,
 		s.governingArrangement ? `Governing load arrangement: ${s.governingArrangement}` : '',
 		'',
 		`Result: ${describeResult(s)}`,

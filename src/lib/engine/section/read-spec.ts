@@ -51,7 +51,11 @@ function readDesignation(text: string): Checked<ReadSpec> {
 	}
 	const { designation, family, standard, dims } = found;
 	const shape = found.shape as Dimensioned;
-	return { ok: true, value: { shape, dims: { ...dims }, designation, family, standard }, warnings: [] };
+	return {
+		ok: true,
+		value: { shape, dims: { ...dims }, designation, family, standard },
+		warnings: []
+	};
 }
 
 /**
@@ -65,7 +69,13 @@ export function readSectionSpec(spec: Exclude<SectionSpec, { mp: number }>): Che
 	}
 	switch (spec.shape) {
 		case 'I': {
-			const measured = makeMeasured('I', { h: spec.h, b: spec.b, tw: spec.tw, tf: spec.tf, r: spec.r ?? 0 });
+			const measured = makeMeasured('I', {
+				h: spec.h,
+				b: spec.b,
+				tw: spec.tw,
+				tf: spec.tf,
+				r: spec.r ?? 0
+			});
 			// No root radius measured: r = 0 is the cautious reading (smallest area, I and W).
 			if (spec.r === undefined && measured.ok) measured.warnings.push(ROOT_RADIUS_ASSUMED);
 			return measured;
@@ -88,8 +98,7 @@ export function readSectionSpec(spec: Exclude<SectionSpec, { mp: number }>): Che
 		default: {
 			// Case files arrive as JSON, so a shape outside the union is possible at run time.
 			const shape = String((spec as { shape?: unknown }).shape);
-			const message =
-				`Unknown shape "${shape}": use I, welded-I, RHS, CHS, flat, a designation or mp.`;
+			const message = `Unknown shape "${shape}": use I, welded-I, RHS, CHS, flat, a designation or mp.`;
 			return refuse('shape', 'shape-unknown', message);
 		}
 	}

@@ -1,7 +1,8 @@
 import type { CaseFile, JointChoice, SupportChoice } from './case-file';
 
 /** The support arrangements offered as plain choices on the form. */
-export type BeamLayout = 'simple' | 'fixed-both' | 'fixed-one' | 'cantilever' | 'overhang' | 'continuous';
+export type BeamLayout =
+	'simple' | 'fixed-both' | 'fixed-one' | 'cantilever' | 'overhang' | 'continuous';
 
 /** Label and one-line explanation of each arrangement, in the order shown. */
 export const BEAM_LAYOUTS: readonly { id: BeamLayout; label: string; hint: string }[] = [
@@ -46,7 +47,11 @@ export function applyLayout(
 	if (layout === 'fixed-one') return single(['fixed', 'pin']);
 	if (layout === 'cantilever') return single(['fixed', 'free']);
 	if (layout === 'overhang') {
-		return { spans: [first, beam.spans[1] ?? 1.5], supports: ['pin', 'pin', 'free'], joints: ['continuous'] };
+		return {
+			spans: [first, beam.spans[1] ?? 1.5],
+			supports: ['pin', 'pin', 'free'],
+			joints: ['continuous']
+		};
 	}
 	const count = Math.min(5, Math.max(2, Math.round(spanCount)));
 	const spans = Array.from({ length: count }, (_, i) => beam.spans[i] ?? first);

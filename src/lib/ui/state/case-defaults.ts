@@ -31,7 +31,10 @@ export function applySettingsDefaults(c: CaseFile, settings: Settings, set: Fact
 	return {
 		...c,
 		// Top-flange loading is the cautious assumption for lateral-torsional buckling.
-		beam: { ...c.beam, restraint: { lateral: settings.defaultRestraint, loadHeight: 'top-flange' } },
+		beam: {
+			...c.beam,
+			restraint: { lateral: settings.defaultRestraint, loadHeight: 'top-flange' }
+		},
 		factors: factorsFromSet(set),
 		deflectionLimit: settings.deflectionLimit
 	};

@@ -6,7 +6,10 @@
 import type { CaseFile } from '$lib/engine/case';
 
 export type { CaseAction, CaseFile, CaseLoad, CaseRestraint } from '$lib/engine/case';
-export type { SupportKind as SupportChoice, JointKind as JointChoice } from '$lib/engine/model/types';
+export type {
+	SupportKind as SupportChoice,
+	JointKind as JointChoice
+} from '$lib/engine/model/types';
 
 /** Where the load acts over the depth (for lateral-torsional buckling). */
 export type LoadHeight = 'top-flange' | 'shear-centre' | 'bottom-flange';

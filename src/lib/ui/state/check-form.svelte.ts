@@ -64,7 +64,10 @@ export class CheckForm {
 
 	/** The text shown in the field at `path`: what was typed, else the stored value in display units. */
 	text(path: string): string {
-		return this.texts[path] ?? formatFieldValue(readPath(this.case, path), describeField(path, this.case), this.units);
+		return (
+			this.texts[path] ??
+			formatFieldValue(readPath(this.case, path), describeField(path, this.case), this.units)
+		);
 	}
 
 	/** Takes typed text for a numeric field; a valid number goes into the case in SI. */
@@ -134,7 +137,8 @@ export class CheckForm {
 		const after = totalLength(this.case.beam);
 		if (Math.abs(after - before) < 1e-12) return;
 		this.case.loads.forEach((load, i) => {
-			if (load.kind === 'point' || Math.abs(load.from) > 1e-9 || Math.abs(load.to - before) > 1e-9) return;
+			if (load.kind === 'point' || Math.abs(load.from) > 1e-9 || Math.abs(load.to - before) > 1e-9)
+				return;
 			load.to = after;
 			delete this.texts[`loads[${i}].to`];
 		});
@@ -152,7 +156,10 @@ export class CheckForm {
 	}
 
 	/** Replaces the whole case (opened, restored, shared link, demo) and runs it at once. */
-	load(c: CaseFile, options: { savedId?: string | null; texts?: Record<string, string>; units?: UnitSystem } = {}): void {
+	load(
+		c: CaseFile,
+		options: { savedId?: string | null; texts?: Record<string, string>; units?: UnitSystem } = {}
+	): void {
 		this.case = c;
 		this.#heldLength = undefined;
 		this.texts = {};

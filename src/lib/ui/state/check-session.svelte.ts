@@ -85,7 +85,8 @@ export class CheckSession {
 	async #open(url: URL, defaults: { settings: Settings; set: FactorSet }): Promise<void> {
 		const [store, tools] = await Promise.all([connectStore(), loadEngineTools()]);
 		this.tools = tools;
-		if (!store) this.message = 'This browser does not let the app store data: checks cannot be saved here.';
+		if (!store)
+			this.message = 'This browser does not let the app store data: checks cannot be saved here.';
 		const current = store ? await this.#currentNewDraft(store) : null;
 		const listed = store ? await listChecks(store) : null;
 		this.firstRun = !(listed?.ok && listed.value.length > 0);
@@ -145,7 +146,11 @@ export class CheckSession {
 	}
 
 	#blank(defaults: { settings: Settings; set: FactorSet }): void {
-		this.#show('blank', null, applySettingsDefaults(createBlankCase(), defaults.settings, defaults.set));
+		this.#show(
+			'blank',
+			null,
+			applySettingsDefaults(createBlankCase(), defaults.settings, defaults.set)
+		);
 	}
 
 	/** The worked demo, as a new unsaved check (the one in progress is set aside first). */
@@ -196,7 +201,8 @@ export class CheckSession {
 			// Only a check with a result is saved; an incomplete one stays a draft.
 			const block = findSaveBlock(this.form.problems, this.form.outcome);
 			const outcome = this.form.outcome;
-			if (block || outcome?.state !== 'report') return this.#fail(`${block?.reason ?? 'No result yet'}. It is kept as a draft`);
+			if (block || outcome?.state !== 'report')
+				return this.#fail(`${block?.reason ?? 'No result yet'}. It is kept as a draft`);
 			const input = $state.snapshot(this.form.case) as CaseFile;
 			input.title = details.title;
 			this.form.case.title = details.title;
@@ -213,7 +219,12 @@ export class CheckSession {
 				const kept = updated.value.revisions.length;
 				this.saveStatus = `Saved. ${kept} earlier version${kept === 1 ? '' : 's'} kept.`;
 			} else {
-				const saved = await saveCheck(store, { ...details, input: asStoredCase(input), result: outcome.report, engineVersion: ENGINE_VERSION });
+				const saved = await saveCheck(store, {
+					...details,
+					input: asStoredCase(input),
+					result: outcome.report,
+					engineVersion: ENGINE_VERSION
+				});
 				if (!saved.ok) return this.#fail(saved.message);
 				this.record = saved.value.record;
 				this.saveStatus = describePersistence(saved.value.persistence);

@@ -31,7 +31,14 @@ export function createDemoCase(): CaseFile {
 			// Demo chain hoist: 10.1 kN × dynamic factor 1.25.
 			{ kind: 'point', x: 2.1, value: 12.625, action: 'temporary' }
 		],
-		factors: { set: 'en1990-6.10', permanent: 1.35, imposed: 1.5, temporary: 1.5, gammaM0: 1, gammaM1: 1 },
+		factors: {
+			set: 'en1990-6.10',
+			permanent: 1.35,
+			imposed: 1.5,
+			temporary: 1.5,
+			gammaM0: 1,
+			gammaM1: 1
+		},
 		deflectionLimit: 200
 	};
 }
@@ -44,7 +51,14 @@ export function createBlankCase(): CaseFile {
 		title: '',
 		// No bearing lengths: the engine's own (cautious) defaults apply until the engineer enters them.
 		// The span and section start empty: nothing on screen that could pass for a measurement.
-		beam: { ...demo.beam, spans: [BLANK], section: { designation: '' }, sectionLoss: 0, bearing: undefined, bearingLoads: undefined },
+		beam: {
+			...demo.beam,
+			spans: [BLANK],
+			section: { designation: '' },
+			sectionLoss: 0,
+			bearing: undefined,
+			bearingLoads: undefined
+		},
 		loads: []
 	};
 }

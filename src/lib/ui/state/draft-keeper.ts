@@ -38,7 +38,11 @@ export class DraftKeeper {
 			while (store && this.#latest) {
 				const draft = this.#latest;
 				this.#latest = null;
-				await saveDraft(store, { form: draft, recordId: draft.savedId, slot: draftSlot(draft.savedId) });
+				await saveDraft(store, {
+					form: draft,
+					recordId: draft.savedId,
+					slot: draftSlot(draft.savedId)
+				});
 			}
 		} finally {
 			this.#writing = null;

@@ -20,7 +20,12 @@ export class DraftShelf {
 	async refresh(): Promise<void> {
 		const store = await connectStore();
 		const all = store ? await listDrafts(store) : null;
-		this.items = all?.ok ? all.value.filter((d) => d.slot.startsWith(ASIDE_PREFIX)).map(describeAside).sort(newestFirst) : [];
+		this.items = all?.ok
+			? all.value
+					.filter((d) => d.slot.startsWith(ASIDE_PREFIX))
+					.map(describeAside)
+					.sort(newestFirst)
+			: [];
 	}
 
 	/** Moves the current new check's draft (if any) to a slot of its own. */

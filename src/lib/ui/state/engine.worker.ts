@@ -21,8 +21,7 @@ export interface EngineRequest {
  * the request in progress when its own number could not be read.
  */
 export type EngineReply =
-	| { seq: number; result: ReturnType<typeof checkCase> }
-	| { seq: number; error: string };
+	{ seq: number; result: ReturnType<typeof checkCase> } | { seq: number; error: string };
 
 function describe(error: unknown): string {
 	return error instanceof Error ? error.message : String(error);

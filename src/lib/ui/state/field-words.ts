@@ -79,7 +79,8 @@ export function describeFieldPath(path: string): string {
 		if (b === 'joints' && typeof c === 'number') return `Joint at support ${letter(c + 1)}`;
 		if (b === 'bearing' && typeof c === 'number') return `Stiff bearing at support ${letter(c)}`;
 		if (b === 'section') {
-			if (typeof c === 'number') return `Section of span ${c + 1}${d === undefined ? '' : ` — ${SECTION[String(d)] ?? d}`}`;
+			if (typeof c === 'number')
+				return `Section of span ${c + 1}${d === undefined ? '' : ` — ${SECTION[String(d)] ?? d}`}`;
 			return c === undefined ? 'Section' : `Section — ${SECTION[String(c)] ?? c}`;
 		}
 		if (b === 'restraint' && c === 'lateral') {

@@ -49,8 +49,10 @@ export function listProblems(
 }
 
 /** The engine's input issues that belong to no single field (shown above the result). */
-export function collectGeneral(outcome: CheckOutcome | null, c: CaseFile): { path: string; message: string }[] {
+export function collectGeneral(
+	outcome: CheckOutcome | null,
+	c: CaseFile
+): { path: string; message: string }[] {
 	if (outcome?.state !== 'issues') return [];
 	return outcome.issues.filter((issue) => !isFieldPath(c, issue.path));
 }
-

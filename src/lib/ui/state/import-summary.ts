@@ -10,7 +10,8 @@ export function describeImport(result: ImportResult): string {
 	if (!result.ok) return `Backup refused, nothing changed: ${result.message}`;
 	const total = result.added + result.beside;
 	const parts = [total === 0 ? 'Nothing added' : `Added ${plural(total, 'check')}`];
-	if (result.beside > 0) parts.push(`${result.beside} kept beside an existing one with the same id`);
+	if (result.beside > 0)
+		parts.push(`${result.beside} kept beside an existing one with the same id`);
 	if (result.skipped > 0) parts.push(`${result.skipped} already here`);
 	let text = `${parts.join(', ')}.`;
 	if (result.attention > 0) {

@@ -22,6 +22,7 @@ export function findSaveBlock(
 		return { reason: `Fix ${describeFieldPath(problems[0].path)} first`, path: problems[0].path };
 	}
 	if (outcome?.state === 'error') return { reason: 'No result could be worked out', path: null };
-	if (outcome?.state !== 'report') return { reason: 'The result is still being worked out', path: null };
+	if (outcome?.state !== 'report')
+		return { reason: 'The result is still being worked out', path: null };
 	return null;
 }

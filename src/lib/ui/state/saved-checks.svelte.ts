@@ -203,7 +203,8 @@ export class SavedChecks {
 			const result = await importBackup(store, text, options);
 			this.importMessage = describeImport(result);
 		} catch {
-			this.importMessage = 'Nothing imported: the app could not load its engine. Reload the app and try again.';
+			this.importMessage =
+				'Nothing imported: the app could not load its engine. Reload the app and try again.';
 		} finally {
 			this.importing = false;
 		}

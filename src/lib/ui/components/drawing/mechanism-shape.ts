@@ -87,7 +87,8 @@ function findNullVector(rows: number[][], n: number): number[] | null {
 	let r = 0;
 	for (let col = 0; col < n && r < a.length; col++) {
 		let best = r;
-		for (let i = r + 1; i < a.length; i++) if (Math.abs(a[i][col]) > Math.abs(a[best][col])) best = i;
+		for (let i = r + 1; i < a.length; i++)
+			if (Math.abs(a[i][col]) > Math.abs(a[best][col])) best = i;
 		if (Math.abs(a[best][col]) < 1e-9) continue;
 		[a[r], a[best]] = [a[best], a[r]];
 		const p = a[r][col];

@@ -3,7 +3,10 @@
  * @example
  * createScale([0, 6], [20, 340])(3) // 180
  */
-export function createScale(domain: [number, number], range: [number, number]): (v: number) => number {
+export function createScale(
+	domain: [number, number],
+	range: [number, number]
+): (v: number) => number {
 	const [d0, d1] = domain;
 	const [r0, r1] = range;
 	const span = d1 - d0 || 1;
