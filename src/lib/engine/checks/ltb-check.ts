@@ -60,7 +60,8 @@ export function checkBeamLtb(
 		const seen = new Map<string, ReturnType<typeof evaluate>>();
 		const evaluate = (weights: number[]) => {
 			const cr = prepared.at(weights);
-			if (cr === null) return { utilisation: 0, detail: null };
+			// No moment, or one at round-off level (a load a hair from a support): no buckling.
+			if (cr === null || !Number.isFinite(cr.mcr)) return { utilisation: 0, detail: null };
 			const r = ctx.basis.computeLtbResistance({ ...m, Wy, mcr: cr.mcr, gammaM1: ctx.gammaM1 });
 			return { utilisation: cr.mMax / r.mbRd, detail: { ...r, mcr: cr.mcr, mEd: cr.mMax } };
 		};

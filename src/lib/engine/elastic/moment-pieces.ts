@@ -214,7 +214,11 @@ export function buildPieceGrid(
 			xs.add(l.a);
 			if (l.kind !== 'point' && l.b !== undefined) xs.add(l.b);
 		}
-		return [...xs].filter((s) => s >= 0 && s <= L).sort((a, b) => a - b);
+		// A break within round-off of another (a load a hair from a support) would make a piece
+		// too short to fit a cubic on: the moment is continuous, so such breaks are merged.
+		const tol = 1e-9 * L;
+		const sorted = [...xs].filter((s) => s >= 0 && s <= L).sort((a, b) => a - b);
+		return sorted.filter((s, i) => s === L || i === 0 || (s - sorted[i - 1] > tol && L - s > tol));
 	});
 	return { nodes, breakpoints };
 }
