@@ -1,6 +1,7 @@
 // The verdict the list shows comes from the app's own engine, whatever a stored report claims.
 import { describe, expect, it } from 'vitest';
-import { readVerdict, recomputeVerdict } from '../../../src/lib/ui/state/recompute-verdict';
+import { recomputeVerdict } from '../../../src/lib/ui/state/recompute-verdict';
+import { readVerdict } from '../../../src/lib/ui/state/verdict-stamp';
 import overloaded from '../../fixtures/cases/demo-overloaded.json';
 import hoist from '../../fixtures/cases/demo-hoist-on-ub.json';
 import invalid from '../../fixtures/cases/invalid-fields.json';
@@ -27,5 +28,18 @@ describe('recomputeVerdict', () => {
 	it('reads the verdict where the report keeps it', () => {
 		expect(readVerdict({ answer: { verdict: 'fail' } })).toBe('fail');
 		expect(readVerdict({ verdict: 'pass' })).toBe('pass');
+	});
+});
+
+describe('stampReport', () => {
+	it('stamps a saved check with the verdict of its own report and this engine version', async () => {
+		const { stampReport } = await import('../../../src/lib/ui/state/verdict-stamp');
+		const { ENGINE_VERSION } = await import('../../../src/lib/engine');
+		expect(stampReport({ answer: { verdict: 'fail' } })).toEqual({
+			verdict: 'fail',
+			computedBy: ENGINE_VERSION
+		});
+		expect(stampReport({ answer: { verdict: null } }).verdict).toBe('no-load');
+		expect(stampReport({ answer: { verdict: 'maybe' } }).verdict).toBe('needs-attention');
 	});
 });

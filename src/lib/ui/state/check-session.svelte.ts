@@ -20,6 +20,7 @@ import { loadDraft, moveDraft } from '$lib/storage/drafts';
 import { DraftKeeper, draftSlot, readDraft } from './draft-keeper';
 import { DraftShelf } from './draft-shelf.svelte';
 import { findSaveBlock } from './save-block';
+import { stampReport } from './verdict-stamp';
 import { ENGINE_VERSION } from './engine-version';
 import { loadEngineTools, type EngineTools } from './engine-tools';
 import { EngineRunner } from './engine-runner';
@@ -212,6 +213,7 @@ export class CheckSession {
 					...details,
 					input: asStoredCase(input),
 					result: outcome.report,
+					computed: stampReport(outcome.report),
 					engineVersion: ENGINE_VERSION
 				});
 				if (!updated.ok) return this.#fail(updated.message);
@@ -223,6 +225,7 @@ export class CheckSession {
 					...details,
 					input: asStoredCase(input),
 					result: outcome.report,
+					computed: stampReport(outcome.report),
 					engineVersion: ENGINE_VERSION
 				});
 				if (!saved.ok) return this.#fail(saved.message);
