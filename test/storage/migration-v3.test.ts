@@ -2,45 +2,25 @@
 // every record gains an empty computed-verdict slot and keeps everything else, including the
 // stored result whose verdict the list must no longer trust.
 import { describe, expect, it } from 'vitest';
-import { openDB } from 'idb';
 import fixture from '../fixtures/db/checks-v2.json';
-import { applyStoreMigrations } from '../../src/lib/storage/migrations';
 import { upgradeRecord } from '../../src/lib/storage/record-upgrade';
-import type { HingepointDBv2 } from '../../src/lib/storage/schema';
 import { findRecordProblem } from '../../src/lib/storage/validate-record';
 import {
 	getCheck,
 	listChecks,
 	loadDraft,
 	loadSettings,
-	openStore,
 	storeVerdicts,
 	DB_VERSION,
 	RECORD_SCHEMA_VERSION
 } from '../../src/lib/storage';
 import { SavedChecks } from '../../src/lib/ui/state/saved-checks.svelte';
 import { ENGINE_VERSION } from '../../src/lib/ui/state/engine-version';
-import { uniqueDbName } from './support';
+import { openUpgradedFixture } from './support';
 
-async function writeV2Fixture(name: string): Promise<void> {
-	const db = await openDB<HingepointDBv2>(name, 2, {
-		upgrade: (database, oldVersion, _newVersion, tx) =>
-			applyStoreMigrations(database as never, tx as never, oldVersion, 2)
-	});
-	const tx = db.transaction(['checks', 'drafts', 'meta'], 'readwrite');
-	for (const record of fixture.records) await tx.objectStore('checks').put(record as never);
-	for (const draft of fixture.drafts) await tx.objectStore('drafts').put(draft);
-	for (const entry of fixture.meta) await tx.objectStore('meta').put(entry);
-	await tx.done;
-	db.close();
-}
-
-async function openUpgraded(label: string) {
-	const name = uniqueDbName(label);
-	await writeV2Fixture(name);
-	const opened = await openStore(name);
-	if (!opened.ok) throw new Error(opened.message);
-	return opened.store;
+/** The frozen fixture, written at v2 and opened (so upgraded) by the current code. */
+function openUpgraded(label: string) {
+	return openUpgradedFixture(label, 2, fixture);
 }
 
 describe('v2 → v3 migration', () => {

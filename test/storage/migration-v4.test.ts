@@ -1,42 +1,23 @@
 // Database v3 → v4 on fake IndexedDB against the frozen fixture test/fixtures/db/checks-v3.json:
 // a photos store is added and nothing stored before changes, records, draft and settings alike.
 import { describe, expect, it } from 'vitest';
-import { openDB } from 'idb';
 import fixture from '../fixtures/db/checks-v3.json';
-import { applyStoreMigrations } from '../../src/lib/storage/migrations';
-import type { HingepointDBv3 } from '../../src/lib/storage/schema';
 import {
 	addPhoto,
 	listChecks,
 	listPhotos,
 	loadDraft,
 	loadSettings,
-	openStore,
 	purgeDeleted,
 	DB_VERSION
 } from '../../src/lib/storage';
-import { jpegBlob, uniqueDbName } from './support';
+import { jpegBlob, openUpgradedFixture } from './support';
 
-async function writeV3Fixture(name: string): Promise<void> {
-	const db = await openDB<HingepointDBv3>(name, 3, {
-		upgrade: (database, oldVersion, _newVersion, tx) =>
-			applyStoreMigrations(database as never, tx as never, oldVersion, 3)
-	});
-	expect(db.objectStoreNames.contains('photos' as never)).toBe(false);
-	const tx = db.transaction(['checks', 'drafts', 'meta'], 'readwrite');
-	for (const record of fixture.records) await tx.objectStore('checks').put(record as never);
-	for (const draft of fixture.drafts) await tx.objectStore('drafts').put(draft);
-	for (const entry of fixture.meta) await tx.objectStore('meta').put(entry);
-	await tx.done;
-	db.close();
-}
-
-async function openUpgraded(label: string) {
-	const name = uniqueDbName(label);
-	await writeV3Fixture(name);
-	const opened = await openStore(name);
-	if (!opened.ok) throw new Error(opened.message);
-	return opened.store;
+/** The frozen fixture, written at v3 and opened (so upgraded) by the current code. */
+function openUpgraded(label: string) {
+	return openUpgradedFixture(label, 3, fixture, (names) =>
+		expect(names.contains('photos')).toBe(false)
+	);
 }
 
 describe('v3 → v4 migration', () => {

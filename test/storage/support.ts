@@ -1,4 +1,6 @@
 import 'fake-indexeddb/auto';
+import { openDB } from 'idb';
+import { applyStoreMigrations } from '../../src/lib/storage/migrations';
 import {
 	openStore,
 	type CaseFile,
@@ -86,4 +88,39 @@ export function jpegBlob(seed = 1, size = 64): Blob {
 	bytes.set([0xff, 0xd8, 0xff, 0xe0]);
 	for (let i = 0; i < size; i++) bytes[4 + i] = (seed * 31 + i * 7) & 0xff;
 	return new Blob([bytes], { type: 'image/jpeg' });
+}
+
+/** A frozen database fixture: what an older version stored, store by store. */
+export interface FrozenDb {
+	records: unknown[];
+	drafts: unknown[];
+	meta: unknown[];
+}
+
+/**
+ * Writes a frozen fixture into a new database built by the migrations up to `version`, then
+ * opens it with the current code, which upgrades it. `inspect` sees the old database first.
+ */
+export async function openUpgradedFixture(
+	label: string,
+	version: number,
+	fixture: FrozenDb,
+	inspect?: (storeNames: DOMStringList) => void
+): Promise<CheckStore> {
+	const name = uniqueDbName(label);
+	const db = await openDB(name, version, {
+		upgrade: (database, oldVersion, _newVersion, tx) =>
+			applyStoreMigrations(database as never, tx as never, oldVersion, version)
+	});
+	inspect?.(db.objectStoreNames);
+	const tx = db.transaction(['checks', 'drafts', 'meta'] as never, 'readwrite');
+	const put = (store: string, value: unknown) => tx.objectStore(store as never).put(value as never);
+	for (const record of fixture.records) await put('checks', record);
+	for (const draft of fixture.drafts) await put('drafts', draft);
+	for (const entry of fixture.meta) await put('meta', entry);
+	await tx.done;
+	db.close();
+	const opened = await openStore(name);
+	if (!opened.ok) throw new Error(opened.message);
+	return opened.store;
 }
