@@ -1,15 +1,20 @@
 /**
- * Types every design basis shares: factor settings and combinations, the scope decision, and the
- * inputs and results of the resistances a basis supplies. Basis-neutral code imports these from
- * here, never from a basis folder; each basis implements them (en1993/ today).
+ * Types every design basis shares: factor settings and combinations, resistance factors, the
+ * scope decision, and the inputs and readings of the resistances a basis supplies. Basis-neutral
+ * code imports these from here, never from a basis folder; each basis implements them (en1993/,
+ * aisc360/). Types only one basis uses live in that basis's folder.
  */
 import type { SectionShape } from '../section/types';
 import type { AnalysisRoute } from './types';
 
 /** Name of a factor set as written in a case file. */
-export type FactorSetName = 'en1990-6.10' | 'en1990-6.10ab' | 'custom';
+export type FactorSetName = 'en1990-6.10' | 'en1990-6.10ab' | 'asce7-lrfd' | 'asce7-asd' | 'custom';
 
-/** Factor settings as entered; missing values take the recommended ones. */
+/**
+ * Factor settings as entered; missing values take the recommended ones of the basis. The names
+ * are the Eurocode ones; the AISC bases read γG,sup as the dead-load factor, γQ as the live-load
+ * factor and γT as the factor on the proposed temporary load (see aisc360/combinations.ts).
+ */
 export interface FactorSettings {
 	set: FactorSetName;
 	/** γG,sup, unfavourable permanent action (recommended 1.35). */
@@ -26,9 +31,24 @@ export interface FactorSettings {
 	psi0?: number;
 	/** ψ0 for the temporary action when it accompanies (recommended 1.0, construction loads). */
 	psi0T?: number;
-	/** Resistance factors γM0 and γM1 (recommended 1.00 both). */
+	/** Resistance factors γM0 and γM1 (recommended 1.00 both); Eurocode basis only. */
 	gammaM0?: number;
 	gammaM1?: number;
+	/** Factor on dead load in the dead-load-only combination (ASCE 7-22: 1.4 LRFD, 1.0 ASD). */
+	gammaGAlone?: number;
+}
+
+/**
+ * Multipliers that turn nominal resistances into design ones, so basis-neutral code never names
+ * a code's factor: the Eurocode basis uses 1/γM0 and 1/γM1, AISC LRFD φ (φb = 0.90) and AISC ASD
+ * 1/Ω (1/Ωb = 1/1.67). A basis may apply its own factor per check where its code gives one (AISC
+ * φv, and the φ of each limit state of J10); these two are what the neutral code applies itself.
+ */
+export interface ResistanceMultipliers {
+	/** On cross-section bending resistance and the plastic moment at hinges. */
+	section: number;
+	/** On member buckling resistance (lateral-torsional buckling) and the web under forces. */
+	member: number;
 }
 
 /** One combination expression with its factors resolved. */
@@ -42,25 +62,38 @@ export interface Combination {
 	gammaImposed: number;
 	/** Factor on the temporary action. */
 	gammaTemporary: number;
+	/**
+	 * The permanent load takes one factor over the whole beam (no favourable value): ASCE 7
+	 * gravity combinations, where 0.9D belongs to wind and seismic combinations only.
+	 */
+	permanentSingle?: boolean;
+	/** Word for existing imposed load in arrangement names (default `imposed`, AISC `live`). */
+	imposedWord?: string;
 }
 
-/** Section class of EN 1993-1-1 Table 5.2 for major-axis bending. */
+/**
+ * Section rank for major-axis bending, basis-neutral: 1 may form plastic hinges, 2 reaches the
+ * plastic moment without rotation capacity, 3 reaches first yield (or a resistance between), 4 is
+ * slender (outside this tool). The Eurocode basis uses the classes of EN 1993-1-1 Table 5.2; AISC
+ * maps compact to λpd (Appendix 1) → 1, compact → 2, noncompact → 3, slender → 4. Each basis names
+ * the rank in its own words ({@link BasisWords.sectionRank}).
+ */
 export type SectionClass = 1 | 2 | 3 | 4;
 
 /** Facts the gate decides on. */
 export interface ScopeInput {
 	sectionClass: SectionClass;
-	/** Steel with the ductility of EN 1993-1-1 3.2.2; false for cast or wrought iron. */
+	/** Ductile steel; false for cast or wrought iron. */
 	ductile: boolean;
 	/** False while an unknown or historic grade has not been confirmed by the user. */
 	gradeConfirmed: boolean;
-	/** hw/tw > 72ε/η: shear buckling to EN 1993-1-5 would be needed. */
+	/** The web is too slender for the shear resistance this basis implements. */
 	needsShearBucklingCheck: boolean;
 	/** The plastic collapse solution was verified by statics (only read for Class 1). */
 	collapseCertified: boolean;
 	/**
 	 * Every hinge of the mechanism sits at a lateral restraint and the segments next to it are
-	 * within the stable length (6.3.5), or the flange is restrained throughout.
+	 * within the basis's stable length, or the flange is restrained throughout.
 	 */
 	hingesRestrained: boolean;
 	/** Why the hinges are not restrained enough, for the message. */
@@ -88,12 +121,12 @@ export interface ShearAreaInput {
 	tf: number;
 	/** Root radius, mm (0 for welded or hollow). */
 	r: number;
-	/** η of EN 1993-1-5 5.1(2); 1.0 is the conservative default. */
+	/** η of EN 1993-1-5 5.1(2); 1.0 is the conservative default (Eurocode basis only). */
 	eta: number;
 }
 
-/** Inputs of {@link computeReducedMomentResistance}; mm, mm³, N/mm². */
-export interface ReducedMomentInput {
+/** Inputs of a basis's bending resistance with shear: the member, ρ and the multipliers. */
+export interface MomentWithShearInput {
 	/** Plastic modulus about the bending axis, mm³. */
 	Wpl: number;
 	/** Web area hw·tw (all webs), mm². */
@@ -101,65 +134,134 @@ export interface ReducedMomentInput {
 	/** Web thickness (sum over webs), mm. */
 	tw: number;
 	fy: number;
-	gammaM0: number;
+	/** Shear reduction of the basis ({@link DesignBasis.computeShearReduction}). */
 	rho: number;
+	resistance: ResistanceMultipliers;
 }
 
-/** χLT and Mb,Rd for one segment. */
-export interface LtbResistance {
-	lambdaBar: number;
-	chiLT: number;
-	/** Mb,Rd = χLT·Wy·fy/γM1, N·mm. */
+/** Absolute moments of one laterally unbraced segment, N·mm. */
+export interface SegmentMomentReading {
+	/** Largest |M| in the segment. */
+	max: number;
+	/** |M| at the quarter point, the centre and the three-quarter point. */
+	quarter: number;
+	centre: number;
+	threeQuarter: number;
+}
+
+/** What a basis reads for one segment's buckling resistance, and how it says so. */
+export interface LtbReading {
+	/** Design buckling resistance moment of the segment, N·mm. */
 	mbRd: number;
+	/** Clause the resistance follows. */
+	clause: string;
+	/** One sentence on the method (what replaced what, which curve or Cb). */
+	note: string;
+	/** Intermediate values for the row (dimensionless or internal units, named by the basis). */
+	values: Record<string, number>;
 }
 
-/** Load introduction type of EN 1993-1-5 Figure 6.1. */
-export type WebLoadType = 'a' | 'b' | 'c';
+/** Where a force stands on the web, in neutral words. */
+export type WebPlace = 'span' | 'through' | 'end';
 
-/** Inputs of {@link computeWebResistance}; mm and N/mm². */
-export interface WebResistanceInput {
-	type: WebLoadType;
-	/** Clear web depth between flanges hw, mm. */
+/** Inputs of a basis's web resistance where a force stands; mm and N/mm². */
+export interface WebForceInput {
+	/** Overall depth, clear web depth between flanges, web thickness, mm. */
+	h: number;
 	hw: number;
 	tw: number;
-	/** Flange width and thickness, mm. */
+	/** Flange width and thickness, root radius, mm. */
 	bf: number;
 	tf: number;
+	r: number;
 	/** Yield strength of web and flange, N/mm². */
 	fyw: number;
 	fyf: number;
 	E: number;
-	/** Stiff bearing length ss, mm (taken no longer than hw, EN 1993-1-5 6.3). */
+	/** Stiff bearing length, mm. */
 	ss: number;
-	/** Type (c): clear distance from the end of the stiff bearing to the end of the member, mm. */
-	c?: number;
-	gammaM1: number;
-}
-
-/** Where a force stands, for {@link computeWebForceResistance}; mm and N/mm². */
-export interface WebForceInput extends Omit<WebResistanceInput, 'type' | 'c'> {
 	/** The force passes through the web to a support under the other flange. */
 	throughWeb: boolean;
 	/** Clear distance from the end of the stiff bearing to the nearest unstiffened end, mm. */
 	endDistance: number;
+	resistance: ResistanceMultipliers;
+	/**
+	 * Longest laterally unbraced length of either flange at the force, mm; 0 when both flanges
+	 * are held against relative lateral movement there (read by AISC J10.4 only).
+	 */
+	unbracedLength: number;
+	/** The loaded flange is in compression at the force (top flange under sagging …). */
+	loadedFlangeCompressed: boolean;
 }
 
-/** Intermediate values and the resistance, N and mm. */
-export interface WebResistance {
-	type: WebLoadType;
-	/** Clear distance to the end used by type (c), mm; 0 for (a) and (b). */
-	c: number;
-	kF: number;
-	/** Fcr = 0.9·kF·E·tw³/hw, N (eq. 6.5). */
-	fCr: number;
-	m1: number;
-	m2: number;
-	/** Effective loaded length ly, mm (6.10–6.12). */
-	ly: number;
-	lambdaF: number;
-	chiF: number;
-	/** Leff = χF·ly, mm (6.2). */
-	lEff: number;
-	/** FRd = fyw·Leff·tw/γM1, N (6.1). */
+/** A basis's web resistance at one force and the words of its row. */
+export interface WebReading {
+	/** Design resistance to the force, N. */
 	fRd: number;
+	/** Short name of what was checked, for the label, e.g. `type a` or `web local yielding`. */
+	kind: string;
+	place: WebPlace;
+	clause: string;
+	note: string;
+	/** Intermediate values for the row, internal units (the stiff bearing length as `ss`). */
+	values: Record<string, number>;
+	/**
+	 * The basis combines the force with bending at the same section where the loaded flange is
+	 * compressed (EN 1993-1-5 7.2(1)); with its clause and sentence when it governs.
+	 */
+	bendingInteraction: { clause: string; note: string } | null;
+}
+
+/** Clause strings and words of a basis for the rows and the report (data, so the report can read them). */
+export interface BasisWords {
+	/** Short name for titles, e.g. `Eurocode` or `AISC 360-22 LRFD`. */
+	short: string;
+	clauses: {
+		plasticBending: string;
+		/** Elastic analysis with the plastic (or compact) section resistance. */
+		elasticPlasticSection: string;
+		/** Elastic analysis with the elastic (or noncompact) section resistance. */
+		elasticFirstYield: string;
+		shear: string;
+		/** Bending with shear; null where the basis has no such interaction for these shapes. */
+		interaction: string | null;
+		ltb: string;
+	};
+	labels: {
+		plasticBending: string;
+		elasticPlasticSection: string;
+		elasticFirstYield: string;
+	};
+	/** Sentence added to the plastic bending row when hinge resistances were reduced for shear. */
+	hingeShearReduction: string;
+	/** The stable length next to a hinge, in the basis's own term. */
+	stableLength: string;
+	/** Names of the row values as this basis writes them (vEd → `Vu`, mbRd → `φbMn` …). */
+	notation: Record<string, string>;
+	/** Name of each section rank ({@link SectionClass}). */
+	sectionRank: Record<SectionClass, string>;
+	/** The factor sentence of the report's assumptions, from the resolved factor table. */
+	describeFactors(table: Record<string, number>, set: string): string;
+	/** The elastic modulus sentence of the assumptions (with the value in words). */
+	modulus: string;
+	/** Assumption on what plastic hinges need on this basis. */
+	plasticAssumption: string;
+	/** Default deflection limits span/n: temporary load and all loads. */
+	deflectionLimits: { temporary: number; total: number };
+	/** Name of the deflection limit source (common practice), for the row clause. */
+	deflectionSource: string;
+}
+
+/** The words of a basis a report needs, as plain data (it travels with the design outcome). */
+export interface ReportWording {
+	basisId: string;
+	short: string;
+	/** Names of the row values ({@link BasisWords.notation}). */
+	notation: Record<string, string>;
+	/** Name of each section rank, keyed '1' … '4'. */
+	sectionRank: Record<string, string>;
+	/** The factor sentence of the assumptions. */
+	factors: string;
+	modulus: string;
+	plasticAssumption: string;
 }

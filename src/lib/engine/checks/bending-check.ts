@@ -15,6 +15,7 @@ import {
 } from '../elastic/moment-pieces';
 import { splitLoadsBySpan } from '../elastic/element-loads';
 import type { Load } from '../model/types';
+import type { BasisWords } from './basis-types';
 import type { CheckContext } from './context';
 import { applyArrangement } from './factor-loads';
 import type { LoadArrangement } from './load-arrangements';
@@ -49,13 +50,13 @@ export function describePlasticBending(ctx: CheckContext, g: PlasticArrangement)
 		values[`vEd${i + 1}`] = r.vEd;
 	});
 	const n = g.reductions.length;
-	const reduced =
-		n > 0 ? ` Hinge resistance reduced for shear (EN 1993-1-1 6.2.8) at ${n} hinge(s).` : '';
+	const words = ctx.basis.words;
+	const reduced = n > 0 ? ` ${words.hingeShearReduction} at ${n} hinge(s).` : '';
 	const mechanism = 'mechanism' in g.result ? `Mechanism: ${g.result.mechanism.name}.` : '';
 	return {
 		id: 'bending',
-		label: 'Bending: plastic collapse',
-		clause: 'EN 1993-1-1 5.4.3, 6.2.5',
+		label: words.labels.plasticBending,
+		clause: words.clauses.plasticBending,
 		level: 'governing',
 		utilisation,
 		utilisationExisting: inverse(d.fixed),
@@ -108,7 +109,7 @@ export function checkElasticBending(ctx: CheckContext, o: ElasticBendingOptions)
 		if (!worst || lower) worst = { arr, u, factor, x: f?.x };
 		worst.u = Math.max(worst.u, u);
 	}
-	return describeElasticBending(worst, existing, o.elastic);
+	return describeElasticBending(worst, existing, o.elastic, ctx.basis.words);
 }
 
 /**
@@ -145,24 +146,20 @@ export function checkElasticBendingByReanalysis(
 		if (!worst || lower) worst = { arr, u, factor, x };
 		worst.u = Math.max(worst.u, u);
 	}
-	return describeElasticBending(worst, existing, o.elastic);
+	return describeElasticBending(worst, existing, o.elastic, ctx.basis.words);
 }
 
 function describeElasticBending(
 	worst: Worst | null,
 	existing: number,
-	elastic: boolean
+	elastic: boolean,
+	words: BasisWords
 ): CheckResult {
-	const o = { elastic };
 	if (!worst) throw new Error('invariant: at least one load arrangement');
 	return {
 		id: 'bending',
-		label: o.elastic
-			? 'Bending: elastic resistance (first yield)'
-			: 'Bending: plastic resistance at the first hinge',
-		clause: o.elastic
-			? 'EN 1993-1-1 6.2.5 (Wel·fy)'
-			: 'EN 1993-1-1 6.2.5 (Wpl·fy), elastic analysis',
+		label: elastic ? words.labels.elasticFirstYield : words.labels.elasticPlasticSection,
+		clause: elastic ? words.clauses.elasticFirstYield : words.clauses.elasticPlasticSection,
 		level: 'governing',
 		utilisation: worst.u,
 		utilisationExisting: existing,

@@ -5,6 +5,7 @@
 import { shearAt } from '../collapse/index';
 import type { Side } from '../elastic/index';
 import type { BeamLine, Load } from '../model/types';
+import type { ResistanceMultipliers } from './basis-types';
 import type { DesignBasis } from './design-basis';
 import type { LoadArrangement } from './load-arrangements';
 import type { LoadEffects } from './load-effects';
@@ -23,8 +24,8 @@ export interface CheckContext {
 	loads: Load[];
 	arrangements: LoadArrangement[];
 	effects: LoadEffects;
-	gammaM0: number;
-	gammaM1: number;
+	/** Nominal to design resistance (the basis's 1/γM, φ or 1/Ω). */
+	resistance: ResistanceMultipliers;
 	eta: number;
 	route: AnalysisRoute;
 	/** Collapse per arrangement on the plastic route; empty otherwise. */

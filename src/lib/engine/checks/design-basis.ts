@@ -1,19 +1,25 @@
 /**
- * A design basis: the factor sets, resistances and member checks of one code. The collapse and
- * elastic solvers know nothing of codes; everything code-specific sits behind this interface so
- * a second basis (e.g. AISC 360 LRFD with ASCE 7 combinations) can be added beside `en1993`.
+ * A design basis: the factor sets, resistances, member checks and words of one code. The collapse
+ * and elastic solvers know nothing of codes; everything code-specific sits behind this interface:
+ * `en1993/` (EN 1990 / EN 1993-1-1 / EN 1993-1-5) and `aisc360/` (AISC 360-22 LRFD and ASD with
+ * ASCE 7-22 combinations) implement it. Resistances come back as design values: nominal times the
+ * basis's {@link ResistanceMultipliers} (1/γM, φ or 1/Ω), so neutral code never names a factor.
  */
 import type {
+	BasisWords,
 	Combination,
-	LtbResistance,
-	ReducedMomentInput,
+	LtbReading,
+	MomentWithShearInput,
+	ResistanceMultipliers,
 	ScopeDecision,
 	ScopeInput,
 	SectionClass,
+	SegmentMomentReading,
 	ShearAreaInput,
 	WebForceInput,
-	WebResistance
+	WebReading
 } from './basis-types';
+import type { SpanMember } from './member';
 import type { ResolvedSection, SectionShape } from '../section/types';
 
 /** Factor settings after defaults, as a basis reports them. */
@@ -21,9 +27,8 @@ export interface BasisFactors {
 	/** Name of the factor set used, recorded in the result. */
 	set: string;
 	combinations: Combination[];
-	/** Resistance factors for cross-section and member checks. */
-	gammaM0: number;
-	gammaM1: number;
+	/** Multipliers from nominal to design resistance for the checks the neutral code runs. */
+	resistance: ResistanceMultipliers;
 	/** Every factor by name, for the long summary. */
 	table: Record<string, number>;
 }
@@ -33,48 +38,51 @@ export interface DesignBasis<Settings> {
 	id: string;
 	/** Plain name, e.g. `EN 1990 / EN 1993-1-1 (recommended values)`. */
 	name: string;
+	/** Elastic and shear moduli of steel on this basis, N/mm². */
+	E: number;
+	G: number;
+	words: BasisWords;
 	resolveFactors(settings: Settings, options: { hasImposed: boolean }): BasisFactors;
 	decideRoute(input: ScopeInput): ScopeDecision;
-	/** Section class for major-axis bending (null when it cannot be found, e.g. a known Mp). */
+	/** Section rank for major-axis bending (null when it cannot be found, e.g. a known Mp). */
 	classifySection(
 		section: ResolvedSection,
 		fy: number
 	): { class: SectionClass | null; note?: string };
-	/** Bending resistance for the route, N·mm. */
-	computeBendingResistance(o: {
-		Wpl: number;
-		Wel: number;
-		fy: number;
-		gammaM0: number;
-		elastic: boolean;
-	}): number;
+	/** Design bending resistance of the section for the route, N·mm (no member buckling). */
+	computeBendingResistance(
+		o: SpanMember & { resistance: ResistanceMultipliers; elastic: boolean }
+	): number;
 	computeShearArea(input: ShearAreaInput): number | null;
-	computeShearResistance(o: { Av: number; fy: number; gammaM0: number }): number;
+	/** Design shear resistance of a span with shear area Av, N. */
+	computeShearResistance(o: SpanMember & { Av: number; resistance: ResistanceMultipliers }): number;
 	checkWebSlenderness(o: { hw: number; tw: number; fy: number; eta: number }): {
 		ratio: number;
 		limit: number;
 		needsShearBucklingCheck: boolean;
 	};
+	/** ρ for bending with shear (0: no reduction), from the design shear and resistance. */
 	computeShearReduction(o: { vEd: number; vplRd: number }): number;
-	computeReducedMomentResistance(o: ReducedMomentInput): number;
-	computeLtbResistance(o: {
-		shape: SectionShape;
-		h: number;
-		b: number;
-		Wy: number;
-		fy: number;
-		mcr: number;
-		gammaM1: number;
-	}): LtbResistance & {
-		/** Clause used for χLT. */
-		method: string;
-		curve: string;
-		/** χLT by the general method as well, for comparison (equal when it is the one used). */
-		chiGeneral: number;
-	};
-	/** Web under a transverse force, its load type chosen from where the force stands. */
-	computeWebResistance(o: WebForceInput): WebResistance;
+	/** Design bending resistance reduced for shear by ρ, N·mm. */
+	computeReducedMomentResistance(o: MomentWithShearInput): number;
+	/** Buckling resistance of one laterally unbraced segment. */
+	computeLtbResistance(
+		o: SpanMember & {
+			/** Section modulus the route uses (plastic or elastic), mm³. */
+			Wy: number;
+			/** Elastic critical moment of the segment for its moment diagram and load height, N·mm. */
+			mcr: number;
+			/** Unbraced length, mm. */
+			length: number;
+			moments: SegmentMomentReading;
+			resistance: ResistanceMultipliers;
+		}
+	): LtbReading;
+	/** Web under a transverse force, from where the force stands. */
+	computeWebResistance(o: WebForceInput): WebReading;
+	/** Longest unbraced segment next to a plastic hinge, mm; null when the rule does not apply. */
 	computeStableLength(o: {
+		shape: SectionShape;
 		fy: number;
 		iz: number;
 		h: number;

@@ -1,8 +1,9 @@
 /**
- * Is the lateral restraint enough for plastic hinges (EN 1993-1-1 6.3.5, from memory)? Each
- * hinge needs a restraint within h/2 (6.3.5.2), and the segments next to it must be no longer
- * than the stable length of 6.3.5.3. A segment with loads inside is taken with ψ = 1, the
- * shortest stable length.
+ * Is the lateral restraint enough for plastic hinges? Each hinge needs a restraint within h/2
+ * (EN 1993-1-1 6.3.5.2, from memory; kept on every basis as the cautious reading of "braced at
+ * the hinge"), and the segments next to it must be no longer than the basis's stable length
+ * (EN 1993-1-1 6.3.5.3; AISC 360-22 Appendix 1 Lpd). A segment with loads inside is taken with
+ * ψ = 1, the shortest stable length.
  */
 import { momentAt, type Hinge, type CollapseDiagram } from '../collapse/index';
 import { mmToM } from '../units';
@@ -45,10 +46,12 @@ export function checkHingeRestraint(o: HingeRestraintInput): { ok: boolean; reas
 						momentAt(o.diagram, s.from, 'right'),
 						momentAt(o.diagram, s.to, 'left')
 					);
-			const stable = o.basis.computeStableLength({ fy: m.fy, iz: m.iz, h: m.h, tf: m.tf, psi });
+			const { shape, fy, iz, h, tf } = m;
+			const stable = o.basis.computeStableLength({ shape, fy, iz, h, tf, psi });
 			if (stable === null || s.to - s.from > stable) {
 				const [a, b] = [mmToM(s.from).toFixed(2), mmToM(s.to).toFixed(2)];
-				const reason = `the segment from ${a} to ${b} m next to a hinge exceeds the stable length`;
+				const limit = o.basis.words.stableLength;
+				const reason = `the segment from ${a} to ${b} m next to a hinge exceeds ${limit}`;
 				return { ok: false, reason };
 			}
 		}

@@ -7,7 +7,7 @@ import type { SteelGrade } from '../material/types';
 import type { BeamLine, CapacitySegment, Load } from '../model/types';
 import type { ResolvedSection } from '../section/types';
 import type { BasisFactors } from './design-basis';
-import type { FactorSettings } from './basis-types';
+import type { FactorSettings, ReportWording } from './basis-types';
 import type { SectionClass } from './basis-types';
 import type { HingeReduction } from './plastic-bending';
 import type { LoadArrangement } from './load-arrangements';
@@ -73,6 +73,8 @@ export interface CharacteristicEffects {
 /** Everything the checks found. */
 export interface DesignCheckOutcome {
 	basis: string;
+	/** The basis's words for the report (notation, section ranks, factor sentence). */
+	wording: ReportWording;
 	factors: BasisFactors;
 	/** Number of load arrangements tried. */
 	arrangementCount: number;
@@ -82,7 +84,7 @@ export interface DesignCheckOutcome {
 	collapse: CollapseSummary | null;
 	/** Elastic design moments and their limits, on the elastic routes; null otherwise. */
 	designMoments?: DesignMoments | null;
-	/** Design plastic moment resistance per span, Mp/γM0, N·mm. */
+	/** Design plastic moment resistance per span, Mp times the basis's section multiplier, N·mm. */
 	mpRd: number[];
 	/** Unfactored elastic effects; null when the check stopped before any analysis. */
 	effects: CharacteristicEffects | null;

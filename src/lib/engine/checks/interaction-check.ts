@@ -13,7 +13,8 @@ export function checkBeamInteraction(
 	ctx: CheckContext,
 	o: { vRd: (number | null)[]; elastic: boolean }
 ): CheckResult | null {
-	if (o.vRd.every((v) => v === null)) return null;
+	const clause = ctx.basis.words.clauses.interaction;
+	if (clause === null || o.vRd.every((v) => v === null)) return null;
 	const points = listShearPoints(ctx);
 	const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
 		let best = { utilisation: 0, mEd: 0, vEd: 0, rho: 0, mvRd: 0, x: 0 };
@@ -27,13 +28,13 @@ export function checkBeamInteraction(
 			const vEd = Math.abs(f.V + t * v.V);
 			const rho = ctx.basis.computeShearReduction({ vEd, vplRd });
 			const mvRd = o.elastic
-				? ((1 - rho) * m.Wel * m.fy) / ctx.gammaM0
+				? (1 - rho) * m.Wel * m.fy * ctx.resistance.section
 				: ctx.basis.computeReducedMomentResistance({
 						Wpl: m.Wpl,
 						Aw: m.hw * m.tw,
 						tw: m.tw,
 						fy: m.fy,
-						gammaM0: ctx.gammaM0,
+						resistance: ctx.resistance,
 						rho
 					});
 			const u = mvRd > 0 ? mEd / mvRd : mEd > 0 ? Number.MAX_VALUE : 0;
@@ -45,7 +46,7 @@ export function checkBeamInteraction(
 	return {
 		id: 'interaction',
 		label: 'Bending with shear',
-		clause: 'EN 1993-1-1 6.2.8',
+		clause,
 		level: 'governing',
 		utilisation: worst.utilisation,
 		utilisationExisting: worst.utilisationExisting,

@@ -5,7 +5,6 @@
  * outside scope (the fork-end model does not hold there).
  */
 import type { Load } from '../model/types';
-import { E_STEEL, G_STEEL } from '../units';
 import type { CheckContext } from './context';
 import { prepareCriticalMoment } from './mcr';
 import { spanOf } from './plastic-bending';
@@ -51,18 +50,29 @@ export function checkBeamLtb(
 				momentEnd: g.at(seg.to, 'left').M,
 				loads: clipLoads(g.loads, seg, 1)
 			})),
-			EIz: E_STEEL * m.Iz,
-			GIt: G_STEEL * m.It,
-			EIw: E_STEEL * m.Iw,
+			EIz: ctx.basis.E * m.Iz,
+			GIt: ctx.basis.G * m.It,
+			EIw: ctx.basis.E * m.Iw,
 			zg
 		});
 		// The row depends only on the weights: arrangements and trial multipliers repeat them.
 		const seen = new Map<string, ReturnType<typeof evaluate>>();
+		// Each group's moment at the quarter points, for bases that read them (AISC Cb, F1-1).
+		const quarters = [0.25, 0.5, 0.75].map((f) =>
+			groups.map((g) => g.at(seg.from + f * (seg.to - seg.from), 'right').M)
+		);
 		const evaluate = (weights: number[]) => {
 			const cr = prepared.at(weights);
 			// No moment, or one at round-off level (a load a hair from a support): no buckling.
 			if (cr === null || !Number.isFinite(cr.mcr)) return { utilisation: 0, detail: null };
-			const r = ctx.basis.computeLtbResistance({ ...m, Wy, mcr: cr.mcr, gammaM1: ctx.gammaM1 });
+			const r = ctx.basis.computeLtbResistance({
+				...m,
+				Wy,
+				mcr: cr.mcr,
+				length: seg.to - seg.from,
+				moments: readQuarterMoments(quarters, weights, cr.mMax),
+				resistance: ctx.resistance
+			});
 			return { utilisation: cr.mMax / r.mbRd, detail: { ...r, mcr: cr.mcr, mEd: cr.mMax } };
 		};
 		const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
@@ -76,7 +86,7 @@ export function checkBeamLtb(
 		checks.push({
 			id: 'ltb',
 			label: `Lateral-torsional buckling, segment ${index + 1}`,
-			clause: d?.method ?? 'EN 1993-1-1 6.3.2',
+			clause: d?.clause ?? ctx.basis.words.clauses.ltb,
 			level: 'governing',
 			utilisation: worst.utilisation,
 			utilisationExisting: worst.utilisationExisting,
@@ -86,9 +96,7 @@ export function checkBeamLtb(
 				? {
 						mEd: d.mEd,
 						mcr: d.mcr,
-						lambdaLT: d.lambdaBar,
-						chiLT: d.chiLT,
-						chiLTGeneral: d.chiGeneral,
+						...d.values,
 						mbRd: d.mbRd,
 						from: seg.from,
 						to: seg.to
@@ -96,12 +104,16 @@ export function checkBeamLtb(
 				: { from: seg.from, to: seg.to },
 			x: seg.from,
 			arrangement: worst.arrangement.name,
-			note: d
-				? `χLT by ${d.method}, curve ${d.curve}; Mcr by the energy method for this segment.`
-				: 'No moment in this segment.'
+			note: d ? d.note : 'No moment in this segment.'
 		});
 	});
 	return { checks, outOfScope };
+}
+
+/** |M| at a segment's quarter points for the group weights, with its largest |M|, N·mm. */
+function readQuarterMoments(quarters: number[][], weights: number[], max: number) {
+	const at = (k: number) => Math.abs(quarters[k].reduce((s, m, i) => s + m * weights[i], 0));
+	return { max, quarter: at(0), centre: at(1), threeQuarter: at(2) };
 }
 
 /** Loads inside a segment, in its own coordinate, scaled by a factor. */

@@ -11,6 +11,7 @@
 import { shearAt, solveCollapse, type CollapseResult } from '../collapse/index';
 import type { BeamLine, CapacitySegment, Load } from '../model/types';
 import { reduceCapacity } from './capacity';
+import type { ResistanceMultipliers } from './basis-types';
 import type { DesignBasis } from './design-basis';
 import type { LoadArrangement } from './load-arrangements';
 import type { LoadEffects } from './load-effects';
@@ -53,7 +54,7 @@ export interface PlasticArrangementInput {
 	released: LoadEffects;
 	/** Plastic shear resistance per span, N (null where unknown). */
 	vplRd: (number | null)[];
-	gammaM0: number;
+	resistance: ResistanceMultipliers;
 }
 
 /** Solves one arrangement with the shear reduction at its fixed point. */
@@ -158,7 +159,7 @@ function findReductions(
 			Aw: m.hw * m.tw,
 			tw: m.tw,
 			fy: m.fy,
-			gammaM0: o.gammaM0,
+			resistance: o.resistance,
 			rho
 		});
 		out.push({ x: hinge.x, vEd, vplRd, rho, myVRd });

@@ -47,7 +47,7 @@ export function solveCollapseForInformation(
 	return summariseCollapse(solveArrangement(ctx, o.arrangement, o.vRd));
 }
 
-/** One arrangement's collapse with Mp,Rd = Mp/γM0 and the shear reduction at its hinges. */
+/** One arrangement's collapse with the design Mp (Mp × the section multiplier) and the shear reduction at its hinges. */
 function solveArrangement(
 	ctx: CheckContext,
 	arrangement: LoadArrangement,
@@ -55,7 +55,7 @@ function solveArrangement(
 ): PlasticArrangement {
 	const capacity = buildCapacity(
 		ctx.beam.spans,
-		ctx.members.map((m) => m.mp / ctx.gammaM0)
+		ctx.members.map((m) => m.mp * ctx.resistance.section)
 	);
 	const d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement });
 	return solvePlasticArrangement({
@@ -70,7 +70,7 @@ function solveArrangement(
 		effects: ctx.effects,
 		released: ctx.released,
 		vplRd: vRd,
-		gammaM0: ctx.gammaM0
+		resistance: ctx.resistance
 	});
 }
 

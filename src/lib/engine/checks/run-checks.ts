@@ -4,13 +4,12 @@
  * lateral-torsional buckling, web bearing and deflection.
  */
 import type { ElasticResult } from '../elastic/index';
-import { E_STEEL } from '../units';
 import { checkElasticBending } from './bending-check';
 import type { CheckContext } from './context';
-import { DEFAULT_DEFLECTION_LIMIT } from './deflection';
 import { summariseCharacteristicEffects } from './characteristic-effects';
 import { checkBeamDeflections } from './deflection-check';
 import { sampleDesignMoments, type DesignMoments } from './design-moments';
+import { writeReportWording } from './basis-wording';
 import type { DesignBasis } from './design-basis';
 import { releaseRedundants } from './determinate';
 import type { FactorSettings } from './basis-types';
@@ -76,8 +75,9 @@ export function runDesignChecks(
 		hollow: members.some((m) => m.propsKnown && m.shape !== 'I' && m.shape !== 'welded-I'),
 		bearingGiven: input.bearing !== null
 	});
-	const mpRd = members.map((m) => m.mp / factors.gammaM0);
-	const base = { basis: basis.name, factors, sectionClass, mpRd, ...notes };
+	const mpRd = members.map((m) => m.mp * factors.resistance.section);
+	const wording = writeReportWording(basis, factors);
+	const base = { basis: basis.name, wording, factors, sectionClass, mpRd, ...notes };
 	const early = basis.decideRoute(scopeBase);
 	if (early.route === 'outside-scope') {
 		const verdict = decideVerdict({ scope: early, checks: [], loadFactor: null });
@@ -96,7 +96,7 @@ export function runDesignChecks(
 		imposedSpans
 	});
 	const allKnown = members.every((m) => m.propsKnown);
-	const EI = members.map((m) => (allKnown ? E_STEEL * m.Iy : 1));
+	const EI = members.map((m) => (allKnown ? basis.E * m.Iy : 1));
 	// Forces on the released beam do not depend on stiffness: unit EI.
 	const unit = beam.spans.map(() => 1);
 	const released = analyseLoadGroups({
@@ -113,8 +113,7 @@ export function runDesignChecks(
 		loads: input.loads,
 		arrangements,
 		effects: analyseLoadGroups({ beam, EI, loads: input.loads, memo: options.memo }),
-		gammaM0: factors.gammaM0,
-		gammaM1: factors.gammaM1,
+		resistance: factors.resistance,
 		eta: input.eta ?? 1,
 		route: early.route,
 		plastic: new Map(),
@@ -222,7 +221,7 @@ function runChecks(
 			return { route: { route: 'outside-scope', reasons: [reason] }, collapse, checks };
 		}
 		const resistance = members.map((m) =>
-			ctx.basis.computeBendingResistance({ ...m, gammaM0: ctx.gammaM0, elastic })
+			ctx.basis.computeBendingResistance({ ...m, resistance: ctx.resistance, elastic })
 		);
 		elasticResistance = resistance;
 		const bending = checkElasticBending(ctx, { EI: o.EI, resistance, elastic });
@@ -243,7 +242,7 @@ function runChecks(
 	if (ltb.outOfScope.length > 0) {
 		route = { route: 'outside-scope', reasons: [...new Set(ltb.outOfScope)] };
 	}
-	checks.push(...checkBeamWebs(ctx, input.bearing ?? { supports: [], loads: 0 }));
+	checks.push(...checkBeamWebs(ctx, input.bearing ?? { supports: [], loads: 0 }, segments));
 	if (o.allKnown) checks.push(...checkBeamDeflections(deflectionInput(ctx, input)));
 	const designMoments =
 		elasticResistance && route.route !== 'outside-scope'
@@ -274,8 +273,8 @@ function deflectionInput(ctx: CheckContext, input: DesignCheckInput) {
 		cantilever: ctx.beam.spans.map((_, i) => s[i] === 'free' || s[i + 1] === 'free'),
 		temporary: ctx.effects.characteristic.temporary,
 		all: ctx.effects.characteristic.all,
-		limitTemporary: input.deflectionLimit ?? DEFAULT_DEFLECTION_LIMIT,
-		limitTotal: input.deflectionLimitTotal ?? DEFAULT_DEFLECTION_LIMIT,
+		limitTemporary: input.deflectionLimit ?? ctx.basis.words.deflectionLimits.temporary,
+		limitTotal: input.deflectionLimitTotal ?? ctx.basis.words.deflectionLimits.total,
 		governing: input.deflectionGoverning ?? false
 	};
 }

@@ -14,7 +14,7 @@ export function computeSpanShearResistances(ctx: CheckContext): (number | null)[
 		if (!m.propsKnown) return null;
 		const Av = ctx.basis.computeShearArea({ ...m, eta: ctx.eta });
 		if (Av === null) return null;
-		return ctx.basis.computeShearResistance({ Av, fy: m.fy, gammaM0: ctx.gammaM0 });
+		return ctx.basis.computeShearResistance({ ...m, Av, resistance: ctx.resistance });
 	});
 }
 
@@ -38,7 +38,7 @@ export function checkBeamShear(ctx: CheckContext, vRd: (number | null)[]): Check
 	return {
 		id: 'shear',
 		label: 'Shear',
-		clause: 'EN 1993-1-1 6.2.6',
+		clause: ctx.basis.words.clauses.shear,
 		level: 'governing',
 		utilisation: worst.utilisation,
 		utilisationExisting: worst.utilisationExisting,

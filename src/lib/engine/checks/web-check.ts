@@ -1,14 +1,16 @@
 /**
- * Local web resistance where a point load or a support reaction bears on an unstiffened I web
- * (EN 1993-1-5 6.2–6.6), one row per bearing point, worst load arrangement. The load type of
- * Figure 6.1 is chosen from where the force stands (see `en1993/web.ts`). Where the loaded flange
- * is in compression, the row also covers bending at the same section, η2 + 0.8·η1 ≤ 1.4
+ * Local web resistance where a point load or a support reaction bears on an unstiffened I web,
+ * one row per bearing point, worst load arrangement; the basis gives the resistance from where
+ * the force stands (Eurocode: EN 1993-1-5 6.2–6.6 with the load type of its Figure 6.1, see
+ * `en1993/web.ts`; AISC: J10.2–J10.5). Where the basis asks for it and the loaded flange is in
+ * compression, the row also covers bending at the same section, η2 + 0.8·η1 ≤ 1.4
  * (EN 1993-1-5 7.2(1)). Hollow and solid sections are not checked (said in the notices).
  */
 import { momentAt } from '../collapse/index';
-import { E_STEEL } from '../units';
+import type { WebPlace } from './basis-types';
 import { sumArrangementLoads, shiftCollapseValue, type CheckContext } from './context';
 import type { LoadArrangement } from './load-arrangements';
+import type { RestraintSegment } from './restraint';
 import type { CheckResult } from './types';
 import { selectLinearArrangements } from './linear-arrangements';
 import { listWebForces, type LoadedFlange, type WebForce } from './web-forces';
@@ -22,15 +24,15 @@ export interface BearingLengths {
 	loads: number;
 }
 
-/** Plain words for the load types of EN 1993-1-5 Figure 6.1. */
-const TYPE_WORDS = {
-	a: 'resisted by web shear',
-	b: 'passing through the web to the support',
-	c: 'next to an unstiffened end'
-} as const;
-
-/** One row per support and per point-load position on an I-section web. */
-export function checkBeamWebs(ctx: CheckContext, bearing: BearingLengths): CheckResult[] {
+/**
+ * One row per support and per point-load position on an I-section web.
+ * @param segments lateral restraint segments (empty: the compression flange held throughout)
+ */
+export function checkBeamWebs(
+	ctx: CheckContext,
+	bearing: BearingLengths,
+	segments: RestraintSegment[] = []
+): CheckResult[] {
 	const out: CheckResult[] = [];
 	// Each group's point loads summed by position once (for picking arrangements by sign).
 	const pointSums = ctx.effects.groups.map((g) => {
@@ -39,7 +41,7 @@ export function checkBeamWebs(ctx: CheckContext, bearing: BearingLengths): Check
 		return m;
 	});
 	for (const f of listWebForces(ctx, bearing)) {
-		const row = checkWebForce(ctx, f, pointSums);
+		const row = checkWebForce(ctx, f, pointSums, segments);
 		if (row) out.push(row);
 	}
 	return out;
@@ -48,25 +50,33 @@ export function checkBeamWebs(ctx: CheckContext, bearing: BearingLengths): Check
 function checkWebForce(
 	ctx: CheckContext,
 	p: WebForce,
-	pointSums: Map<number, number>[]
+	pointSums: Map<number, number>[],
+	segments: RestraintSegment[]
 ): CheckResult | null {
 	const m = ctx.members[p.span];
 	if (!m.propsKnown || (m.shape !== 'I' && m.shape !== 'welded-I')) return null;
 	const web = ctx.basis.computeWebResistance({
+		h: m.h,
 		hw: m.hw,
 		tw: m.tw,
 		bf: m.b,
 		tf: m.tf,
+		r: m.r,
 		fyw: m.fy,
 		fyf: m.fy,
-		E: E_STEEL,
+		E: ctx.basis.E,
 		ss: p.ss,
 		throughWeb: p.throughWeb,
 		endDistance: p.endDistance,
-		gammaM1: ctx.gammaM1
+		resistance: ctx.resistance,
+		unbracedLength: findUnbracedLength(ctx, p, segments),
+		loadedFlangeCompressed: p.flange === 'top'
 	});
+	const interaction = web.bendingInteraction;
 	const elastic = ctx.route === 'elastic-first-yield';
-	const mRd = ctx.basis.computeBendingResistance({ ...m, gammaM0: ctx.gammaM0, elastic });
+	const mRd = interaction
+		? ctx.basis.computeBendingResistance({ ...m, resistance: ctx.resistance, elastic })
+		: 0;
 	const picked = selectArrangements(ctx, { p, fRd: web.fRd, mRd, pointSums });
 	const worst = findWorstArrangement(picked, (arr, t) => {
 		const fEd = p.force(arr, t);
@@ -78,39 +88,36 @@ function checkWebForce(
 		return { utilisation: Math.max(eta2, combined), detail };
 	});
 	const d = worst.detail;
-	const ss = Math.min(p.ss, m.hw);
-	const where = describePlace(web.type, p);
-	const withBending = d.combined > d.eta2;
+	const where = describePlace(web.place, p);
+	const withBending = interaction !== null && d.combined > d.eta2;
+	const bendingValues: Record<string, number> = interaction
+		? { mEd: d.mEd, mRd, eta1: d.eta1, eta2: d.eta2 }
+		: {};
 	return {
 		id: 'web',
-		label: `Web ${p.flange === 'top' ? 'under' : 'at'} ${p.name} (type ${web.type}${where})`,
-		clause: withBending ? 'EN 1993-1-5 6.2–6.6, 7.2(1)' : 'EN 1993-1-5 6.2–6.6',
+		label: `Web ${p.flange === 'top' ? 'under' : 'at'} ${p.name} (${web.kind}${where})`,
+		clause: withBending ? interaction.clause : web.clause,
 		level: 'governing',
 		utilisation: worst.utilisation,
 		utilisationExisting: worst.utilisationExisting,
 		pass: worst.utilisation <= 1,
 		multiplierAtCapacity: worst.multiplier,
-		values: {
-			fEd: d.fEd,
-			fRd: web.fRd,
-			ss,
-			c: web.c,
-			kF: web.kF,
-			ly: web.ly,
-			chiF: web.chiF,
-			lEff: web.lEff,
-			mEd: d.mEd,
-			mRd,
-			eta1: d.eta1,
-			eta2: d.eta2
-		},
+		values: { fEd: d.fEd, fRd: web.fRd, ...web.values, ...bendingValues },
 		x: p.x,
 		arrangement: worst.arrangement.name,
-		note:
-			`Load type (${web.type}) of EN 1993-1-5 Figure 6.1, ${TYPE_WORDS[web.type]}; ` +
-			`stiff bearing ${Math.round(ss)} mm.` +
-			(withBending ? ' Governed by the interaction with bending, η2 + 0.8·η1 ≤ 1.4.' : '')
+		note: web.note + (withBending ? interaction.note : '')
 	};
+}
+
+/**
+ * Longest unbraced length of either flange at a force, mm: 0 over a support (both flanges held
+ * there); elsewhere the span, since the model holds the other flange only at the supports.
+ */
+function findUnbracedLength(ctx: CheckContext, p: WebForce, segments: RestraintSegment[]): number {
+	if (ctx.nodes.some((x, i) => x === p.x && ctx.beam.supports[i] !== 'free')) return 0;
+	const span = ctx.beam.spans[p.span];
+	const inSegment = segments.find((s) => p.x > s.from && p.x < s.to);
+	return Math.max(span, inSegment ? inSegment.to - inSegment.from : 0);
 }
 
 /**
@@ -149,9 +156,9 @@ function selectArrangements(
 }
 
 /** Where the force stands, for the label. */
-function describePlace(type: 'a' | 'b' | 'c', p: WebForce): string {
-	if (type === 'b') return ', load over the support';
-	if (type === 'a') return '';
+function describePlace(place: WebPlace, p: WebForce): string {
+	if (place === 'through') return ', load over the support';
+	if (place === 'span') return '';
 	return p.flange !== 'top' && p.endDistance === 0 ? ', end support' : `, near ${p.endWord}`;
 }
 

@@ -2,8 +2,19 @@
  * Bending and shear interaction, EN 1993-1-1 6.2.8: above half the plastic shear resistance the
  * shear area works at a reduced yield strength (1 − ρ)·fy.
  */
-import type { ReducedMomentInput } from '../basis-types';
-export type { ReducedMomentInput } from '../basis-types';
+
+/** Inputs of {@link computeReducedMomentResistance}; mm, mm³, N/mm². */
+export interface ReducedMomentInput {
+	/** Plastic modulus about the bending axis, mm³. */
+	Wpl: number;
+	/** Web area hw·tw (all webs), mm². */
+	Aw: number;
+	/** Web thickness (sum over webs), mm. */
+	tw: number;
+	fy: number;
+	gammaM0: number;
+	rho: number;
+}
 
 /**
  * ρ = (2·VEd/Vpl,Rd − 1)² where VEd > 0.5·Vpl,Rd, else 0 (EN 1993-1-1 6.2.8(3)).

@@ -3,8 +3,14 @@
  * 6.3.2.3 (rolled sections and equivalent welded), recommended values.
  */
 import type { SectionShape } from '../../section/types';
-import type { LtbResistance } from '../basis-types';
-export type { LtbResistance } from '../basis-types';
+
+/** χLT and Mb,Rd for one segment. */
+export interface LtbResistance {
+	lambdaBar: number;
+	chiLT: number;
+	/** Mb,Rd = χLT·Wy·fy/γM1, N·mm. */
+	mbRd: number;
+}
 
 /** Buckling curve letter. */
 export type BucklingCurve = 'a' | 'b' | 'c' | 'd';

@@ -16,8 +16,56 @@
  * which covers that whole zone with margin. The model has no end stiffeners, so every beam end
  * counts as unstiffened.
  */
-import type { WebResistanceInput, WebForceInput, WebResistance } from '../basis-types';
-export type { WebLoadType, WebResistanceInput, WebForceInput, WebResistance } from '../basis-types';
+/** Load introduction type of EN 1993-1-5 Figure 6.1. */
+export type WebLoadType = 'a' | 'b' | 'c';
+
+/** Inputs of {@link computeWebResistance}; mm and N/mm². */
+export interface WebResistanceInput {
+	type: WebLoadType;
+	/** Clear web depth between flanges hw, mm. */
+	hw: number;
+	tw: number;
+	/** Flange width and thickness, mm. */
+	bf: number;
+	tf: number;
+	/** Yield strength of web and flange, N/mm². */
+	fyw: number;
+	fyf: number;
+	E: number;
+	/** Stiff bearing length ss, mm (taken no longer than hw, EN 1993-1-5 6.3). */
+	ss: number;
+	/** Type (c): clear distance from the end of the stiff bearing to the end of the member, mm. */
+	c?: number;
+	gammaM1: number;
+}
+
+/** Where a force stands, for {@link computeWebForceResistance}; mm and N/mm². */
+export interface WebForceInput extends Omit<WebResistanceInput, 'type' | 'c'> {
+	/** The force passes through the web to a support under the other flange. */
+	throughWeb: boolean;
+	/** Clear distance from the end of the stiff bearing to the nearest unstiffened end, mm. */
+	endDistance: number;
+}
+
+/** Intermediate values and the resistance, N and mm. */
+export interface WebResistance {
+	type: WebLoadType;
+	/** Clear distance to the end used by type (c), mm; 0 for (a) and (b). */
+	c: number;
+	kF: number;
+	/** Fcr = 0.9·kF·E·tw³/hw, N (eq. 6.5). */
+	fCr: number;
+	m1: number;
+	m2: number;
+	/** Effective loaded length ly, mm (6.10–6.12). */
+	ly: number;
+	lambdaF: number;
+	chiF: number;
+	/** Leff = χF·ly, mm (6.2). */
+	lEff: number;
+	/** FRd = fyw·Leff·tw/γM1, N (6.1). */
+	fRd: number;
+}
 
 /**
  * Distance from an unstiffened end within which a force is type (c): max(hw, le6), mm (our
