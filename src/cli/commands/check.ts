@@ -1,6 +1,12 @@
 import { readFile } from 'node:fs/promises';
 import { checkCase, describeAllowable, type CheckReport } from '../../lib/engine/index';
 import type { InputIssue } from '../../lib/engine/model/issue';
+import {
+	convertTo,
+	unitSymbol,
+	type SummaryQuantity,
+	type SummaryUnits
+} from '../../lib/engine/report/summary-units';
 import type { CliCommand } from './index';
 
 /** Rounds for reading: 4 significant figures, no exponent for everyday sizes. */
@@ -15,8 +21,18 @@ const VERDICT_WORDS = {
 	'outside-scope': 'OUTSIDE SCOPE'
 } as const;
 
-/** The readable summary `check` prints without --json: the answer first, then what it rests on. */
-function formatCheckText(r: CheckReport, warnings: { path: string; message: string }[]): string {
+/**
+ * The readable summary `check` prints without --json: the answer first, then what it rests on,
+ * every figure in `units` (the report's words already are).
+ */
+function formatCheckText(
+	r: CheckReport,
+	warnings: { path: string; message: string }[],
+	units: SummaryUnits
+): string {
+	/** An SI output value in the chosen units with its symbol, 4 significant figures by default. */
+	const q = (v: number, quantity: SummaryQuantity, digits = 4) =>
+		`${fmt(convertTo(v, quantity, units), digits)} ${unitSymbol(quantity, units)}`;
 	const a = r.answer;
 	const lines = [r.title ? `Case: ${r.title}` : 'Case (untitled)', ''];
 	lines.push(`Verdict: ${a.verdict === null ? 'NO VERDICT' : VERDICT_WORDS[a.verdict]}`);
@@ -30,7 +46,8 @@ function formatCheckText(r: CheckReport, warnings: { path: string; message: stri
 			`  multiplier on the proposed loads ${fmt(a.multiplier)}; reserve ${fmt(a.reserve! * 100, 3)} %`
 		);
 	}
-	for (const t of a.allowable) lines.push(`  largest proposed load: ${describeAllowable(t)}`);
+	for (const t of a.allowable)
+		lines.push(`  largest proposed load: ${describeAllowable(t, units)}`);
 	for (const reason of a.reasons) lines.push(`  - ${reason}`);
 	lines.push('', `Route: ${r.design.route.route}`, ...r.design.route.reasons.map((t) => `  ${t}`));
 	lines.push(
@@ -41,7 +58,7 @@ function formatCheckText(r: CheckReport, warnings: { path: string; message: stri
 	r.sections.forEach((s, i) => {
 		const g = r.grades[i];
 		const cls = s.class === null ? 'class not known' : `Class ${s.class}`;
-		const fy = g ? `, ${g.name}, fy ${g.fy} MPa` : '';
+		const fy = g ? `, ${g.name}, fy ${q(g.fy, 'stress')}` : '';
 		lines.push(`Span ${i + 1}: ${s.designation}${fy}, ${cls}`);
 	});
 	if (r.checks.length > 0) {
@@ -63,7 +80,7 @@ function formatCheckText(r: CheckReport, warnings: { path: string; message: stri
 			lines.push(`  load factor λ = ${fmt(c.loadFactor)}${proof}`);
 			if (c.mechanism) lines.push(`  mechanism: ${c.mechanism.name}`);
 			for (const h of c.hinges)
-				lines.push(`  hinge at x = ${fmt(h.x)} m, M = ${fmt(h.moment)} kNm`);
+				lines.push(`  hinge at x = ${q(h.x, 'length')}, M = ${q(h.moment, 'moment')}`);
 			if (c.message) lines.push(`  ${c.message}`);
 		}
 	}
@@ -72,7 +89,7 @@ function formatCheckText(r: CheckReport, warnings: { path: string; message: stri
 		const by = m.governing ? `, governed by ${m.governing.label}` : '';
 		lines.push(
 			'',
-			`Single proposed point load anywhere on the beam: least ${fmt(m.p)} kN at x = ${fmt(m.x)} m${by}`
+			`Single proposed point load anywhere on the beam: least ${q(m.p, 'force')} at x = ${q(m.x, 'length')}${by}`
 		);
 	}
 	const e = r.effects;
@@ -81,19 +98,19 @@ function formatCheckText(r: CheckReport, warnings: { path: string; message: stri
 		['sagging', e.maxMoment?.maxSagging],
 		['hogging', e.maxMoment?.maxHogging]
 	] as const) {
-		if (v) lines.push(`  largest ${word} moment ${fmt(v.value)} kNm at ${fmt(v.x)} m`);
+		if (v) lines.push(`  largest ${word} moment ${q(v.value, 'moment')} at ${q(v.x, 'length')}`);
 	}
 	if (e.maxDeflection) {
 		const { total, temporary } = e.maxDeflection;
-		lines.push(`  largest deflection ${fmt(total.value, 3)} mm at ${fmt(total.x)} m`);
-		if (temporary) lines.push(`  from the temporary loads alone ${fmt(temporary.value, 3)} mm`);
+		lines.push(`  largest deflection ${q(total.value, 'small', 3)} at ${q(total.x, 'length')}`);
+		if (temporary) lines.push(`  from the temporary loads alone ${q(temporary.value, 'small', 3)}`);
 	}
 	lines.push('', 'Notices:', ...r.notices.map((n) => `  - ${n}`));
 	lines.push('', 'Assumptions:', ...r.assumptions.map((n) => `  - ${n}`));
 	if (warnings.length > 0) {
 		lines.push('', 'Input warnings:', ...warnings.map((w) => `  - ${w.path}: ${w.message}`));
 	}
-	lines.push('', `Engine ${r.engineVersion}`);
+	lines.push('', `Units: ${units === 'us' ? 'US customary' : 'SI'}. Engine ${r.engineVersion}`);
 	return lines.join('\n');
 }
 
@@ -119,15 +136,40 @@ const MAX_CASE_CHARS = 1_000_000;
 
 const toError = (i: InputIssue) => ({ path: i.path, message: i.message, code: i.code });
 
+/** Reads `--units si|us` (or `--units=us`); null when not given, a message when not valid. */
+function readUnitsOption(args: string[]): { units: SummaryUnits | null; rest: string[] } | string {
+	const rest: string[] = [];
+	let units: string | null = null;
+	for (let i = 0; i < args.length; i++) {
+		if (args[i] === '--units') units = args[++i] ?? '';
+		else if (args[i].startsWith('--units=')) units = args[i].slice('--units='.length);
+		else rest.push(args[i]);
+	}
+	if (units === null) return { units: null, rest };
+	if (units !== 'si' && units !== 'us') return `--units takes si or us, not "${units}"`;
+	return { units, rest };
+}
+
+/** The units a case file asks to be read in (`"units": "us"` at its top level), else SI. */
+function unitsOfCase(data: unknown): SummaryUnits {
+	const units =
+		typeof data === 'object' && data !== null ? (data as { units?: unknown }).units : null;
+	return units === 'us' ? 'us' : 'si';
+}
+
 /**
- * `check <case.json> [--json] [--curve]`: runs a case file. Exit 0 with a result whatever the
- * verdict, 2 for unreadable or invalid input (`{"errors": [{path, message}]}` on stdout),
- * 1 for an internal failure.
+ * `check <case.json> [--json] [--curve] [--units si|us]`: runs a case file. Exit 0 with a result
+ * whatever the verdict, 2 for unreadable or invalid input (`{"errors": [{path, message}]}` on
+ * stdout), 1 for an internal failure. `--units` sets the units of the words and the printed
+ * figures (default: the case's own `units`, else SI); the JSON's numbers are always SI.
  */
 export const checkCommand: CliCommand = {
-	summary: 'check a case file: check <case.json> [--json] [--curve]',
-	async run(args) {
-		const json = args.includes('--json');
+	summary: 'check a case file: check <case.json> [--json] [--curve] [--units si|us]',
+	async run(all) {
+		const json = all.includes('--json');
+		const option = readUnitsOption(all);
+		if (typeof option === 'string') return failInput([{ path: '', message: option }], json);
+		const args = option.rest;
 		const curve = args.includes('--curve');
 		const unknown = args.filter((a) => a.startsWith('--') && a !== '--json' && a !== '--curve');
 		const files = args.filter((a) => !a.startsWith('--'));
@@ -157,9 +199,10 @@ export const checkCommand: CliCommand = {
 			const reason = error instanceof Error ? error.message : String(error);
 			return failInput([{ path: '', message: `not valid JSON: ${reason}` }], json);
 		}
+		const units = option.units ?? unitsOfCase(data);
 		let outcome: ReturnType<typeof checkCase>;
 		try {
-			outcome = checkCase(data, { curve });
+			outcome = checkCase(data, { curve, units });
 		} catch (error) {
 			const reason = error instanceof Error ? error.message : String(error);
 			process.stdout.write(JSON.stringify({ internalError: reason }) + '\n');
@@ -169,7 +212,7 @@ export const checkCommand: CliCommand = {
 		if (!outcome.ok) return failInput(outcome.issues.map(toError), json);
 		const warnings = outcome.warnings.map(toError);
 		if (json) process.stdout.write(JSON.stringify({ ...outcome.report, warnings }) + '\n');
-		else process.stdout.write(formatCheckText(outcome.report, warnings) + '\n');
+		else process.stdout.write(formatCheckText(outcome.report, warnings, units) + '\n');
 		return 0;
 	}
 };

@@ -106,4 +106,73 @@ describe('check command', () => {
 		expect(r.out).toContain('Plastic collapse in bending (partial result');
 		expect(r.out).toContain('Screening aid only.');
 	});
+
+	describe('--units', () => {
+		// The same cantilever; 1 kip = 4.448 222 kN, 1 ft = 0.3048 m (NIST SP 811, Appendix B).
+		const KIP_KN = 0.45359237 * 9.80665;
+		const FT_M = 0.3048;
+		const cantilever = (extra: Record<string, unknown> = {}) => {
+			const dir = mkdtempSync(join(tmpdir(), 'hp-units-'));
+			const file = join(dir, 'case.json');
+			writeFileSync(
+				file,
+				JSON.stringify({
+					format: 'hingepoint.case',
+					version: 1,
+					title: 'DEMO — invented cantilever',
+					...extra,
+					beam: {
+						spans: [4],
+						supports: ['fixed', 'free'],
+						section: { designation: 'UB 254x146x31' },
+						grade: 'S275',
+						restraint: { lateral: [4] }
+					},
+					loads: [{ kind: 'point', x: 4, value: 2, action: 'temporary' }]
+				})
+			);
+			return file;
+		};
+		const SI_WORDS = /kN|kNm|MPa|N\/mm|\bmm\b|\d m\b/;
+
+		it('writes every figure and word in US customary units with --units us', () => {
+			const si = runCheck(cantilever());
+			const us = runCheck(cantilever(), '--units', 'us');
+			expect(si.code).toBe(0);
+			expect(us.code).toBe(0);
+			expect(si.out).toMatch(SI_WORDS);
+			// Everything but the user's own title.
+			const body = us.out.split('\n').slice(1).join('\n');
+			expect(body).not.toMatch(SI_WORDS);
+			expect(body).toContain('Units: US customary');
+			const kN = Number(/largest proposed load: ([\d.]+) kN/.exec(si.out)![1]);
+			const kip = Number(/largest proposed load: ([\d.]+) kip/.exec(us.out)![1]);
+			// Both printed to 3 significant figures from the same SI value.
+			expect(Math.abs(kip - kN / KIP_KN) / kip).toBeLessThan(0.01);
+			expect(us.out).toContain(`at ${Number((4 / FT_M).toPrecision(4))} ft`);
+		});
+
+		it("reads the case's own units when no option is given, and the option wins", () => {
+			const file = cantilever({ units: 'us' });
+			expect(runCheck(file).out).toContain('Units: US customary');
+			expect(runCheck(file, '--units=si').out).toContain('Units: SI');
+			expect(runCheck(cantilever()).out).toContain('Units: SI');
+		});
+
+		it('keeps the JSON numbers in SI and says the words are in US units', () => {
+			const si = JSON.parse(runCheck(cantilever(), '--json').out);
+			const us = JSON.parse(runCheck(cantilever(), '--json', '--units', 'us').out);
+			expect(us.textUnits).toBe('us');
+			expect(si.textUnits).toBe('si');
+			expect(us.units).toEqual(si.units);
+			expect(us.answer.allowable).toEqual(si.answer.allowable);
+			expect(us.answer.message).not.toMatch(SI_WORDS);
+		});
+
+		it('refuses units it does not know', () => {
+			const r = runCheck(cantilever(), '--units', 'imperial', '--json');
+			expect(r.code).toBe(2);
+			expect(JSON.parse(r.out).errors[0].message).toMatch(/--units takes si or us/);
+		});
+	});
 });

@@ -6,6 +6,7 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { CheckForm } from '../../../src/lib/ui/state/check-form.svelte';
 import type { CaseFile } from '../../../src/lib/ui/state/case-file';
+import type { CheckOutcome } from '../../../src/lib/ui/state/check-outcome';
 import { createDemoCase } from '../../../src/lib/ui/state/demo-case';
 
 function makeForm() {
@@ -54,6 +55,34 @@ describe('CheckForm', () => {
 		form.setUnits('SI');
 		expect(JSON.stringify(form.case)).toBe(before);
 		expect(form.text('beam.spans[0]')).toBe('4.8');
+	});
+
+	it('runs a result already shown again when the units change (its words follow them)', async () => {
+		const asked: string[] = [];
+		const form: CheckForm = new CheckForm({
+			run: (): CheckOutcome => {
+				asked.push(form.units);
+				return { state: 'error', message: `words in ${form.units}` };
+			}
+		});
+		form.load(createDemoCase());
+		await vi.runAllTimersAsync();
+		expect(asked).toEqual(['SI']);
+		form.setUnits('US');
+		await vi.runAllTimersAsync();
+		expect(asked).toEqual(['SI', 'US']);
+		expect(form.outcome).toEqual({ state: 'error', message: 'words in US' });
+		// The same units again is no change and runs nothing.
+		form.setUnits('US');
+		await vi.runAllTimersAsync();
+		expect(asked).toHaveLength(2);
+	});
+
+	it('runs nothing on a units switch before any result was asked for', () => {
+		const seen: string[] = [];
+		const form = new CheckForm({ run: () => (seen.push('run'), null) });
+		form.setUnits('US');
+		expect(seen).toHaveLength(0);
 	});
 
 	it('keeps a typed text with its load when an earlier load is removed', () => {

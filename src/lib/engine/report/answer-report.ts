@@ -14,12 +14,16 @@ const NO_LOAD =
 const EXISTING_FAIL = 'The existing loads alone already exceed a check: ask an engineer now.';
 const OUTSIDE = 'Outside the scope of this method: no capacity is given.';
 
-/** The answer as reported. */
-export function reportAnswer(answer: Answer, labels: (string | null)[]): AnswerReport {
+/** The answer as reported; its message names loads in `units`, its numbers stay SI. */
+export function reportAnswer(
+	answer: Answer,
+	labels: (string | null)[],
+	units: SummaryUnits = 'si'
+): AnswerReport {
 	const allowable = answer.allowable.map((a) => reportAllowable(a, labels[a.index] ?? null));
 	return {
 		verdict: answer.verdict,
-		message: writeMessage(answer, allowable),
+		message: writeMessage(answer, allowable, units),
 		governing: answer.governing && { ...answer.governing },
 		multiplier: answer.multiplier,
 		reserve: answer.reserve,
@@ -60,7 +64,11 @@ export function describeAllowable(a: AllowableLoadReport, units: SummaryUnits = 
 }
 
 /** The one sentence under the verdict. */
-function writeMessage(answer: Answer, allowable: AllowableLoadReport[]): string {
+function writeMessage(
+	answer: Answer,
+	allowable: AllowableLoadReport[],
+	units: SummaryUnits
+): string {
 	if (answer.verdict === 'outside-scope') return OUTSIDE;
 	if (answer.verdict === null) return answer.existingFail ? `${NO_LOAD} ${EXISTING_FAIL}` : NO_LOAD;
 	const parts = [
@@ -74,7 +82,7 @@ function writeMessage(answer: Answer, allowable: AllowableLoadReport[]): string 
 		parts.push('No temporary load can be added: the existing loads already use the capacity.');
 	} else if (allowable.length > 0) {
 		const many = allowable.length > 1;
-		const list = allowable.map((a) => describeAllowable(a)).join('; ');
+		const list = allowable.map((a) => describeAllowable(a, units)).join('; ');
 		parts.push(`Largest proposed load${many ? 's, together' : ''}: ${list}.`);
 	}
 	if (answer.existingFail && answer.verdict === 'fail') parts.push(EXISTING_FAIL);

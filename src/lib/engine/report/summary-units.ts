@@ -8,7 +8,7 @@ import { US } from '../units';
 export type SummaryUnits = 'si' | 'us';
 
 /** The kinds of quantity the share texts print. `small` is section sizes and deflections. */
-export type SummaryQuantity = 'length' | 'force' | 'lineLoad' | 'moment' | 'small';
+export type SummaryQuantity = 'length' | 'force' | 'lineLoad' | 'moment' | 'small' | 'stress';
 
 const kip = US.kipToKN;
 const ft = US.ftToM;
@@ -20,14 +20,16 @@ const SHOWN: Record<SummaryUnits, Record<SummaryQuantity, [toSI: number, symbol:
 		force: [1, 'kN'],
 		lineLoad: [1, 'kN/m'],
 		moment: [1, 'kNm'],
-		small: [1, 'mm']
+		small: [1, 'mm'],
+		stress: [1, 'MPa']
 	},
 	us: {
 		length: [ft, 'ft'],
 		force: [kip, 'kip'],
 		lineLoad: [kip / ft, 'kip/ft'],
 		moment: [kip * ft, 'kip·ft'],
-		small: [US.inToMm, 'in']
+		small: [US.inToMm, 'in'],
+		stress: [US.ksiToMPa, 'ksi']
 	}
 };
 

@@ -4,6 +4,7 @@
  */
 import type { CaseModel } from '../case/types';
 import { ENGINEER_NOTICE_SHORT } from '../notice';
+import { formatIn, type SummaryUnits } from './summary-units';
 import type { CollapseReport } from './types';
 
 const FAILS_UNDER_FIXED =
@@ -42,8 +43,14 @@ export function writeNotices(model: CaseModel, collapse: CollapseReport | null):
 	return out;
 }
 
-/** Assumptions the numbers rest on. */
-export function writeAssumptions(model: CaseModel): string[] {
+/** Elastic modulus as the assumption states it: the standard's own figure in SI. */
+const E_WORDS: Record<SummaryUnits, string> = {
+	si: '210 000 MPa',
+	us: formatIn(210_000, 'stress', 'us')
+};
+
+/** Assumptions the numbers rest on, figures in `units`. */
+export function writeAssumptions(model: CaseModel, units: SummaryUnits = 'si'): string[] {
 	const f = model.factors;
 	const out = [
 		'Plastic collapse (where it is the route) by simple plastic theory: ductile steel, hinges ' +
@@ -54,13 +61,15 @@ export function writeAssumptions(model: CaseModel): string[] {
 		'The proposed temporary loads are the ones increased by the multiplier; the other loads ' +
 			'stay at their design values.',
 		'All loads act in the plane of the web, with no axial force and no torsion.',
-		'Elastic results use E = 210 000 MPa and the major-axis second moment of area; deflections ' +
+		`Elastic results use E = ${E_WORDS[units]} and the major-axis second moment of area; deflections ` +
 			'are under unfactored loads.'
 	];
 	if (model.selfWeight) out.push('Self-weight of the section is included as a permanent load.');
 	else out.push('Self-weight is not added: it is assumed to be among the entered permanent loads.');
 	if (model.sectionLoss > 0) {
-		out.push(`A section loss of ${model.sectionLoss} mm per exposed face is deducted.`);
+		const loss =
+			units === 'si' ? `${model.sectionLoss} mm` : formatIn(model.sectionLoss, 'small', units);
+		out.push(`A section loss of ${loss} per exposed face is deducted.`);
 	}
 	return out;
 }

@@ -173,6 +173,8 @@ export interface CheckReport {
 	version: typeof REPORT_VERSION;
 	title: string;
 	engineVersion: string;
+	/** Units of the report's words (summaries, notices, notes, names); its numbers are in `units`. */
+	textUnits: 'si' | 'us';
 	units: {
 		length: 'm';
 		force: 'kN';

@@ -178,12 +178,21 @@ export class CheckForm {
 			const parsed = parseFieldText(text, info, typedIn);
 			if (!parsed.ok) this.local[path] = parsed.message;
 		}
-		this.setUnits(current);
+		this.#showIn(current);
 		void this.runNow();
 	}
 
-	/** Switches display units: valid fields are re-shown from the SI case, which never changes. */
+	/**
+	 * Switches display units: valid fields are re-shown from the SI case, which never changes, and
+	 * a result already asked for is run again, since its words and share texts are in the units.
+	 */
 	setUnits(units: UnitSystem): void {
+		if (units === this.units) return;
+		this.#showIn(units);
+		if (this.outcome !== null || this.pending) void this.runNow();
+	}
+
+	#showIn(units: UnitSystem): void {
 		if (units === this.units) return;
 		for (const key of Object.keys(this.texts)) if (!(key in this.local)) delete this.texts[key];
 		this.units = units;
