@@ -3,7 +3,6 @@
  * Pure TypeScript; the same call serves the phone app and the command line.
  */
 import { parseCase } from './case/parse-case';
-import { explainMissingBasis } from './checks/bases';
 import { runDesign } from './checks/run-design';
 import type { InputIssue } from './model/issue';
 import { buildCheckReport, type ReportOptions } from './report/build-report';
@@ -44,8 +43,6 @@ export function checkCase(json: unknown, options: ReportOptions = {}): CheckOutc
 		message: restateUnits(i.message, options.units ?? 'si')
 	});
 	if (!parsed.ok) return { ok: false, issues: parsed.issues.map(say) };
-	const missing = explainMissingBasis(parsed.value.basis);
-	if (missing) return { ok: false, issues: [missing] };
 	const design = runDesign(parsed.value, { curve: options.curve });
 	const report = buildCheckReport(parsed.value, design, options);
 	return { ok: true, report, warnings: parsed.warnings.map(say) };
