@@ -3,10 +3,10 @@
  * Pure TypeScript; the same call serves the phone app and the command line.
  */
 import { parseCase } from './case/parse-case';
+import { explainMissingBasis } from './checks/bases';
 import { runDesign } from './checks/run-design';
 import type { InputIssue } from './model/issue';
 import { buildCheckReport, type ReportOptions } from './report/build-report';
-import { restateUnits } from './report/restate-units';
 import type { CheckReport } from './report/types';
 
 export { ENGINE_VERSION } from './report/version';
@@ -37,13 +37,10 @@ export type CheckOutcome =
  */
 export function checkCase(json: unknown, options: ReportOptions = {}): CheckOutcome {
 	const parsed = parseCase(json);
-	// Messages quote figures in the units the report is read in, like the report's own words.
-	const say = (i: InputIssue): InputIssue => ({
-		...i,
-		message: restateUnits(i.message, options.units ?? 'si')
-	});
-	if (!parsed.ok) return { ok: false, issues: parsed.issues.map(say) };
+	if (!parsed.ok) return { ok: false, issues: parsed.issues };
+	const missing = explainMissingBasis(parsed.value.basis);
+	if (missing) return { ok: false, issues: [missing] };
 	const design = runDesign(parsed.value, { curve: options.curve });
 	const report = buildCheckReport(parsed.value, design, options);
-	return { ok: true, report, warnings: parsed.warnings.map(say) };
+	return { ok: true, report, warnings: parsed.warnings };
 }

@@ -14,6 +14,8 @@ export const FILE_KEYS = {
 		'format',
 		'version',
 		'title',
+		'basis',
+		'units',
 		'beam',
 		'loads',
 		'factors',
@@ -40,6 +42,7 @@ export const FILE_KEYS = {
 	restraint: ['lateral', 'loadHeight'],
 	factors: [
 		'permanent',
+		'permanentAlone',
 		'permanentFavourable',
 		'imposed',
 		'temporary',

@@ -7,13 +7,30 @@ import type { Load } from '../model/types';
 import { massToLineLoad } from '../units';
 import { parseGeometry } from './parse-geometry';
 import { parseLoads } from './parse-loads';
-import { parseBearing, parseCheckSettings, parseFactors, parseRestraint } from './parse-options';
+import { parseBearing, parseCheckSettings, parseRestraint } from './parse-options';
+import { parseFactors } from './parse-factors';
 import { parseSections } from './parse-section';
 import { echoFile, FILE_KEYS } from './echo-file';
 import { checkJsonShape } from './json-shape';
 import { RANGES, SIZE_LIMITS } from './limits';
-import { addError, isRecord, readNumber, readText, warnUnknownKeys } from './read-value';
-import { CASE_FORMAT, CASE_VERSION, type CaseModel } from './types';
+import {
+	addError,
+	isRecord,
+	readChoice,
+	readNumber,
+	readText,
+	warnUnknownKeys
+} from './read-value';
+import { convertUsFile, explainConverted } from './us-units';
+import {
+	CASE_BASES,
+	CASE_FORMAT,
+	CASE_UNITS,
+	CASE_VERSION,
+	type CaseBasis,
+	type CaseModel,
+	type CaseUnits
+} from './types';
 
 /**
  * Validates a parsed JSON value as a case file and converts it to internal units.
@@ -34,6 +51,40 @@ export function parseCase(json: unknown): Checked<CaseModel> {
 	if (!checkJsonShape(json, issues)) return { ok: false, issues };
 	warnUnknownKeys(json, FILE_KEYS.top, '', issues);
 	checkHeader(json, issues);
+	const basis = readBasis(json.basis, issues);
+	const units = readUnits(json.units, issues);
+	// A US file is read as its SI twin, so every range applies after conversion.
+	const us = units === 'us' ? convertUsFile(json) : null;
+	const read = readFile({ json: us?.json ?? json, original: json, basis, units }, issues);
+	if (!us) return read;
+	return read.ok
+		? { ...read, warnings: explainConverted(read.warnings, us.converted) }
+		: { ok: false, issues: explainConverted(read.issues, us.converted) };
+}
+
+/** Reads the top-level `basis` (default `eurocode`, so files written before it keep working). */
+function readBasis(value: unknown, issues: InputIssue[]): CaseBasis {
+	if (value === undefined) return 'eurocode';
+	return readChoice(value, 'basis', issues, CASE_BASES, 'design basis') ?? 'eurocode';
+}
+
+/** Reads the top-level `units` (default `si`). */
+function readUnits(value: unknown, issues: InputIssue[]): CaseUnits {
+	if (value === undefined) return 'si';
+	return readChoice(value, 'units', issues, CASE_UNITS, 'units of the file') ?? 'si';
+}
+
+/** What {@link readFile} reads: the file in SI file units, and the file as given. */
+interface FileToRead {
+	json: Record<string, unknown>;
+	original: Record<string, unknown>;
+	basis: CaseBasis;
+	units: CaseUnits;
+}
+
+/** Reads a file whose numbers are in SI file units (after any conversion). */
+function readFile(f: FileToRead, issues: InputIssue[]): Checked<CaseModel> {
+	const { json, basis, units } = f;
 	const beam = isRecord(json.beam) ? json.beam : undefined;
 	if (!beam) addError(issues, 'beam', 'beam-missing', 'The case needs a "beam" object.');
 	else warnUnknownKeys(beam, FILE_KEYS.beam, 'beam', issues);
@@ -52,7 +103,7 @@ export function parseCase(json: unknown): Checked<CaseModel> {
 	const materials =
 		beam && loss !== undefined ? parseSections(b, spansM?.length, loss, issues, issues) : undefined;
 	const loads = parseLoads(json.loads, spansM, issues);
-	const factors = parseFactors(json.factors, issues);
+	const factors = parseFactors(json.factors, issues, basis);
 	const restraint = parseRestraint(b.restraint, spansM, issues);
 	const bearing = parseBearing(b.bearing, spansM ? spansM.length + 1 : undefined, issues);
 	const settings = parseCheckSettings(json, b, issues);
@@ -77,6 +128,8 @@ export function parseCase(json: unknown): Checked<CaseModel> {
 	}
 	const model: CaseModel = {
 		title: typeof json.title === 'string' ? json.title : '',
+		basis,
+		units,
 		beam: line,
 		sections: materials.sections,
 		grades: materials.grades,
@@ -91,7 +144,8 @@ export function parseCase(json: unknown): Checked<CaseModel> {
 		restraintAssumed: b.restraint === undefined,
 		...(bearing ? { bearing } : {}),
 		...settings,
-		file: echoFile(json)
+		file: echoFile(f.original),
+		fileSI: units === 'us' ? { ...echoFile(json), units: 'si' } : echoFile(json)
 	};
 	return { ok: true, value: model, warnings: issues.filter((i) => i.severity === 'warning') };
 }

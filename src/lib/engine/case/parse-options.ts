@@ -1,11 +1,11 @@
 /**
- * Reads the optional parts of a case file: partial factors, lateral restraint, bearing lengths
- * and the deflection limit. The member checks interpret the last three; here they are only
- * validated as data and converted to mm.
+ * Reads the optional parts of a case file: lateral restraint, bearing lengths and the deflection
+ * limit (partial factors: ./parse-factors.ts). The member checks interpret them; here they are
+ * only validated as data and converted to mm.
  */
 import type { InputIssue } from '../model/issue';
 import { measureBeam, readPosition } from './parse-loads';
-import { RANGES, SIZE_LIMITS, type Range } from './limits';
+import { RANGES, SIZE_LIMITS } from './limits';
 import {
 	addError,
 	addWarning,
@@ -16,92 +16,7 @@ import {
 	readText,
 	warnUnknownKeys
 } from './read-value';
-import type { CaseModel, ResolvedFactors } from './types';
-
-/**
- * EN 1990 Table A1.2(B) recommended γG = 1.35, γQ = 1.5 for equation 6.10; temporary loads take
- * γQ; EN 1993-1-1 6.1 NOTE 2B recommended γM0 = γM1 = 1.0.
- */
-export const DEFAULT_FACTORS: Readonly<ResolvedFactors> = {
-	permanent: 1.35,
-	imposed: 1.5,
-	temporary: 1.5,
-	gammaM0: 1.0,
-	gammaM1: 1.0
-};
-
-const FACTOR_KEYS = ['permanent', 'imposed', 'temporary', 'gammaM0', 'gammaM1'] as const;
-/** Combination values the design checks read; passed through when given. */
-const EXTRA_KEYS = ['xi', 'psi0', 'psi0Temporary', 'permanentFavourable'] as const;
-type FactorKey = (typeof FACTOR_KEYS)[number] | (typeof EXTRA_KEYS)[number];
-
-/** Plausible range of each factor (./limits.ts). */
-const FACTOR_RANGES: Record<FactorKey, Range> = {
-	permanent: RANGES.loadFactor,
-	imposed: RANGES.loadFactor,
-	temporary: RANGES.loadFactor,
-	gammaM0: RANGES.materialFactor,
-	gammaM1: RANGES.materialFactor,
-	xi: RANGES.xi,
-	psi0: RANGES.psi,
-	psi0Temporary: RANGES.psi,
-	permanentFavourable: RANGES.favourableFactor
-};
-
-/**
- * Partial factors with defaults; `temporary` defaults to the imposed-load factor in use.
- * @example parseFactors({ imposed: 1.6 }, issues).temporary // 1.6
- */
-export function parseFactors(value: unknown, issues: InputIssue[]): ResolvedFactors | undefined {
-	if (value === undefined) return { ...DEFAULT_FACTORS };
-	if (!isRecord(value)) {
-		const message = 'The factors must be an object, e.g. {"permanent": 1.35}.';
-		addError(issues, 'factors', 'not-an-object', message);
-		return undefined;
-	}
-	warnUnknownKeys(value, [...FACTOR_KEYS, ...EXTRA_KEYS, 'set'], 'factors', issues);
-	const out: Partial<ResolvedFactors> = {};
-	let ok = true;
-	for (const key of FACTOR_KEYS) {
-		if (value[key] === undefined) continue;
-		const rule = { label: `factor ${key}`, range: FACTOR_RANGES[key] };
-		const v = readNumber(value[key], `factors.${key}`, issues, rule);
-		if (v === undefined) ok = false;
-		else out[key] = v;
-	}
-	const extra: Partial<Record<(typeof EXTRA_KEYS)[number], number>> = {};
-	for (const key of EXTRA_KEYS) {
-		if (value[key] === undefined) continue;
-		const rule = { label: `factor ${key}`, range: FACTOR_RANGES[key] };
-		const v = readNumber(value[key], `factors.${key}`, issues, rule);
-		if (v === undefined) ok = false;
-		else extra[key] = v;
-	}
-	for (const key of ['gammaM0', 'gammaM1'] as const) {
-		if ((out[key] ?? 1) >= 1) continue;
-		const message = `${key} below 1.0 is less safe than any code value.`;
-		addWarning(issues, `factors.${key}`, 'factor-below-one', message);
-	}
-	// Names of the factor sets the design checks know (checks/en1993/factors.ts).
-	const sets = ['en1990-6.10', 'en1990-6.10ab', 'custom'] as const;
-	if (
-		value.set !== undefined &&
-		!readChoice(value.set, 'factors.set', issues, sets, 'factor set')
-	) {
-		ok = false;
-	}
-	if (!ok) return undefined;
-	const imposed = out.imposed ?? DEFAULT_FACTORS.imposed;
-	return {
-		permanent: out.permanent ?? DEFAULT_FACTORS.permanent,
-		imposed,
-		temporary: out.temporary ?? imposed,
-		gammaM0: out.gammaM0 ?? DEFAULT_FACTORS.gammaM0,
-		gammaM1: out.gammaM1 ?? DEFAULT_FACTORS.gammaM1,
-		...extra,
-		...(typeof value.set === 'string' ? { set: value.set } : {})
-	};
-}
+import type { CaseModel } from './types';
 
 /**
  * Without a restraint entry: the compression flange held only at the supports, the load on the

@@ -3,7 +3,7 @@
  * rewrites their issue paths to case-file paths (`beam.section.tf`, `beam.grade`).
  */
 import { resolveGrade } from '../material/grades';
-import type { SteelGrade } from '../material/types';
+import type { GradeProduct, SteelGrade } from '../material/types';
 import type { InputIssue } from '../model/issue';
 import { resolveSection } from '../section/resolve';
 import type { ResolvedSection, SectionSpec } from '../section/types';
@@ -149,6 +149,13 @@ function checkGradeForm(
 	return countErrors(issues) === before;
 }
 
+/** The product form a grade standard is written for: round and rectangular tubes, or the rest. */
+function productOf(section: ResolvedSection): GradeProduct | undefined {
+	if (section.shape === 'CHS') return 'round-hollow';
+	if (section.shape === 'RHS') return 'rectangular-hollow';
+	return section.shape === 'known-mp' ? undefined : 'open';
+}
+
 function resolveGrades(
 	spec: unknown,
 	sections: ResolvedSection[],
@@ -171,7 +178,9 @@ function resolveGrades(
 	const out: (SteelGrade | null)[] = [];
 	for (const section of sections) {
 		const gradeSpec = spec as string | { fy: number; fu?: number };
-		const r = resolveGrade(gradeSpec, section.governingThickness);
+		const r = resolveGrade(gradeSpec, section.governingThickness, {
+			product: productOf(section)
+		});
 		if (!r.ok) {
 			issues.push(...relocate(r.issues, 'beam.grade'));
 			return undefined;

@@ -11,10 +11,27 @@ export const CASE_FORMAT = 'hingepoint.case';
 /** Version of the case-file format this engine writes and reads. */
 export const CASE_VERSION = 1;
 
+/**
+ * Design bases a case may name (top-level `basis`): EN 1990 / EN 1993 with recommended values,
+ * or AISC 360-22 with ASCE 7-22 combinations by LRFD or ASD. Files without it are Eurocode.
+ */
+export const CASE_BASES = ['eurocode', 'aisc-lrfd', 'aisc-asd'] as const;
+export type CaseBasis = (typeof CASE_BASES)[number];
+
+/**
+ * Units a case file is written in (top-level `units`): `si` (default) m, kN, kN/m, kNm, mm, MPa,
+ * kg/m; `us` ft, kip, kip/ft, kip·ft, in, ksi, lb/ft. Converted to internal units on reading.
+ */
+export const CASE_UNITS = ['si', 'us'] as const;
+export type CaseUnits = (typeof CASE_UNITS)[number];
+
 /** Action category of a load in a case file. */
 export type CaseAction = 'permanent' | 'imposed' | 'temporary';
 
-/** A load as written in a case file: positions in m, forces in kN, line loads in kN/m. */
+/**
+ * A load as written in a case file: positions in m, forces in kN, line loads in kN/m (with
+ * `units: "us"`: ft, kip and kip/ft).
+ */
 export type CaseLoad =
 	| { kind: 'point'; x: number; value: number; action: CaseAction; label?: string }
 	| { kind: 'uniform'; from: number; to: number; value: number; action: CaseAction; label?: string }
@@ -36,10 +53,16 @@ export interface CaseRestraint {
 	loadHeight?: 'top-flange' | 'shear-centre' | 'bottom-flange';
 }
 
-/** Partial factors (defaults: EN 1990 6.10 recommended values, γM0 = γM1 = 1.0). */
+/**
+ * Partial factors. Eurocode defaults: EN 1990 6.10 recommended values, γM0 = γM1 = 1.0. AISC
+ * defaults: ASCE 7-22 2.3.1 (LRFD: 1.4D; 1.2D + 1.6L) or 2.4.1 (ASD: D; D + L), the temporary
+ * load taking the live-load factor.
+ */
 export interface CaseFactors {
-	/** γG,sup: permanent load where unfavourable. */
+	/** γG,sup: permanent load where unfavourable; AISC: the dead-load factor with live load. */
 	permanent?: number;
+	/** AISC only: the dead-load factor of the dead-load-only combination (1.4 LRFD, 1.0 ASD). */
+	permanentAlone?: number;
 	/** γG,inf: permanent load where favourable (default 1.0; read by the checks). */
 	permanentFavourable?: number;
 	imposed?: number;
@@ -55,11 +78,18 @@ export interface CaseFactors {
 	 * EN 1991-1-6 Annex A1 recommended value for construction loads).
 	 */
 	psi0Temporary?: number;
-	/** `en1990-6.10` (default), `en1990-6.10ab` (the worse of 6.10a and 6.10b) or `custom`. */
+	/**
+	 * Eurocode: `en1990-6.10` (default), `en1990-6.10ab` (the worse of 6.10a and 6.10b) or
+	 * `custom`. AISC: `asce7-lrfd` (default on aisc-lrfd), `asce7-asd` (default on aisc-asd) or
+	 * `custom`.
+	 */
 	set?: string;
 }
 
-/** The beam as written in a case file: spans in m, section dimensions in mm. */
+/**
+ * The beam as written in a case file: spans in m, section dimensions in mm (with `units: "us"`:
+ * ft and in).
+ */
 export interface CaseBeam {
 	spans: number[];
 	supports: SupportKind[];
@@ -87,6 +117,10 @@ export interface CaseFile {
 	format: typeof CASE_FORMAT;
 	version: typeof CASE_VERSION;
 	title?: string;
+	/** Design basis (default `eurocode`). */
+	basis?: CaseBasis;
+	/** Units of the numbers in the file (default `si`). */
+	units?: CaseUnits;
 	beam: CaseBeam;
 	loads: CaseLoad[];
 	factors?: CaseFactors;
@@ -102,13 +136,16 @@ export interface CaseFile {
 	place?: string;
 }
 
-/** Partial factors after defaults. */
+/** Partial factors after defaults (the basis's own defaults). */
 export interface ResolvedFactors {
 	permanent: number;
 	imposed: number;
 	temporary: number;
-	gammaM0: number;
-	gammaM1: number;
+	/** Eurocode basis only: the AISC bases take φ or Ω from the Specification. */
+	gammaM0?: number;
+	gammaM1?: number;
+	/** AISC bases only: dead-load factor of the dead-load-only combination. */
+	permanentAlone?: number;
 	xi?: number;
 	psi0?: number;
 	psi0Temporary?: number;
@@ -119,6 +156,10 @@ export interface ResolvedFactors {
 /** A validated case in internal units (mm, N, N/mm, MPa). */
 export interface CaseModel {
 	title: string;
+	/** The design basis the case names (`eurocode` when it names none). */
+	basis: CaseBasis;
+	/** The units the file was written in, for reports and the command line to answer in. */
+	units: CaseUnits;
 	beam: BeamLine;
 	/** One resolved section per span (after section loss). */
 	sections: ResolvedSection[];
@@ -153,6 +194,8 @@ export interface CaseModel {
 	eta?: number;
 	gradeConfirmed?: boolean;
 	place?: string;
-	/** The case as read (file units), for echoing and storing. */
+	/** The case as read (file units, `units` kept), for echoing and storing. */
 	file: CaseFile;
+	/** The same case with its numbers in SI file units (m, kN, kN/m, kNm, mm, MPa, kg/m). */
+	fileSI: CaseFile;
 }

@@ -22,6 +22,8 @@ export function buildDesignCheckInput(model: CaseModel): DesignCheckInput {
 				? { kind: 'ends-only' }
 				: { kind: 'points', at: r.lateral };
 	const given = model.bearing !== undefined || model.bearingLoads !== undefined;
+	// ASCE 7 dead-load-only factor (AISC bases); the other names are shared with EN 1990.
+	const alone = f.permanentAlone === undefined ? {} : { gammaGAlone: f.permanentAlone };
 	return {
 		beam: model.beam,
 		sections: model.sections,
@@ -37,7 +39,8 @@ export function buildDesignCheckInput(model: CaseModel): DesignCheckInput {
 			psi0: f.psi0,
 			psi0T: f.psi0Temporary,
 			gammaM0: f.gammaM0,
-			gammaM1: f.gammaM1
+			gammaM1: f.gammaM1,
+			...alone
 		},
 		restraint,
 		loadHeight: r?.loadHeight ?? 'top-flange',

@@ -6,7 +6,7 @@
 import type { CaseModel } from '../case/types';
 import type { DesignBasis } from './design-basis';
 import type { FactorSettings } from './basis-types';
-import { DEFAULT_BASIS } from './bases';
+import { findBasis } from './bases';
 import { buildDesignCheckInput } from './from-case';
 import { computeGoverningCurve, type GoverningCurve } from './governing-curve';
 import type { DesignCheckInput, DesignCheckOutcome } from './inputs';
@@ -34,6 +34,7 @@ export interface DesignOutcome {
 export interface DesignOptions {
 	/** Also compute the governing capacity curve (one design run per position). */
 	curve?: boolean;
+	/** Overrides the basis the case names (tests). */
 	basis?: DesignBasis<FactorSettings>;
 }
 
@@ -44,7 +45,9 @@ export interface DesignOptions {
  * runDesign(model).answer.multiplier // the largest factor every deciding check allows
  */
 export function runDesign(model: CaseModel, options: DesignOptions = {}): DesignOutcome {
-	const basis = options.basis ?? DEFAULT_BASIS;
+	const basis = options.basis ?? findBasis(model.basis);
+	// checkCase refuses a case whose basis is missing; no other basis may answer for it.
+	if (!basis) throw new Error(`invariant: design basis "${model.basis}" is not available`);
 	const input = buildDesignCheckInput(model);
 	const run = (i: DesignCheckInput, o?: DesignRunOptions) => runDesignChecks(i, basis, o);
 	const checked = run(input);

@@ -1,8 +1,5 @@
 import type { GradeBand, GradeRow } from './types';
-import { US } from '../units';
-
-/** ksi to N/mm², rounded to 0.1. */
-const ksi = (value: number): number => Math.round(value * US.ksiToMPa * 10) / 10;
+import { US_GRADE_ROWS } from './us-grades';
 
 /** Bands from parallel lists: band tops (mm), fy and fu (N/mm²). */
 function makeBands(tops: number[], fy: number[], fu: number[]): GradeBand[] {
@@ -15,14 +12,15 @@ const EN_SOURCE = '[C, secondary: reproduction of BS EN 10025-2:2004 Table 7]';
 const ONE_BAND = [250];
 
 /**
- * Steel grades as data, each with its source tag (engineering reference B.1, C.1, E.2).
+ * European grades as data, each with its source tag (engineering reference B.1).
  * fu is the lower end of the standard's Rm range: 3 ≤ t ≤ 100 mm, then the ranges above.
  */
-export const GRADE_ROWS: readonly GradeRow[] = [
+const EN_GRADE_ROWS: readonly GradeRow[] = [
 	{
 		id: 'S235',
 		name: 'S235 (EN 10025-2)',
 		standard: EN_10025_2,
+		region: 'eurocode',
 		source: EN_SOURCE,
 		bands: makeBands(
 			EN_TOPS,
@@ -34,6 +32,7 @@ export const GRADE_ROWS: readonly GradeRow[] = [
 		id: 'S275',
 		name: 'S275 (EN 10025-2)',
 		standard: EN_10025_2,
+		region: 'eurocode',
 		source: EN_SOURCE,
 		bands: makeBands(
 			EN_TOPS,
@@ -45,6 +44,7 @@ export const GRADE_ROWS: readonly GradeRow[] = [
 		id: 'S355',
 		name: 'S355 (EN 10025-2)',
 		standard: EN_10025_2,
+		region: 'eurocode',
 		source: EN_SOURCE,
 		bands: makeBands(
 			EN_TOPS,
@@ -56,33 +56,19 @@ export const GRADE_ROWS: readonly GradeRow[] = [
 		id: 'S460',
 		name: 'S460 M/ML (EN 10025-4)',
 		standard: 'EN 10025-4 (S460M/ML)',
+		region: 'eurocode',
 		source: '[M: EN 10025-4 thickness steps; fu from EN 1993-1-1 Table 3.1]',
 		note:
 			'S460 is not in EN 10025-2:2004; these are the thermomechanically rolled S460M/ML ' +
 			'values (EN 10025-3 S460N/NL has the same yield steps).',
 		bands: makeBands([16, 40, 63, 80, 100], [460, 440, 430, 410, 400], [540, 540, 530, 530, 530])
-	},
-	{
-		id: 'A36',
-		name: 'ASTM A36',
-		standard: 'ASTM A36',
-		source: '[C, secondary: summary of AISC Manual Table 2-4]',
-		bands: makeBands(ONE_BAND, [ksi(36)], [ksi(58)])
-	},
-	{
-		id: 'A992',
-		name: 'ASTM A992',
-		standard: 'ASTM A992',
-		source: '[C: AISC Modern Steel Construction, "Are You Properly Specifying Materials?" (2009)]',
-		bands: makeBands(ONE_BAND, [ksi(50)], [ksi(65)])
-	},
-	{
-		id: 'A572-50',
-		name: 'ASTM A572 Grade 50',
-		standard: 'ASTM A572',
-		source: '[M: ASTM A572 Gr 50]',
-		bands: makeBands(ONE_BAND, [ksi(50)], [ksi(65)])
-	},
+	}
+];
+
+/** Current grades of both bases, then the lower bound for unidentified mild steel. */
+export const GRADE_ROWS: readonly GradeRow[] = [
+	...EN_GRADE_ROWS,
+	...US_GRADE_ROWS,
 	{
 		id: 'unknown-old',
 		name: 'Older steel, grade unknown',

@@ -1,5 +1,4 @@
 import type { GradeBand, GradeRow } from './types';
-import { US } from '../units';
 
 /** AD 135 thickness bands: flange ≤ 16, 16–19 and 20–40 mm; fu is not given. */
 function makeAd135Bands(upTo16: number, upTo19: number, upTo40: number): GradeBand[] {
@@ -10,9 +9,6 @@ function makeAd135Bands(upTo16: number, upTo19: number, upTo40: number): GradeBa
 	];
 }
 
-/** ksi to N/mm², rounded to 0.1. */
-const toMPa = (ksi: number): number => Math.round(ksi * US.ksiToMPa * 10) / 10;
-
 const AD135 = 'SCI Advisory Desk AD 135, Table 1';
 const AD135_SOURCE = '[C: SCI AD 135 Table 1; its footnotes are not reproduced — consult AD 135]';
 const CONFIRM =
@@ -22,12 +18,23 @@ const CONFIRM =
 /** One AD 135 row. */
 function makeAd135Row(id: string, name: string, bands: GradeBand[]): GradeRow {
 	const source = AD135_SOURCE;
-	return { id, name, standard: AD135, source, bands, needsConfirmation: true, note: CONFIRM };
+	const region = 'eurocode';
+	return {
+		id,
+		name,
+		standard: AD135,
+		source,
+		bands,
+		region,
+		needsConfirmation: true,
+		note: CONFIRM
+	};
 }
 
 /**
- * Historic steels by era (UK SCI AD 135 Table 1; US ASTM A7), each a default the user must
- * confirm. Thickness is the flange thickness; AD 135 covers flanges up to 40 mm.
+ * Historic steels by era as UK guidance gives them (SCI AD 135 Table 1), each a default the user
+ * must confirm. Thickness is the flange thickness; AD 135 covers flanges up to 40 mm. The US path
+ * by ASTM specification is in ./us-historic-grades.ts.
  */
 export const HISTORIC_GRADE_ROWS: readonly GradeRow[] = [
 	makeAd135Row('uk-1910-1947', 'British sections, 1910–1947', makeAd135Bands(235, 235, 225)),
@@ -42,14 +49,5 @@ export const HISTORIC_GRADE_ROWS: readonly GradeRow[] = [
 	),
 	makeAd135Row('continental-other', 'Continental sections, other', makeAd135Bands(220, 210, 210)),
 	makeAd135Row('us-to-1968', 'American sections up to 1968', makeAd135Bands(230, 230, 230)),
-	makeAd135Row('us-from-1969', 'American sections from 1969', makeAd135Bands(250, 250, 250)),
-	{
-		id: 'A7',
-		name: 'ASTM A7 (1939–1967)',
-		standard: 'ASTM A7-39 onward',
-		source: '[C, secondary: quotation of the A7-39 requirements: yield ≥ 33, tensile 60–72 ksi]',
-		needsConfirmation: true,
-		note: CONFIRM,
-		bands: [{ upTo: 250, fy: toMPa(33), fu: toMPa(60) }]
-	}
+	makeAd135Row('us-from-1969', 'American sections from 1969', makeAd135Bands(250, 250, 250))
 ];

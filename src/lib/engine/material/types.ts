@@ -30,6 +30,12 @@ export interface GradeBand {
 	fu: number | null;
 }
 
+/** Where a grade belongs: the design basis whose picker lists it first. */
+export type GradeRegion = 'eurocode' | 'us' | 'any';
+
+/** Product forms a grade is made in; a grade without the list is made in every form. */
+export type GradeProduct = 'open' | 'rectangular-hollow' | 'round-hollow';
+
 /** A grade row of the library. */
 export interface GradeRow {
 	id: string;
@@ -38,6 +44,12 @@ export interface GradeRow {
 	source: string;
 	/** Bands in rising thickness. */
 	bands: readonly GradeBand[];
+	/** Bands for round hollow sections where they differ (ASTM A500 Gr B and C). */
+	roundBands?: readonly GradeBand[];
+	/** The basis whose picker lists it (default `any`). */
+	region?: GradeRegion;
+	/** Product forms the standard covers (default: all). */
+	products?: readonly GradeProduct[];
 	needsConfirmation?: boolean;
 	note?: string;
 }

@@ -22,7 +22,6 @@ import {
 	type SummaryQuantity,
 	type SummaryUnits
 } from './summary-units';
-import { restateReportWords } from './report-words';
 import { writeAssumptions, writeNotices } from './texts';
 import { REPORT_FORMAT, REPORT_VERSION, type CheckReport } from './types';
 import { ENGINE_VERSION } from './version';
@@ -33,10 +32,7 @@ export interface ReportOptions {
 	curve?: boolean;
 	/** Date shown in the shared summary, as the user reads it (the engine has no clock). */
 	date?: string;
-	/**
-	 * Units of the report's words: summaries, notices, assumptions, reasons, notes and names
-	 * (default SI). The report's numbers stay in SI whatever this says.
-	 */
+	/** Units of the summary texts only (default SI); the report's numbers stay in SI. */
 	units?: SummaryUnits;
 }
 
@@ -48,8 +44,7 @@ export function buildCheckReport(
 ): CheckReport {
 	const { checked } = design;
 	const outside = checked.verdict.verdict === 'outside-scope';
-	const units = options.units ?? 'si';
-	const answer = reportAnswer(design.answer, model.loadLabels, units);
+	const answer = reportAnswer(design.answer, model.loadLabels);
 	const route = checked.verdict.route;
 	const hasTemporary = model.loads.some((l) => l.action === 'temporary');
 	const collapse =
@@ -71,14 +66,13 @@ export function buildCheckReport(
 			...(checked.effects?.notAvailable ?? [])
 		])
 	];
-	const assumptions = [...new Set([...writeAssumptions(model, units), ...checked.assumptions])];
-	const restraint = describeRestraint(design.input.restraint, design.input.loadHeight, units);
+	const assumptions = [...new Set([...writeAssumptions(model), ...checked.assumptions])];
+	const restraint = describeRestraint(design.input.restraint, design.input.loadHeight);
 	const report: CheckReport = {
 		format: REPORT_FORMAT,
 		version: REPORT_VERSION,
 		title: model.title,
 		engineVersion: ENGINE_VERSION,
-		textUnits: units,
 		units: {
 			length: 'm',
 			force: 'kN',
@@ -106,8 +100,9 @@ export function buildCheckReport(
 		assumptions: [`Restraint: ${restraint}.`, ...assumptions],
 		case: structuredClone(model.file)
 	};
-	restateReportWords(report, units);
-	report.summary = summarise(model, report, restraint, options);
+	const restraintIn = (u: SummaryUnits) =>
+		describeRestraint(design.input.restraint, design.input.loadHeight, u);
+	report.summary = summarise(model, report, restraintIn, options);
 	return assertAllFinite(report, 'report');
 }
 
@@ -144,13 +139,13 @@ export function describeRestraint(
 }
 
 /**
- * Short and long plain-text summaries, written from the report itself (its words already in the
- * units asked for, see report-words.ts).
+ * Short and long plain-text summaries, written from the report itself in the units asked for.
+ * Explanations quoted from the checks (route reasons, notes, notices) keep their SI figures.
  */
 function summarise(
 	model: CaseModel,
 	r: CheckReport,
-	restraint: string,
+	restraintIn: (units: SummaryUnits) => string,
 	options: ReportOptions
 ): { short: string; long: string } {
 	const a = r.answer;
@@ -163,9 +158,9 @@ function summarise(
 		basis: r.design.basis,
 		spans: model.beam.spans.map(mmToM),
 		supports: model.beam.supports,
-		section: [...new Set(r.sections.map((s) => s.designation))].join(' / '),
-		grade: [...new Set(r.grades.map((g) => g?.name ?? 'given Mp'))].join(' / '),
-		loads: model.file.loads.map((l) => ({
+		section: [...new Set(model.sections.map((s) => s.designation))].join(' / '),
+		grade: [...new Set(model.grades.map((g) => g?.name ?? 'given Mp'))].join(' / '),
+		loads: model.fileSI.loads.map((l) => ({
 			action: l.action,
 			kind: l.kind,
 			value:
@@ -184,7 +179,7 @@ function summarise(
 				: null,
 		reserve: a.reserve === null ? null : a.reserve * 100,
 		allowable: a.allowable.map((t) => describeAllowable(t, units)),
-		restraint,
+		restraint: restraintIn(units),
 		checks: r.checks.map((c) => ({
 			label: c.label,
 			clause: c.clause,
