@@ -7,6 +7,7 @@ import { explainMissingBasis } from './checks/bases';
 import { runDesign } from './checks/run-design';
 import type { InputIssue } from './model/issue';
 import { buildCheckReport, type ReportOptions } from './report/build-report';
+import { restateUnits } from './report/restate-units';
 import type { CheckReport } from './report/types';
 
 export { ENGINE_VERSION } from './report/version';
@@ -37,10 +38,15 @@ export type CheckOutcome =
  */
 export function checkCase(json: unknown, options: ReportOptions = {}): CheckOutcome {
 	const parsed = parseCase(json);
-	if (!parsed.ok) return { ok: false, issues: parsed.issues };
+	// Messages quote figures in the units the report is read in, like the report's own words.
+	const say = (i: InputIssue): InputIssue => ({
+		...i,
+		message: restateUnits(i.message, options.units ?? 'si')
+	});
+	if (!parsed.ok) return { ok: false, issues: parsed.issues.map(say) };
 	const missing = explainMissingBasis(parsed.value.basis);
-	if (missing) return { ok: false, issues: [missing] };
+	if (missing) return { ok: false, issues: [say(missing)] };
 	const design = runDesign(parsed.value, { curve: options.curve });
 	const report = buildCheckReport(parsed.value, design, options);
-	return { ok: true, report, warnings: parsed.warnings };
+	return { ok: true, report, warnings: parsed.warnings.map(say) };
 }

@@ -22,6 +22,7 @@ import {
 	type SummaryQuantity,
 	type SummaryUnits
 } from './summary-units';
+import { restateReportWords } from './report-words';
 import { writeAssumptions, writeNotices } from './texts';
 import { REPORT_FORMAT, REPORT_VERSION, type CheckReport } from './types';
 import { ENGINE_VERSION } from './version';
@@ -32,7 +33,10 @@ export interface ReportOptions {
 	curve?: boolean;
 	/** Date shown in the shared summary, as the user reads it (the engine has no clock). */
 	date?: string;
-	/** Units of the summary texts only (default SI); the report's numbers stay in SI. */
+	/**
+	 * Units of the report's words: summaries, notices, assumptions, reasons, notes and names
+	 * (default SI). The report's numbers stay in SI whatever this says.
+	 */
 	units?: SummaryUnits;
 }
 
@@ -44,7 +48,8 @@ export function buildCheckReport(
 ): CheckReport {
 	const { checked } = design;
 	const outside = checked.verdict.verdict === 'outside-scope';
-	const answer = reportAnswer(design.answer, model.loadLabels);
+	const units = options.units ?? 'si';
+	const answer = reportAnswer(design.answer, model.loadLabels, units);
 	const route = checked.verdict.route;
 	const hasTemporary = model.loads.some((l) => l.action === 'temporary');
 	const collapse =
@@ -66,13 +71,14 @@ export function buildCheckReport(
 			...(checked.effects?.notAvailable ?? [])
 		])
 	];
-	const assumptions = [...new Set([...writeAssumptions(model), ...checked.assumptions])];
-	const restraint = describeRestraint(design.input.restraint, design.input.loadHeight);
+	const assumptions = [...new Set([...writeAssumptions(model, units), ...checked.assumptions])];
+	const restraint = describeRestraint(design.input.restraint, design.input.loadHeight, units);
 	const report: CheckReport = {
 		format: REPORT_FORMAT,
 		version: REPORT_VERSION,
 		title: model.title,
 		engineVersion: ENGINE_VERSION,
+		textUnits: units,
 		units: {
 			length: 'm',
 			force: 'kN',
@@ -100,9 +106,8 @@ export function buildCheckReport(
 		assumptions: [`Restraint: ${restraint}.`, ...assumptions],
 		case: structuredClone(model.file)
 	};
-	const restraintIn = (u: SummaryUnits) =>
-		describeRestraint(design.input.restraint, design.input.loadHeight, u);
-	report.summary = summarise(model, report, restraintIn, options);
+	restateReportWords(report, units);
+	report.summary = summarise(model, report, restraint, options);
 	return assertAllFinite(report, 'report');
 }
 
@@ -139,13 +144,13 @@ export function describeRestraint(
 }
 
 /**
- * Short and long plain-text summaries, written from the report itself in the units asked for.
- * Explanations quoted from the checks (route reasons, notes, notices) keep their SI figures.
+ * Short and long plain-text summaries, written from the report itself (its words already in the
+ * units asked for, see report-words.ts).
  */
 function summarise(
 	model: CaseModel,
 	r: CheckReport,
-	restraintIn: (units: SummaryUnits) => string,
+	restraint: string,
 	options: ReportOptions
 ): { short: string; long: string } {
 	const a = r.answer;
@@ -158,8 +163,8 @@ function summarise(
 		basis: r.design.basis,
 		spans: model.beam.spans.map(mmToM),
 		supports: model.beam.supports,
-		section: [...new Set(model.sections.map((s) => s.designation))].join(' / '),
-		grade: [...new Set(model.grades.map((g) => g?.name ?? 'given Mp'))].join(' / '),
+		section: [...new Set(r.sections.map((s) => s.designation))].join(' / '),
+		grade: [...new Set(r.grades.map((g) => g?.name ?? 'given Mp'))].join(' / '),
 		loads: model.fileSI.loads.map((l) => ({
 			action: l.action,
 			kind: l.kind,
@@ -179,7 +184,7 @@ function summarise(
 				: null,
 		reserve: a.reserve === null ? null : a.reserve * 100,
 		allowable: a.allowable.map((t) => describeAllowable(t, units)),
-		restraint: restraintIn(units),
+		restraint,
 		checks: r.checks.map((c) => ({
 			label: c.label,
 			clause: c.clause,
