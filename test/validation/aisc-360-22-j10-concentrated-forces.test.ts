@@ -108,6 +108,27 @@ describe('J10.4 web sidesway buckling (φ 0.85, Ω 1.76)', () => {
 	});
 });
 
+describe('J10.4 with the rotational restraint of the loaded flange unknown (our cautious reading)', () => {
+	const run = (LbIn: number, restrained: boolean | 'unknown') =>
+		computeWebSideswayBuckling({
+			tw: inch(s.tw),
+			tf: inch(s.tf),
+			h: inch(h),
+			bf: inch(s.bf),
+			Lb: inch(LbIn),
+			compressionFlangeRestrained: restrained,
+			momentBelowYield: false
+		});
+	it('ρ ≤ 1.7: the lower J10-7 governs; 1.7 < ρ ≤ 2.3: J10-6 still applies; ρ > 2.3: none', () => {
+		expect(run(240, 'unknown').clause).toBe('AISC 360-22 J10.4 (J10-7)'); // ρ = 1.41
+		const mid = run(180, 'unknown'); // ρ = 45.2/24 = 1.88
+		expect(mid.applies).toBe(true);
+		expect(mid.clause).toBe('AISC 360-22 J10.4 (J10-6)');
+		expect(run(180, false).applies).toBe(false);
+		expect(run(120, 'unknown').applies).toBe(false); // ρ = 2.83
+	});
+});
+
 describe('J10.5 web compression buckling (φ 0.90, Ω 1.67)', () => {
 	const run = (distanceFromEnd: number) =>
 		computeWebCompressionBuckling({

@@ -117,8 +117,12 @@ export interface WebSideswayInput {
 	bf: number;
 	/** Largest laterally unbraced length along either flange at the force, mm. */
 	Lb: number;
-	/** True where the loaded (compression) flange is restrained against rotation. */
-	compressionFlangeRestrained: boolean;
+	/**
+	 * Whether the loaded (compression) flange is restrained against rotation. `'unknown'` takes
+	 * the lower of the two cases that apply: J10-7 for ρ ≤ 1.7, but J10-6 for 1.7 < ρ ≤ 2.3
+	 * (assuming "free to rotate" alone would drop the check there, which is not cautious).
+	 */
+	compressionFlangeRestrained: boolean | 'unknown';
 	/** True where the required moment at the force is below My (picks Cr). */
 	momentBelowYield: boolean;
 }
@@ -132,6 +136,12 @@ export interface WebSideswayInput {
  * state does not apply.
  */
 export function computeWebSideswayBuckling(o: WebSideswayInput): WebForceStrength {
+	if (o.compressionFlangeRestrained === 'unknown') {
+		const free = computeWebSideswayBuckling({ ...o, compressionFlangeRestrained: false });
+		const held = computeWebSideswayBuckling({ ...o, compressionFlangeRestrained: true });
+		if (!free.applies) return held;
+		return held.applies && held.Rn < free.Rn ? held : free;
+	}
 	const rho = o.h / o.tw / (o.Lb / o.bf);
 	const Cr = o.momentBelowYield ? CR_BELOW_YIELD : CR_AT_YIELD;
 	const limit = o.compressionFlangeRestrained ? 2.3 : 1.7;
