@@ -46,15 +46,19 @@ export function listLoadArrangements(options: LoadArrangementOptions): LoadArran
 	}
 	const out: LoadArrangement[] = [];
 	for (const c of combinations) {
-		for (const permanent of ['sup', 'inf'] as const) {
+		// ASCE 7 gravity combinations give dead load one factor: no favourable arrangement.
+		const permanents = c.permanentSingle ? (['sup'] as const) : (['sup', 'inf'] as const);
+		for (const permanent of permanents) {
 			const gammaG = permanent === 'sup' ? c.gammaGsup : c.gammaGinf;
-			for (let mask = 0; mask < 1 << imposedSpans.length; mask++) {
+			// With no factor on imposed load every pattern is the same arrangement (1.4D).
+			const patterns = c.gammaImposed === 0 ? 1 : 1 << imposedSpans.length;
+			for (let mask = 0; mask < patterns; mask++) {
 				const on = imposedSpans.filter((_, k) => mask & (1 << k));
 				const imposedBySpan = Array.from({ length: spanCount }, (_, i) =>
 					on.includes(i) ? c.gammaImposed : 0
 				);
 				out.push({
-					name: nameArrangement(c.name, permanent, on, imposedSpans.length > 0),
+					name: nameArrangement(c, permanent, on, imposedSpans.length > 0),
 					combination: c.name,
 					permanent,
 					gammaG,
@@ -68,13 +72,16 @@ export function listLoadArrangements(options: LoadArrangementOptions): LoadArran
 }
 
 function nameArrangement(
-	combination: string,
+	c: Combination,
 	permanent: 'sup' | 'inf',
 	on: number[],
 	hasImposed: boolean
 ): string {
-	const g = `${combination}, permanent ${permanent === 'sup' ? 'upper' : 'lower'} factor`;
+	const g = c.permanentSingle
+		? c.name
+		: `${c.name}, permanent ${permanent === 'sup' ? 'upper' : 'lower'} factor`;
+	const word = c.imposedWord ?? 'imposed';
 	if (!hasImposed) return g;
-	if (on.length === 0) return `${g}, no imposed load`;
-	return `${g}, imposed on span${on.length > 1 ? 's' : ''} ${on.map((i) => i + 1).join(', ')}`;
+	if (on.length === 0) return `${g}, no ${word} load`;
+	return `${g}, ${word} on span${on.length > 1 ? 's' : ''} ${on.map((i) => i + 1).join(', ')}`;
 }

@@ -1,0 +1,77 @@
+/**
+ * The web of an I-shape under a force on a flange, AISC 360-22 J10 without stiffeners: the
+ * least available strength of web local yielding (J10.2), web crippling (J10.3), web sidesway
+ * buckling (J10.4, where the loaded flange is compressed and the flanges are not both held at
+ * the force) and web compression buckling (J10.5, a force passing through to a support under
+ * the other flange). The equations are in concentrated.ts.
+ *
+ * Our cautious choices, said in the row's note: forces are taken as compressive (a load hung
+ * from the bottom flange is read like one bearing on it); the distance from the member end is
+ * to the centre of the bearing; for J10.4 the compression flange is taken as not restrained
+ * against rotation and Cr = 480 000 ksi (the value for Mu ≥ My), the lower strengths.
+ */
+import type { WebForceInput, WebReading } from '../basis-types';
+import {
+	computeWebCompressionBuckling,
+	computeWebCrippling,
+	computeWebLocalYielding,
+	computeWebSideswayBuckling,
+	type WebForceStrength
+} from './concentrated';
+import { computeAvailableStrength, type AiscMethod } from './resistance';
+
+const NAMES = {
+	'J10.2': 'web local yielding',
+	'J10.3': 'web crippling',
+	'J10.4': 'web sidesway buckling',
+	'J10.5': 'web compression buckling'
+} as const;
+
+type Key = keyof typeof NAMES;
+
+/** The web reading of an AISC basis at one force. */
+export function computeAiscWebReading(o: WebForceInput, method: AiscMethod): WebReading {
+	const k = o.tf + o.r;
+	const h = o.hw - 2 * o.r;
+	const d = o.h;
+	const distanceFromEnd = o.endDistance + o.ss / 2;
+	const base = { tw: o.tw, tf: o.tf, d, E: o.E, Fyw: o.fyw, lb: o.ss, distanceFromEnd };
+	const found: [Key, WebForceStrength][] = [
+		['J10.2', computeWebLocalYielding({ ...base, k })],
+		['J10.3', computeWebCrippling(base)]
+	];
+	if (o.throughWeb) found.push(['J10.5', computeWebCompressionBuckling({ ...base, h })]);
+	else if (o.loadedFlangeCompressed && o.unbracedLength > 0) {
+		const sway = computeWebSideswayBuckling({
+			tw: o.tw,
+			tf: o.tf,
+			h,
+			bf: o.bf,
+			Lb: o.unbracedLength,
+			compressionFlangeRestrained: false,
+			momentBelowYield: false
+		});
+		found.push(['J10.4', sway]);
+	}
+	const strengths = found.flatMap(([key, s]) =>
+		s.applies
+			? [{ key, clause: s.clause, fRd: computeAvailableStrength(s.Rn, s.factors, method) }]
+			: []
+	);
+	const least = strengths.reduce((a, b) => (b.fRd < a.fRd ? b : a));
+	const listed = strengths.map((s) => `${NAMES[s.key]} ${(s.fRd / 1000).toFixed(1)} kN`).join(', ');
+	const sway = found.some(([key]) => key === 'J10.4')
+		? ' J10.4 with the compression flange taken as free to rotate and Cr = 480 000 ksi (cautious).'
+		: '';
+	return {
+		fRd: least.fRd,
+		kind: NAMES[least.key],
+		place: o.throughWeb ? 'through' : distanceFromEnd <= d ? 'end' : 'span',
+		clause: least.clause,
+		note:
+			`Available strengths: ${listed}; bearing length lb ${Math.round(o.ss)} mm, ` +
+			`${Math.round(distanceFromEnd)} mm from the member end.${sway}`,
+		values: { ss: o.ss },
+		bendingInteraction: null
+	};
+}
