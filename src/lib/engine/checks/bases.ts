@@ -6,6 +6,7 @@ import type { CaseBasis } from '../case/types';
 import type { InputIssue } from '../model/issue';
 import type { FactorSettings } from './basis-types';
 import type { DesignBasis } from './design-basis';
+import { aiscAsd, aiscLrfd } from './aisc360/index';
 import { en1993 } from './en1993/index';
 
 /** The basis a case is checked on when it names none. */
@@ -13,7 +14,9 @@ export const DEFAULT_BASIS: DesignBasis<FactorSettings> = en1993;
 
 /** Each basis a case may name; one not yet built is absent, never stood in for by another. */
 const BASES: Partial<Record<CaseBasis, DesignBasis<FactorSettings>>> = {
-	eurocode: en1993
+	eurocode: en1993,
+	'aisc-lrfd': aiscLrfd,
+	'aisc-asd': aiscAsd
 };
 
 /** Plain names of the bases a case may name, for messages. */

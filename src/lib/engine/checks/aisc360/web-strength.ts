@@ -7,8 +7,9 @@
  *
  * Our cautious choices, said in the row's note: forces are taken as compressive (a load hung
  * from the bottom flange is read like one bearing on it); the distance from the member end is
- * to the centre of the bearing; for J10.4 the compression flange is taken as not restrained
- * against rotation and Cr = 480 000 ksi (the value for Mu ≥ My), the lower strengths.
+ * to the centre of the bearing; for J10.4 the rotational restraint of the loaded flange is taken
+ * as unknown (the lower of the two cases that apply) and Cr = 480 000 ksi (the value for
+ * Mu ≥ My), the lower strengths.
  */
 import type { WebForceInput, WebReading } from '../basis-types';
 import {
@@ -48,7 +49,7 @@ export function computeAiscWebReading(o: WebForceInput, method: AiscMethod): Web
 			h,
 			bf: o.bf,
 			Lb: o.unbracedLength,
-			compressionFlangeRestrained: false,
+			compressionFlangeRestrained: 'unknown',
 			momentBelowYield: false
 		});
 		found.push(['J10.4', sway]);
@@ -61,7 +62,8 @@ export function computeAiscWebReading(o: WebForceInput, method: AiscMethod): Web
 	const least = strengths.reduce((a, b) => (b.fRd < a.fRd ? b : a));
 	const listed = strengths.map((s) => `${NAMES[s.key]} ${(s.fRd / 1000).toFixed(1)} kN`).join(', ');
 	const sway = found.some(([key]) => key === 'J10.4')
-		? ' J10.4 with the compression flange taken as free to rotate and Cr = 480 000 ksi (cautious).'
+		? ' J10.4 with the flange rotation restraint unknown (the lower case that applies) and ' +
+			'Cr = 480 000 ksi (cautious).'
 		: '';
 	return {
 		fRd: least.fRd,
