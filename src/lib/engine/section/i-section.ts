@@ -1,6 +1,7 @@
 import type { IDims, SectionProps } from './types';
 import { computeSpandrelArea, computeSpandrelOffset, computeSpandrelOwnI } from './fillet';
 import { STEEL_DENSITY } from '../units';
+import { computeTaperedIProperties } from './tapered-i';
 
 /** Options for computeISectionProperties. */
 export interface ISectionOptions {
@@ -26,6 +27,8 @@ export function computeISectionProperties(
 	options: ISectionOptions = {}
 ): SectionProps {
 	const welded = options.welded ?? false;
+	// S shapes: tapered flanges need their own outline (a parallel flange overstates Iz by ~20 %).
+	if (!welded && dims.slope) return computeTaperedIProperties(dims);
 	const { h, b, tw, tf } = dims;
 	const r = welded ? 0 : dims.r;
 	const hw = h - 2 * tf;

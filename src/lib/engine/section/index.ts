@@ -16,6 +16,7 @@ export {
 	type ISectionOptions
 } from './i-section';
 export { computeRhsProperties, computeRhsCornerRadii } from './rhs';
+export { applyDesignWall, computeHssCornerRadii, designWallFactor } from './hss-wall';
 export { computeChsProperties } from './chs';
 export { computeFlatProperties } from './flat';
 export { applySectionLoss } from './loss';

@@ -31,13 +31,21 @@ export function applySectionLoss(
 ): LossOutcome {
 	if (c === 0) return { ok: true, dims };
 	if (shape === 'I' || shape === 'welded-I') {
-		const { h, b, tw, tf, r } = dims as IDims;
+		const { h, b, tw, tf, r, slope } = dims as IDims;
 		if (tf - 2 * c <= 0) return { ok: false, issues: [makeConsumedIssue('flange', tf, c)] };
 		if (tw - 2 * c <= 0) return { ok: false, issues: [makeConsumedIssue('web', tw, c)] };
 		const rAfter = shape === 'I' ? r + c : 0;
 		return {
 			ok: true,
-			dims: { h: h - 2 * c, b: b - 2 * c, tw: tw - 2 * c, tf: tf - 2 * c, r: rAfter }
+			dims: {
+				h: h - 2 * c,
+				b: b - 2 * c,
+				tw: tw - 2 * c,
+				tf: tf - 2 * c,
+				r: rAfter,
+				// A tapered flange keeps its slope: both faces lose c.
+				...(slope === undefined ? {} : { slope })
+			}
 		};
 	}
 	if (shape === 'RHS') {

@@ -12,6 +12,10 @@ export interface ReadSpec {
 	designation: string;
 	family?: SectionFamily;
 	standard?: string;
+	/** The library family's usual grade, a material id. */
+	defaultGrade?: string;
+	/** Nominal wall of a US HSS or pipe, mm. */
+	nominalWall?: number;
 }
 
 /** A short description of a measured section, e.g. `I 300x150x7.1x10.7 (measured)`. */
@@ -49,13 +53,11 @@ function readDesignation(text: string): Checked<ReadSpec> {
 		const message = `No section called "${text}" in the library. Nearest: ${near}.`;
 		return refuse('designation', 'section-unknown', message);
 	}
-	const { designation, family, standard, dims } = found;
+	const { designation, family, standard, dims, defaultGrade, nominalWall } = found;
 	const shape = found.shape as Dimensioned;
-	return {
-		ok: true,
-		value: { shape, dims: { ...dims }, designation, family, standard },
-		warnings: []
-	};
+	const value: ReadSpec = { shape, dims: { ...dims }, designation, family, standard, defaultGrade };
+	if (nominalWall !== undefined) value.nominalWall = nominalWall;
+	return { ok: true, value, warnings: [] };
 }
 
 /**

@@ -44,7 +44,7 @@ export function resolveSection(
 	if ('mp' in spec) return resolveKnownMp(spec, loss);
 	const read = readSectionSpec(spec);
 	if (!read.ok) return read;
-	const { shape, designation, family, standard } = read.value;
+	const { shape, designation, family, standard, defaultGrade, nominalWall } = read.value;
 	const dimIssues = validateSectionDims(shape, read.value.dims);
 	if (dimIssues.length > 0) return { ok: false, issues: dimIssues };
 	const reduced = applySectionLoss(shape, read.value.dims, loss);
@@ -66,5 +66,8 @@ export function resolveSection(
 		loss,
 		governingThickness: findGoverningThickness(shape, dims)
 	};
+	// Library identity only: measured sections have no family grade or table wall.
+	if (defaultGrade !== undefined) value.defaultGrade = defaultGrade;
+	if (nominalWall !== undefined) value.nominalWall = nominalWall;
 	return { ok: true, value, warnings: read.warnings };
 }

@@ -1,18 +1,26 @@
 import type { LibrarySection } from './types';
-import { listSections } from './library';
+import type { SectionRecord } from './make-section';
+import { getLibrarySection, listSectionRecords } from './library';
 import { parseDesignation } from './designation';
 
 export { listSections } from './library';
 
-let indexed: { section: LibrarySection; numbers: number[] }[] | null = null;
+interface Indexed {
+	section: SectionRecord;
+	numbers: number[];
+	/** Pipe weight class; null for every other family. */
+	weight: string | null;
+}
+
+let indexed: Indexed[] | null = null;
 
 /** Every library section with its designation's numbers, parsed once (the tables never change). */
-function listIndexed(): { section: LibrarySection; numbers: number[] }[] {
+function listIndexed(): Indexed[] {
 	if (!indexed) {
-		indexed = listSections().map((section) => ({
-			section,
-			numbers: parseDesignation(section.designation).numbers
-		}));
+		indexed = listSectionRecords().map((section) => {
+			const { numbers, weight } = parseDesignation(section.designation);
+			return { section, numbers, weight };
+		});
 	}
 	return indexed;
 }
@@ -24,18 +32,22 @@ function isSameNumbers(a: number[], b: number[]): boolean {
 
 /**
  * Finds a library section by designation, forgiving how it is typed: `305x165x40`,
- * `UB305x165x40`, `w 12 x 26`, `HE 300 B`, `SHS 100x100x5`, `100x100x6,3`, `×` or `X`.
- * Without a family, the first family whose designation has exactly these numbers wins
- * (UB and UC serial sizes never collide).
+ * `UB305x165x40`, `w 12 x 26`, `HE 300 B`, `SHS 100x100x5`, `100x100x6,3`, `×` or `X`,
+ * `HSS8x6x1/2`, `Pipe 4 XS` (a pipe without its weight class is the standard weight).
+ * Without a family, the first family whose designation has exactly these numbers wins, in
+ * library order (UB and UC serial sizes never collide; hot-finished before cold-formed, W
+ * before HP).
  * @example findSection('305 x 165 x 40 UB')?.designation // 'UB 305x165x40'
  * @example findSection('UB 305x165x41') // null
  */
 export function findSection(text: string): LibrarySection | null {
 	const parsed = parseDesignation(text);
 	if (parsed.unknownWord !== null || parsed.numbers.length === 0) return null;
-	for (const { section, numbers } of listIndexed()) {
-		if (parsed.family && section.family !== parsed.family) continue;
-		if (isSameNumbers(numbers, parsed.numbers)) return section;
+	const weight = parsed.family === 'PIPE' ? (parsed.weight ?? 'std') : null;
+	for (const entry of listIndexed()) {
+		if (parsed.family && entry.section.family !== parsed.family) continue;
+		if (weight !== null && entry.weight !== weight) continue;
+		if (isSameNumbers(entry.numbers, parsed.numbers)) return getLibrarySection(entry.section);
 	}
 	return null;
 }

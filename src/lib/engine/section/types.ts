@@ -3,7 +3,24 @@
  * All lengths in mm; property names match the case-file / CLI JSON (`props`, `dims`).
  */
 
-export type SectionFamily = 'UB' | 'UC' | 'IPE' | 'HEA' | 'HEB' | 'W' | 'SHS' | 'RHS' | 'CHS';
+export type SectionFamily =
+	| 'UB'
+	| 'UC'
+	| 'IPE'
+	| 'HEA'
+	| 'HEB'
+	| 'HEM'
+	| 'W'
+	| 'HP' /* US bearing piles */
+	| 'S' /* US American Standard beams */
+	| 'HSS' /* US hollow structural sections: rectangular, square (shape RHS) and round (CHS) */
+	| 'PIPE' /* US steel pipe, Std / XS / XXS */
+	| 'SHS' /* hot-finished, EN 10210-2 */
+	| 'RHS'
+	| 'CHS'
+	| 'CFSHS' /* cold-formed, EN 10219-2: designations `CF SHS …` */
+	| 'CFRHS'
+	| 'CFCHS';
 
 /** How the cross-section is built; decides which formulas and code clauses apply. */
 export type SectionShape =
@@ -21,6 +38,11 @@ export interface IDims {
 	tf: number;
 	/** Root radius; 0 for welded sections. */
 	r: number;
+	/**
+	 * Flange taper of American Standard S shapes (1/6, a 16⅔ % slope); tf is then the mean
+	 * flange thickness. Absent for parallel flanges.
+	 */
+	slope?: number;
 }
 export interface RhsDims {
 	h: number;
@@ -98,6 +120,13 @@ export interface LibrarySection {
 	props: SectionProps;
 	/** Nominal mass from the designation or the product table, kg/m, where one is published. */
 	nominalMass?: number;
+	/** Material id of the family's usual grade (e.g. `A992` for W, `S355` for EN hollow). */
+	defaultGrade: string;
+	/**
+	 * Nominal wall of a US HSS or pipe, mm, where the dims carry the design wall 0.93 × nominal
+	 * (AISC 360-22 B4.2); see applyDesignWall for A1085 tubes, designed on the nominal wall.
+	 */
+	nominalWall?: number;
 }
 
 /** A section ready for analysis: library, measured or known-Mp, after any section loss. */
@@ -115,6 +144,10 @@ export interface ResolvedSection {
 	mpKnown?: number;
 	/** Mass given by the user, kg/m (known-mp only). */
 	massKnown?: number;
+	/** Material id of the library family's usual grade; absent for measured and known-Mp sections. */
+	defaultGrade?: string;
+	/** Nominal wall of a US HSS or pipe from the table, mm (dims carry the design wall). */
+	nominalWall?: number;
 	/** Uniform thickness loss applied per exposed face, mm. */
 	loss: number;
 	/** Thickness that sets the grade's strength step (flange for rolled I), mm; 0 for known-mp. */

@@ -23,6 +23,11 @@ function checkIFit(d: Record<string, number>, r: number): InputIssue[] {
 		const message = 'The web and root radii (tw + 2r) must be narrower than the flange width b.';
 		issues.push(makeError('tw', 'web-too-thick', message));
 	}
+	// A tapered (S-shape) flange must keep some thickness at its toes: tf − slope·b/4 > 0.
+	if (d.slope !== undefined && d.tf - (d.slope * d.b) / 4 <= 0) {
+		const message = 'The tapered flange runs out before its toes: tf must exceed slope·b/4.';
+		issues.push(makeError('tf', 'flange-toe-too-thin', message));
+	}
 	return issues;
 }
 

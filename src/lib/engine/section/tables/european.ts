@@ -1,10 +1,14 @@
 /**
- * European IPE, HE A and HE B sections. Dimensions and nominal masses from memory of
- * EN 10365:2017 (IPE 80–600, HE 100–600 A and B), not yet checked against the printed standard;
- * every row is tested against its nominal mass (test/validation/en10365-european-sections.test.ts).
+ * European IPE, HE A, HE B and HE M sections. Dimensions and nominal masses from memory of
+ * EN 10365:2017 (IPE 80–600, HE 100–1000 A, B and M), not yet checked against the printed
+ * standard; every row is tested against its nominal mass (test/validation/
+ * en10365-european-sections.test.ts), which the dimensions reproduce within 0.3 %.
  * Row: [size, h, b, tw, tf, r, nominal kg/m] in mm and kg/m.
  */
 export const EUROPEAN_STANDARD = 'EN 10365:2017';
+
+/** Default grade of the IPE and HE families, a material id (S275, as the app's European default). */
+export const EUROPEAN_DEFAULT_GRADE = 'S275';
 
 type EuropeanRow = readonly [number, number, number, number, number, number, number];
 
@@ -50,7 +54,12 @@ export const HEA_ROWS: readonly EuropeanRow[] = [
 	[450, 440, 300, 11.5, 21, 27, 140],
 	[500, 490, 300, 12, 23, 27, 155],
 	[550, 540, 300, 12.5, 24, 27, 166],
-	[600, 590, 300, 13, 25, 27, 178]
+	[600, 590, 300, 13, 25, 27, 178],
+	[650, 640, 300, 13.5, 26, 27, 190],
+	[700, 690, 300, 14.5, 27, 27, 204],
+	[800, 790, 300, 15, 28, 30, 224],
+	[900, 890, 300, 16, 30, 30, 252],
+	[1000, 990, 300, 16.5, 31, 30, 272]
 ];
 
 /** HE B rows. */
@@ -73,5 +82,38 @@ export const HEB_ROWS: readonly EuropeanRow[] = [
 	[450, 450, 300, 14, 26, 27, 171],
 	[500, 500, 300, 14.5, 28, 27, 187],
 	[550, 550, 300, 15, 29, 27, 199],
-	[600, 600, 300, 15.5, 30, 27, 212]
+	[600, 600, 300, 15.5, 30, 27, 212],
+	[650, 650, 300, 16, 31, 27, 225],
+	[700, 700, 300, 17, 32, 27, 241],
+	[800, 800, 300, 17.5, 33, 30, 262],
+	[900, 900, 300, 18.5, 35, 30, 291],
+	[1000, 1000, 300, 19, 36, 30, 314]
+];
+
+/** HE M rows (the heavy series: thick flanges, same inner depth as HE A/B up to HE 220 M). */
+export const HEM_ROWS: readonly EuropeanRow[] = [
+	[100, 120, 106, 12, 20, 12, 41.8],
+	[120, 140, 126, 12.5, 21, 12, 52.1],
+	[140, 160, 146, 13, 22, 12, 63.2],
+	[160, 180, 166, 14, 23, 15, 76.2],
+	[180, 200, 186, 14.5, 24, 15, 88.9],
+	[200, 220, 206, 15, 25, 18, 103],
+	[220, 240, 226, 15.5, 26, 18, 117],
+	[240, 270, 248, 18, 32, 21, 157],
+	[260, 290, 268, 18, 32.5, 24, 172],
+	[280, 310, 288, 18.5, 33, 24, 189],
+	[300, 340, 310, 21, 39, 27, 238],
+	[320, 359, 309, 21, 40, 27, 245],
+	[340, 377, 309, 21, 40, 27, 248],
+	[360, 395, 308, 21, 40, 27, 250],
+	[400, 432, 307, 21, 40, 27, 256],
+	[450, 478, 307, 21, 40, 27, 263],
+	[500, 524, 306, 21, 40, 27, 270],
+	[550, 572, 306, 21, 40, 27, 278],
+	[600, 620, 305, 21, 40, 27, 285],
+	[650, 668, 305, 21, 40, 27, 293],
+	[700, 716, 304, 21, 40, 27, 301],
+	[800, 814, 303, 21, 40, 30, 317],
+	[900, 910, 302, 21, 40, 30, 333],
+	[1000, 1008, 302, 21, 40, 30, 349]
 ];

@@ -1,15 +1,22 @@
 /**
- * UK universal beams (UB). Dimensions from memory of BS 4-1:2005 and the UB range of
- * BS EN 10365:2017 — not yet checked against the printed standard; every row is tested
+ * UK universal beams (UB), the full current range 127x76x13 to 1016x305x584 (584, 494 and 415 are the
+ * later 1016x305 sizes; the older designations 487, 437 and 349 are kept as printed in BS 4-1). Dimensions from memory of BS 4-1:2005
+ * and the UB range of BS EN 10365:2017 — not yet checked against the printed standard; every row is tested
  * against the nominal mass in its designation (test/validation/bs4-1-universal-beams.test.ts).
  * Row: [serial size 'h x b x kg/m', h, b, tw, tf, r] in mm.
  */
 export const UB_STANDARD = 'BS 4-1:2005 / EN 10365:2017';
 
+/** Default grade of the UB and UC families, a material id (S275, the usual UK beam grade). */
+export const UK_DEFAULT_GRADE = 'S275';
+
 /** Universal beam rows, heaviest first within each serial size. */
 export const UB_ROWS: readonly (readonly [string, number, number, number, number, number])[] = [
+	['1016x305x584', 1056.0, 314.0, 36.0, 64.0, 30.0],
+	['1016x305x494', 1036.0, 309.0, 31.0, 54.0, 30.0],
 	['1016x305x487', 1036.3, 308.5, 30.0, 54.1, 30.0],
 	['1016x305x437', 1026.1, 305.4, 26.9, 49.0, 30.0],
+	['1016x305x415', 1020.0, 304.0, 26.0, 46.0, 30.0],
 	['1016x305x393', 1015.9, 303.0, 24.4, 43.9, 30.0],
 	['1016x305x349', 1008.1, 302.0, 21.1, 40.0, 30.0],
 	['1016x305x314', 1000.0, 300.0, 19.1, 35.9, 30.0],
