@@ -6,15 +6,37 @@
  */
 import { describe, expect, it } from 'vitest';
 import { findSection, listSections } from '../../src/lib/engine/section/index';
-import type { RhsDims } from '../../src/lib/engine/section/types';
+import type { ChsDims, RhsDims } from '../../src/lib/engine/section/types';
 import { expectRelSoft as expectRel } from '../support/expect-rel';
 
 const hollow = listSections().filter((s) => ['SHS', 'RHS', 'CHS'].includes(s.family));
 
 describe('hollow-section rows (EN 10210-2)', () => {
-	it('holds at least 30 common sizes, all naming EN 10210-2', () => {
-		expect(hollow.length).toBeGreaterThanOrEqual(30);
+	it('holds the common range: ≥ 60 RHS, ≥ 50 SHS, ≥ 40 CHS, naming EN 10210-2 and S355', () => {
+		const count = (family: string) => hollow.filter((s) => s.family === family).length;
+		expect(count('RHS')).toBeGreaterThanOrEqual(60);
+		expect(count('SHS')).toBeGreaterThanOrEqual(50);
+		expect(count('CHS')).toBeGreaterThanOrEqual(40);
 		for (const s of hollow) expect(s.standard).toMatch(/EN 10210-2/);
+		// S355J2H is the usual grade of hot-finished hollow sections (common practice).
+		for (const s of hollow) expect(s.defaultGrade).toBe('S355');
+	});
+
+	it("mass of every row is the standard's: area of the nominal outline × 7850 kg/m³", () => {
+		// EN 10210-2 prints masses computed from these nominal dimensions with ρ = 7.85 kg/dm³,
+		// so the check is the library's exact outline against the standard's closed forms.
+		for (const s of hollow) {
+			let A: number;
+			if (s.shape === 'CHS') {
+				const { d, t } = s.dims as ChsDims;
+				A = Math.PI * (d - t) * t;
+			} else {
+				// Basis for calculation: ro = 1.5t, ri = t.
+				const { h, b, t } = s.dims as RhsDims;
+				A = 2 * t * (b + h - 2 * t) - (4 - Math.PI) * ((1.5 * t) ** 2 - t ** 2);
+			}
+			expectRel(s.props.mass, A * 7.85e-3, 1e-9);
+		}
 	});
 
 	it('uses the EN 10210-2 corner radii ro = 1.5t, ri = t on every SHS and RHS', () => {

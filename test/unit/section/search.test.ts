@@ -60,3 +60,43 @@ describe('suggestSections', () => {
 		for (const g of got) expect(names.has(g)).toBe(true);
 	});
 });
+
+// Designations as US, UK and European tables print them (AISC Manual labels, EN 10365 and
+// EN 10210/10219 forms); the canonical forms are documented in src/lib/engine/section/README.md.
+describe('findSection: US shapes, HE M and cold-formed hollow sections', () => {
+	it.each([
+		['W44x335', 'W44x335'],
+		['W44X335', 'W44x335'],
+		['HP14x117', 'HP14x117'],
+		['S24x121', 'S24x121'],
+		['S18x54.7', 'S18x54.7'],
+		['HSS8x6x1/2', 'HSS8x6x1/2'],
+		['HSS8X6X.500', 'HSS8x6x1/2'],
+		['hss 5-1/2 x 5-1/2 x 3/8', 'HSS5-1/2x5-1/2x3/8'],
+		['HSS6.625x0.280', 'HSS6.625x0.280'],
+		['HSS6.625X.280', 'HSS6.625x0.280'],
+		['Pipe 4 Std', 'Pipe 4 Std'],
+		['Pipe4STD', 'Pipe 4 Std'],
+		['Pipe 4 XS', 'Pipe 4 XS'],
+		['Pipe 3-1/2 XS', 'Pipe 3-1/2 XS'],
+		['pipe 4', 'Pipe 4 Std'],
+		['HE 1000 M', 'HEM 1000'],
+		['HEM1000', 'HEM 1000'],
+		['HE 1000 A', 'HEA 1000'],
+		['RHS 200x100x10', 'RHS 200x100x10.0'],
+		['CF RHS 200x100x10', 'CF RHS 200x100x10.0'],
+		['cf chs 168.3x6', 'CF CHS 168.3x6.0']
+	])('%s → %s', (typed, canonical) => {
+		expect(findSection(typed)?.designation).toBe(canonical);
+	});
+
+	it('tells Std from XS pipe and hot-finished from cold-formed tubes', () => {
+		expect(findSection('Pipe 4 Std')).not.toBe(findSection('Pipe 4 XS'));
+		// Nominal wall 0.337 in (AISC Shapes Database v15.0), kept to a micrometre in mm.
+		expect(findSection('Pipe 4 XS')!.nominalWall).toBeCloseTo(0.337 * 25.4, 3);
+		expect(findSection('RHS 200x100x10')!.family).toBe('RHS');
+		expect(findSection('CF RHS 200x100x10')!.family).toBe('CFRHS');
+		expect(findSection('Pipe 4 XXL')).toBeNull();
+		expect(findSection('CF RHS 200x100x6.3')).toBeNull();
+	});
+});
