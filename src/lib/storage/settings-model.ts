@@ -1,3 +1,4 @@
+import { CASE_BASES, type CaseBasis } from '$lib/engine/case/types';
 import type { UnitSystem } from '$lib/ui/format/types';
 import { isPlainObject } from './case-file';
 
@@ -30,6 +31,8 @@ export interface FactorSet {
 /** User settings. Stored values are SI whatever `units` says. */
 export interface Settings {
 	units: UnitSystem;
+	/** Design basis of a new check (each check may change it); separate from units. */
+	defaultBasis: CaseBasis;
 	/** The user's own factor sets (the built-in ones are not stored). */
 	factorSets: FactorSet[];
 	activeFactorSetId: string;
@@ -80,6 +83,7 @@ export const BUILT_IN_FACTOR_SETS: readonly Readonly<FactorSet>[] = Object.freez
 /** Settings on first run (frozen). span/200 is common practice for beams under variable load. */
 export const DEFAULT_SETTINGS: Readonly<Settings> = Object.freeze<Settings>({
 	units: 'SI',
+	defaultBasis: 'eurocode',
 	factorSets: [],
 	activeFactorSetId: 'en1990-6.10',
 	deflectionLimit: 200,
@@ -101,6 +105,9 @@ export function sanitizeSettings(raw: unknown): Settings {
 	const ids = new Set([...BUILT_IN_FACTOR_SETS, ...factorSets].map((f) => f.id));
 	return {
 		units: s.units === 'SI' || s.units === 'US' ? s.units : d.units,
+		defaultBasis: (CASE_BASES as readonly unknown[]).includes(s.defaultBasis)
+			? (s.defaultBasis as CaseBasis)
+			: d.defaultBasis,
 		factorSets: factorSets.map((f) => ({ ...f })),
 		activeFactorSetId:
 			typeof s.activeFactorSetId === 'string' && ids.has(s.activeFactorSetId)

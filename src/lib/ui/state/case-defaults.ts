@@ -1,5 +1,6 @@
 import type { FactorSet, Settings } from '$lib/storage';
 import type { CaseFile } from './case-file';
+import { factorsForBasis } from './design-basis';
 
 /**
  * The factors a case takes from a factor set: the combination rule by the engine's set name, and
@@ -22,8 +23,8 @@ export function factorsFromSet(set: FactorSet): NonNullable<CaseFile['factors']>
 }
 
 /**
- * A new case with the user's defaults from settings: factor set, lateral restraint, deflection
- * limit. Does not mutate its argument.
+ * A new case with the user's defaults from settings: design basis, factor set, lateral restraint,
+ * deflection limit. Does not mutate its argument.
  * @example
  * applySettingsDefaults(createBlankCase(), settings, set).deflectionLimit // 200
  */
@@ -35,7 +36,12 @@ export function applySettingsDefaults(c: CaseFile, settings: Settings, set: Fact
 			...c.beam,
 			restraint: { lateral: settings.defaultRestraint, loadHeight: 'top-flange' }
 		},
-		factors: factorsFromSet(set),
+		basis: settings.defaultBasis,
+		// Factors of one code mean nothing in another: an AISC check takes ASCE 7-22's.
+		factors:
+			settings.defaultBasis === 'eurocode'
+				? factorsFromSet(set)
+				: factorsForBasis(settings.defaultBasis, set),
 		deflectionLimit: settings.deflectionLimit
 	};
 }

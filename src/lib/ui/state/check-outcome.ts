@@ -55,7 +55,12 @@ export interface ReportView {
 	checks: { id: string; label: string; utilisation: number; pass: boolean; level: string }[];
 	summary: { short: string; long: string };
 	/** Which analysis route the verdict rests on, and why. */
-	design: { route: { route: string; reasons: string[] }; governingArrangement?: string | null };
+	design: {
+		route: { route: string; reasons: string[] };
+		governingArrangement?: string | null;
+		/** The design basis the answer is on, in words (an AISC case is never answered on EN). */
+		basis?: string;
+	};
 	notices: string[];
 	assumptions: string[];
 	engineVersion: string;

@@ -31,6 +31,7 @@ const LOAD: Record<string, string> = {
 
 const FACTORS: Record<string, string> = {
 	permanent: 'γG existing permanent',
+	permanentAlone: 'D alone (dead-load-only combination)',
 	imposed: 'γQ existing imposed',
 	temporary: 'γ proposed temporary',
 	gammaM0: 'γM0 section',
@@ -42,6 +43,8 @@ const FACTORS: Record<string, string> = {
 };
 
 const OTHER: Record<string, string> = {
+	basis: 'Design basis',
+	units: 'Units of the case file',
 	'beam.grade': 'Steel grade',
 	'beam.grade.fy': 'Steel grade — yield strength fy',
 	'beam.sectionLoss': 'Section — loss per face',
