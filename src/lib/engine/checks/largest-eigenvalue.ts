@@ -18,13 +18,34 @@ export function computeLargestEigenvalue(a: Float64Array, n: number): number {
 	return findLargestTridiagonal(d, e);
 }
 
+/** Working arrays of the last size solved (the check solves thousands of same-size matrices). */
+let scratch: {
+	n: number;
+	m: Float64Array;
+	d: Float64Array;
+	e: Float64Array;
+	v: Float64Array;
+	p: Float64Array;
+} | null = null;
+
 /** Diagonal d (n) and sub-diagonal e (n − 1) of a tridiagonal matrix similar to a. */
 function reduceToTridiagonal(a: Float64Array, n: number): { d: Float64Array; e: Float64Array } {
-	const m = Float64Array.from(a);
-	const d = new Float64Array(n);
-	const e = new Float64Array(Math.max(0, n - 1));
-	const v = new Float64Array(n);
-	const p = new Float64Array(n);
+	if (scratch?.n !== n) {
+		scratch = {
+			n,
+			m: new Float64Array(n * n),
+			d: new Float64Array(n),
+			e: new Float64Array(Math.max(0, n - 1)),
+			v: new Float64Array(n),
+			p: new Float64Array(n)
+		};
+	}
+	const { m, d, e, v, p } = scratch;
+	m.set(a);
+	d.fill(0);
+	e.fill(0);
+	v.fill(0);
+	p.fill(0);
 	for (let k = 0; k < n - 2; k++) {
 		// Reflector that zeroes column k below the sub-diagonal: H = I − v vᵀ·(2/vᵀv).
 		let norm = 0;

@@ -9,9 +9,17 @@ import type { CheckContext } from './context';
 import { prepareCriticalMoment } from './mcr';
 import { spanOf } from './plastic-bending';
 import { computeLoadHeight, type LoadHeight, type RestraintSegment } from './restraint';
-import type { SegmentLoad } from './segment-moment';
+import type { LtbSegment, SegmentLoad } from './segment-moment';
 import type { CheckResult } from './types';
-import { findWorstArrangement } from './worst-arrangement';
+import type { LoadGroup } from './load-effects';
+import type { LoadArrangement } from './load-arrangements';
+import { arrangementSelection } from './linear-arrangements';
+import { prepareBucklingBound, type BucklingBound, type SolvedWeighting } from './ltb-bound';
+import type { PreparedCriticalMoment } from './mcr';
+import { findWorstArrangement, findWorstArrangementBounded } from './worst-arrangement';
+
+/** Below this many arrangements every one is evaluated (the bound costs about 20 solves). */
+const BOUND_FROM = 24;
 
 /** Options of {@link checkBeamLtb}. */
 export interface LtbCheckOptions {
@@ -29,6 +37,8 @@ export function checkBeamLtb(
 ): { checks: CheckResult[]; outOfScope: string[] } {
 	const checks: CheckResult[] = [];
 	const outOfScope: string[] = [];
+	const groups = ctx.effects.groups;
+	const weighting = listWeightings(ctx.arrangements, groups);
 	o.segments.forEach((seg, index) => {
 		const m = ctx.members[spanOf(ctx.nodes, (seg.from + seg.to) / 2)];
 		if (seg.freeEnd) {
@@ -42,46 +52,75 @@ export function checkBeamLtb(
 		const Wy = o.elasticModulus ? m.Wel : m.Wpl;
 		const zg = computeLoadHeight(o.loadHeight, m.h);
 		// One part per load group: any arrangement and multiplier is a weighted sum of them.
-		const groups = ctx.effects.groups;
+		const parts = groups.map((g) => ({
+			length: seg.to - seg.from,
+			momentStart: g.at(seg.from, 'right').M,
+			momentEnd: g.at(seg.to, 'left').M,
+			loads: clipLoads(g.loads, seg, 1)
+		}));
 		const prepared = prepareCriticalMoment({
-			parts: groups.map((g) => ({
-				length: seg.to - seg.from,
-				momentStart: g.at(seg.from, 'right').M,
-				momentEnd: g.at(seg.to, 'left').M,
-				loads: clipLoads(g.loads, seg, 1)
-			})),
+			parts,
 			EIz: ctx.basis.E * m.Iz,
 			GIt: ctx.basis.G * m.It,
 			EIw: ctx.basis.E * m.Iw,
 			zg
 		});
-		// The row depends only on the weights: arrangements and trial multipliers repeat them.
-		const seen = new Map<string, ReturnType<typeof evaluate>>();
 		// Each group's moment at the quarter points, for bases that read them (AISC Cb, F1-1).
 		const quarters = [0.25, 0.5, 0.75].map((f) =>
 			groups.map((g) => g.at(seg.from + f * (seg.to - seg.from), 'right').M)
 		);
-		const evaluate = (weights: number[]) => {
-			const cr = prepared.at(weights);
-			// No moment, or one at round-off level (a load a hair from a support): no buckling.
-			if (cr === null || !Number.isFinite(cr.mcr)) return { utilisation: 0, detail: null };
-			const r = ctx.basis.computeLtbResistance({
+		const resist = (weights: number[], mcr: number, mMax: number) =>
+			ctx.basis.computeLtbResistance({
 				...m,
 				Wy,
-				mcr: cr.mcr,
+				mcr,
 				length: seg.to - seg.from,
-				moments: readQuarterMoments(quarters, weights, cr.mMax),
+				moments: readQuarterMoments(quarters, weights, mMax),
 				resistance: ctx.resistance
 			});
-			return { utilisation: cr.mMax / r.mbRd, detail: { ...r, mcr: cr.mcr, mEd: cr.mMax } };
+		const evaluate = (weights: number[]) => {
+			const { mMax, mu } = prepared.solve(weights);
+			if (solved && mMax > 0 && !Number.isNaN(mu)) solved.add(weights, mu);
+			// No moment, or one at round-off level (a load a hair from a support): no buckling.
+			if (!(mMax > 0) || !(mu > 0)) return { utilisation: 0, detail: null };
+			const mcr = (1 / mu) * mMax;
+			if (!Number.isFinite(mcr)) return { utilisation: 0, detail: null };
+			const r = resist(weights, mcr, mMax);
+			return { utilisation: mMax / r.mbRd, detail: { ...r, mcr, mEd: mMax } };
 		};
-		const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
-			const weights = groups.map((g) => g.weight(arr) * (g.kind === 'temporary' ? t : 1));
-			const key = weights.join(' ');
-			let e = seen.get(key);
-			if (!e) seen.set(key, (e = evaluate(weights)));
+		// The row depends only on the weights: arrangements and trial multipliers repeat them.
+		const seen = new Map<number, Map<number, ReturnType<typeof evaluate>>>();
+		const cached = (arr: LoadArrangement, t: number) => {
+			const w = weighting.get(arr)!;
+			let byT = seen.get(w.id);
+			if (!byT) seen.set(w.id, (byT = new Map()));
+			let e = byT.get(t);
+			if (!e) byT.set(t, (e = evaluate(weightsAt(w, t))));
 			return e;
-		});
+		};
+		const bounded = !arrangementSelection.exhaustive && ctx.arrangements.length >= BOUND_FROM;
+		const solved = bounded ? new SolvedWeightings(parts, prepared) : null;
+		const peaks = new Map<number, Map<number, number>>();
+		const bound = (arr: LoadArrangement, t: number) => {
+			// A bound on μ gives one on the utilisation: the buckling resistance does not fall as
+			// Mcr rises (all else equal), so a lower bound on Mcr bounds MEd/Mb,Rd from above.
+			const w = weighting.get(arr)!;
+			const weights = weightsAt(w, t);
+			const mu = solved!.bound(weights);
+			if (!(mu < Infinity)) return Infinity;
+			let byT = peaks.get(w.id);
+			if (!byT) peaks.set(w.id, (byT = new Map()));
+			let mMax = byT.get(t);
+			if (mMax === undefined) byT.set(t, (mMax = prepared.peak(weights)));
+			if (!(mMax > 0) || !(mu > 0)) return 0;
+			const mcr = mMax / mu;
+			if (!Number.isFinite(mcr)) return 0;
+			const u = mMax / resist(weights, mcr, mMax).mbRd;
+			return Number.isNaN(u) ? Infinity : u * (1 + 1e-9);
+		};
+		const worst = bounded
+			? findWorstArrangementBounded(ctx.arrangements, cached, bound)
+			: findWorstArrangement(ctx.arrangements, cached);
 		const d = worst.detail;
 		checks.push({
 			id: 'ltb',
@@ -137,4 +176,74 @@ function clipLoads(loads: Load[], seg: RestraintSegment, factor: number): Segmen
 		out.push({ kind: 'line', from: a - seg.from, to: b - seg.from, start: at(a), end: at(b) });
 	}
 	return out;
+}
+
+/** An arrangement's weights on the load groups, with the temporary group's place. */
+interface Weighting {
+	/** Same id for the same weights. */
+	id: number;
+	weights: number[];
+	temporary: number;
+}
+
+/** Weights per arrangement, shared by every segment (the groups are the beam's). */
+function listWeightings(arrangements: LoadArrangement[], groups: LoadGroup[]) {
+	const ids = new Map<string, number>();
+	const temporary = groups.findIndex((g) => g.kind === 'temporary');
+	return new Map(
+		arrangements.map((arr) => {
+			const weights = groups.map((g) => g.weight(arr));
+			const key = weights.join(' ');
+			if (!ids.has(key)) ids.set(key, ids.size);
+			return [arr, { id: ids.get(key)!, weights, temporary }];
+		})
+	);
+}
+
+/** Weights at multiplier t: the temporary group's weight times t. */
+function weightsAt(w: Weighting, t: number): number[] {
+	if (w.temporary < 0) return w.weights;
+	const out = [...w.weights];
+	out[w.temporary] = w.weights[w.temporary] * t;
+	return out;
+}
+
+/**
+ * Weightings of one segment already solved, by the weights of the groups with loads inside the
+ * segment (those of one class differ only in their end moments: the bound is closest there).
+ */
+class SolvedWeightings {
+	private bb: BucklingBound | null = null;
+	private byClass = new Map<string, SolvedWeighting[]>();
+	private all: SolvedWeighting[] = [];
+	private inside: number[];
+	constructor(
+		private parts: LtbSegment[],
+		private prepared: PreparedCriticalMoment
+	) {
+		this.inside = parts.flatMap((p, i) => (p.loads.length > 0 ? [i] : []));
+	}
+	private classOf(weights: number[]): string {
+		return this.inside.map((i) => weights[i]).join(' ');
+	}
+	add(weights: number[], mu: number): void {
+		this.bb ??= prepareBucklingBound(this.prepared, this.parts);
+		const { A, B } = this.bb.endMoments(weights);
+		const s = { weights, A, B, mu, norm: this.bb.norm(weights) };
+		const key = this.classOf(weights);
+		const list = this.byClass.get(key);
+		if (list) list.push(s);
+		else this.byClass.set(key, [s]);
+		this.all.push(s);
+	}
+	/** Upper bound on μ of a weighting (Infinity before any solve). */
+	bound(weights: number[]): number {
+		if (!this.bb) return Infinity;
+		const { A, B } = this.bb.endMoments(weights);
+		const norm = this.bb.norm(weights);
+		const refs = this.byClass.get(this.classOf(weights)) ?? this.all;
+		let best = Infinity;
+		for (const r of refs) best = Math.min(best, this.bb.fromSolved(weights, A, B, norm, r));
+		return best;
+	}
 }

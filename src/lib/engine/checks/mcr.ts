@@ -69,6 +69,23 @@ export interface CriticalMomentParts extends Omit<CriticalMomentInput, 'segment'
 /** Mcr of any weighted sum of the prepared parts. */
 export interface PreparedCriticalMoment {
 	at(weights: number[]): CriticalMoment | null;
+	/**
+	 * Largest |M| of a weighted sum and the largest eigenvalue μ of its scaled energy matrix
+	 * (1/λcr when positive); μ is NaN when there is no moment (no solve is made).
+	 */
+	solve(weights: number[]): { mMax: number; mu: number };
+	/** Largest |M| of a weighted sum (as `solve` finds it, without the eigenvalue). */
+	peak(weights: number[]): number;
+	/** Largest eigenvalue of the scaled energy matrix of another loading of the same segment. */
+	largestOf(segment: LtbSegment): number;
+	/** Scaled energy matrix of another loading of the segment (row-major, 2N × 2N). */
+	matrixOf(segment: LtbSegment): Float64Array;
+	/** Largest eigenvalue of a matrix of that size. */
+	largestOfMatrix(g: Float64Array): number;
+	/** Each part's scaled energy matrix (not to be changed). */
+	partMatrices: Float64Array[];
+	/** Frobenius norm of each part's scaled energy matrix (bounds its eigenvalues). */
+	partNorms: number[];
 }
 
 /**
@@ -93,7 +110,7 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 	];
 	const n2 = 2 * N;
 	const sines = points.map((p) => k.map((kn) => Math.sin(kn * p.x)));
-	const assembled = parts.map((seg) => {
+	const assemble = (seg: LtbSegment) => {
 		const g = new Float64Array(n2 * n2);
 		const addLoadHeight = (s: number[], weight: number) => {
 			for (let i = 0; i < N; i++)
@@ -102,12 +119,15 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 		points.forEach((p, q) => {
 			const m = computeSegmentMoment(seg, p.x);
 			const s = sines[q];
-			for (let i = 0; i < N; i++) {
-				for (let j = 0; j < N; j++) {
+			if (m !== 0) {
+				for (let i = 0; i < N; i++) {
 					// vᵀGv = −2∫M u''φ: u'' brings −kᵢ² on the a-terms.
-					const v = p.w * m * k[i] ** 2 * s[i] * s[j];
-					g[i * n2 + N + j] += v;
-					g[(N + j) * n2 + i] += v;
+					const a = p.w * m * k[i] ** 2 * s[i];
+					for (let j = 0; j < N; j++) {
+						const v = a * s[j];
+						g[i * n2 + N + j] += v;
+						g[(N + j) * n2 + i] += v;
+					}
 				}
 			}
 			const q0 = loadAt(seg, p.x);
@@ -124,30 +144,54 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 		for (let i = 0; i < n2; i++) {
 			for (let j = 0; j < n2; j++) g[i * n2 + j] /= Math.sqrt(d[i] * d[j]);
 		}
-		const samples = [...points.map((p) => p.x), ...edges].map((x) => computeSegmentMoment(seg, x));
-		return { g, samples };
-	});
-	const count = assembled[0].samples.length;
+		return g;
+	};
+	const sampleAt = [...points.map((p) => p.x), ...edges];
+	const assembled = parts.map((seg) => ({
+		g: assemble(seg),
+		samples: Float64Array.from(sampleAt, (x) => computeSegmentMoment(seg, x))
+	}));
+	const count = sampleAt.length;
+	// One buffer for the weighted sum: the solver copies what it changes.
+	const sum = new Float64Array(n2 * n2);
+	// Samples point by point, the parts side by side (one pass over memory per weighting).
+	const nParts = assembled.length;
+	const table = new Float64Array(count * nParts);
+	assembled.forEach((a, i) => a.samples.forEach((v, q) => (table[q * nParts + i] = v)));
+	const peak = (weights: number[]) => {
+		let mMax = 0;
+		for (let q = 0, row = 0; q < count; q++, row += nParts) {
+			let m = 0;
+			for (let i = 0; i < nParts; i++) m += weights[i] * table[row + i];
+			mMax = Math.max(mMax, Math.abs(m));
+		}
+		return mMax;
+	};
+	const solve = (weights: number[]) => {
+		const mMax = peak(weights);
+		if (!(mMax > 0)) return { mMax, mu: NaN };
+		sum.fill(0);
+		for (let i = 0; i < assembled.length; i++) {
+			const w = weights[i];
+			const a = assembled[i].g;
+			if (w !== 0) for (let e = 0; e < sum.length; e++) sum[e] += w * a[e];
+		}
+		return { mMax, mu: largest(sum, n2) };
+	};
 	return {
+		peak,
+		solve,
 		at(weights) {
-			let mMax = 0;
-			for (let q = 0; q < count; q++) {
-				let m = 0;
-				for (let i = 0; i < assembled.length; i++) m += weights[i] * assembled[i].samples[q];
-				mMax = Math.max(mMax, Math.abs(m));
-			}
-			if (!(mMax > 0)) return null;
-			const g = new Float64Array(n2 * n2);
-			for (let i = 0; i < assembled.length; i++) {
-				const w = weights[i];
-				const a = assembled[i].g;
-				if (w !== 0) for (let e = 0; e < g.length; e++) g[e] += w * a[e];
-			}
-			const mu = largest(g, n2);
-			if (!(mu > 0)) return null;
+			const { mMax, mu } = solve(weights);
+			if (!(mMax > 0) || !(mu > 0)) return null;
 			const factor = 1 / mu;
 			return { mcr: factor * mMax, factor, mMax };
-		}
+		},
+		largestOf: (segment) => largest(assemble(segment), n2),
+		matrixOf: assemble,
+		largestOfMatrix: (g) => largest(g, n2),
+		partMatrices: assembled.map(({ g }) => g),
+		partNorms: assembled.map(({ g }) => Math.hypot(...g))
 	};
 }
 

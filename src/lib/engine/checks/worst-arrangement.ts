@@ -67,3 +67,151 @@ export function findWorstArrangement<T>(
 		detail: worst.one.detail
 	};
 }
+
+/**
+ * An upper bound on a check's utilisation at multiplier t for one arrangement, cheaper than the
+ * evaluation (Infinity when none is known). It may tighten as evaluations are made.
+ */
+export type ArrangementBound = (arrangement: LoadArrangement, t: number) => number;
+
+/**
+ * The same answer as {@link findWorstArrangement}, evaluating only the arrangements whose bound
+ * leaves them a chance: the worst utilisation at the design loads and under the fixed loads
+ * alone are the largest evaluated ones once every other bound is below them (earliest in list
+ * order on a tie, as there), and an arrangement whose bound at the best multiplier so far is
+ * below 1 is skipped exactly as one whose utilisation there is below 1.
+ */
+export function findWorstArrangementBounded<T>(
+	arrangements: LoadArrangement[],
+	evaluate: ArrangementEvaluator<T>,
+	bound: ArrangementBound
+): WorstArrangement<T> {
+	if (arrangements.length === 0) throw new Error('invariant: at least one load arrangement');
+	const ones = new Map<number, { utilisation: number; detail: T }>();
+	const zeros = new Map<number, number>();
+	const one = (i: number) => {
+		let e = ones.get(i);
+		if (!e) ones.set(i, (e = evaluate(arrangements[i], 1)));
+		return e;
+	};
+	const zero = (i: number) => {
+		let u = zeros.get(i);
+		if (u === undefined) zeros.set(i, (u = evaluate(arrangements[i], 0).utilisation));
+		return u;
+	};
+	const index = arrangements.map((_, i) => i);
+	/**
+	 * The arrangement with the largest utilisation at t, the earliest on a tie: best first by
+	 * bound, a bound refreshed before each evaluation (evaluations tighten the others).
+	 */
+	const largest = (t: number, read: (i: number) => number) => {
+		const first = index.map((i) => bound(arrangements[i], t));
+		const queue = new BoundQueue(first);
+		let best = -1;
+		let top = -Infinity;
+		for (let i = queue.pop(); i >= 0; i = queue.pop()) {
+			if (queue.keyOf(i) < top) break;
+			const b = best >= 0 ? Math.min(queue.keyOf(i), bound(arrangements[i], t)) : Infinity;
+			if (b < top) continue;
+			// Put back behind a higher stale bound: that one may be the worse.
+			if (b < queue.peekKey()) {
+				queue.push(i, b);
+				continue;
+			}
+			const u = read(i);
+			if (best < 0 || u > top || (u === top && i < best)) [best, top] = [i, u];
+		}
+		return { best, top, first };
+	};
+	const worst = largest(1, (i) => one(i).utilisation);
+	const existing = largest(0, zero);
+	const estimate = (i: number) => {
+		const u0 = zero(i);
+		const u1 = one(i).utilisation;
+		return u0 >= 1 ? 0 : u1 > u0 ? (1 - u0) / (u1 - u0) : Number.MAX_VALUE;
+	};
+	// Fully evaluated ones first, in the order of findWorstArrangement; then by their bound.
+	const known = index.filter((i) => ones.has(i) && zeros.has(i));
+	const estimates = new Map(known.map((i) => [i, estimate(i)]));
+	const rest = index.filter((i) => !estimates.has(i));
+	known.sort((a, b) => estimates.get(a)! - estimates.get(b)!);
+	rest.sort((a, b) => byBound(worst.first, a, b));
+	let multiplier: number | null = null;
+	for (const i of [...known, ...rest]) {
+		const arrangement = arrangements[i];
+		if (multiplier !== null) {
+			if (bound(arrangement, multiplier) < 1) continue;
+			if (evaluate(arrangement, multiplier).utilisation < 1) continue;
+		}
+		const e = estimate(i);
+		const m = findMultiplierAtCapacity({
+			utilisation: (t) => evaluate(arrangement, t).utilisation,
+			tolerance: TOLERANCE,
+			start: e > 0 && e < 1e6 ? e * (1 + 1e-9) : 1
+		});
+		if (m !== null && (multiplier === null || m < multiplier)) multiplier = m;
+	}
+	return {
+		arrangement: arrangements[worst.best],
+		utilisation: worst.top,
+		utilisationExisting: existing.top,
+		multiplier,
+		detail: one(worst.best).detail
+	};
+}
+
+/** Falling bound, then list order (bounds may be Infinity). */
+function byBound(bounds: number[], a: number, b: number): number {
+	return bounds[a] > bounds[b] ? -1 : bounds[a] < bounds[b] ? 1 : a - b;
+}
+
+/** Max-queue of arrangement indices by bound (ties: list order). */
+class BoundQueue {
+	private heap: number[] = [];
+	private keys: number[];
+	constructor(bounds: number[]) {
+		this.keys = [...bounds];
+		bounds.forEach((_, i) => this.push(i, bounds[i]));
+	}
+	keyOf(i: number): number {
+		return this.keys[i];
+	}
+	peekKey(): number {
+		return this.heap.length > 0 ? this.keys[this.heap[0]] : -Infinity;
+	}
+	push(i: number, key: number): void {
+		this.keys[i] = key;
+		const h = this.heap;
+		h.push(i);
+		for (let c = h.length - 1; c > 0;) {
+			const p = (c - 1) >> 1;
+			if (!this.above(h[c], h[p])) break;
+			[h[c], h[p]] = [h[p], h[c]];
+			c = p;
+		}
+	}
+	/** The top index, or −1 when empty. */
+	pop(): number {
+		const h = this.heap;
+		if (h.length === 0) return -1;
+		const top = h[0];
+		const last = h.pop()!;
+		if (h.length > 0) {
+			h[0] = last;
+			for (let p = 0; ;) {
+				const l = 2 * p + 1;
+				const r = l + 1;
+				let m = p;
+				if (l < h.length && this.above(h[l], h[m])) m = l;
+				if (r < h.length && this.above(h[r], h[m])) m = r;
+				if (m === p) break;
+				[h[m], h[p]] = [h[p], h[m]];
+				p = m;
+			}
+		}
+		return top;
+	}
+	private above(a: number, b: number): boolean {
+		return byBound(this.keys, a, b) < 0;
+	}
+}
