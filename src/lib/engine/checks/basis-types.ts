@@ -246,6 +246,8 @@ export interface BasisWords {
 	modulus: string;
 	/** Assumption on what plastic hinges need on this basis. */
 	plasticAssumption: string;
+	/** Notice for a section entered by its plastic moment alone. */
+	knownMpNotice: string;
 	/** Default deflection limits span/n: temporary load and all loads. */
 	deflectionLimits: { temporary: number; total: number };
 	/** Name of the deflection limit source (common practice), for the row clause. */
@@ -264,4 +266,5 @@ export interface ReportWording {
 	factors: string;
 	modulus: string;
 	plasticAssumption: string;
+	knownMpNotice: string;
 }

@@ -20,6 +20,7 @@ export function writeReportWording(
 		sectionRank: { ...w.sectionRank },
 		factors: w.describeFactors(factors.table, factors.set),
 		modulus: w.modulus,
-		plasticAssumption: w.plasticAssumption
+		plasticAssumption: w.plasticAssumption,
+		knownMpNotice: w.knownMpNotice
 	};
 }

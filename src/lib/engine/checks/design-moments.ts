@@ -1,8 +1,8 @@
 /**
  * The elastic design moments the elastic route rests on, for drawing: the moment diagram of the
  * arrangement that governs, under the design loads as entered (multiplier 1), and the resistance
- * each stretch of beam is checked against (the section's, or Mb,Rd of a buckling segment where
- * that is lower).
+ * each stretch of beam is checked against (the section's, or the buckling resistance of a segment
+ * where that is lower, named in the basis's notation: Mb,Rd, φbMn …).
  */
 import type { CheckContext } from './context';
 import type { CheckResult } from './types';
@@ -44,7 +44,8 @@ export function sampleDesignMoments(
 	}));
 	for (const c of o.checks) {
 		if (c.id !== 'ltb' || c.values.mbRd === undefined) continue;
-		limits.push({ from: c.values.from, to: c.values.to, value: c.values.mbRd, label: 'Mb,Rd' });
+		const label = ctx.basis.words.notation.mbRd ?? 'buckling resistance';
+		limits.push({ from: c.values.from, to: c.values.to, value: c.values.mbRd, label });
 	}
 	return { arrangement: arr.name, x, M, limits };
 }

@@ -73,6 +73,18 @@ export function solvePlasticArrangement(o: PlasticArrangementInput): PlasticArra
 		capacity,
 		reductions
 	});
+	if (plain.status === 'unbounded' && o.variableLoads.every(isZeroLoad)) {
+		// A combination without the temporary load (ASCE 7 1.4D): the fixed loads alone decide,
+		// and a collapse under them must not read as "unbounded".
+		const { beam, fixedLoads } = o;
+		const alone = solveCollapse({
+			beam,
+			capacity: o.capacity,
+			fixedLoads,
+			variableLoads: fixedLoads
+		});
+		if (alone.status === 'fails-under-fixed') return pack(alone, o.capacity, []);
+	}
 	if (plain.status !== 'mechanism') return pack(plain, o.capacity, []);
 	const at = (lambda: number) => {
 		const reductions = findReductions(o, plain, lambda);
@@ -105,6 +117,11 @@ export function solvePlasticArrangement(o: PlasticArrangementInput): PlasticArra
 	const g = factorOf(final.result);
 	const factor = g === null ? null : Math.min(g, lambda);
 	return pack(final.result, final.capacity, final.reductions, factor);
+}
+
+/** True for a load of zero size (a load group weighted 0 in an arrangement). */
+function isZeroLoad(l: Load): boolean {
+	return l.kind === 'linear' ? l.start === 0 && l.end === 0 : l.value === 0;
 }
 
 /** λ of a result: 0 when the fixed loads fail, null when unbounded. */

@@ -65,13 +65,15 @@ export function buildCheckReport(
 	if (outside) designPart.warnings = [];
 	const notices = [
 		...new Set([
-			...writeNotices(model, collapse),
+			...writeNotices(model, collapse, checked.wording),
 			...checked.notices,
 			...designPart.warnings,
 			...(checked.effects?.notAvailable ?? [])
 		])
 	];
-	const assumptions = [...new Set([...writeAssumptions(model, units), ...checked.assumptions])];
+	const assumptions = [
+		...new Set([...writeAssumptions(model, units, checked.wording), ...checked.assumptions])
+	];
 	const restraint = describeRestraint(design.input.restraint, design.input.loadHeight, units);
 	const report: CheckReport = {
 		format: REPORT_FORMAT,
@@ -97,7 +99,7 @@ export function buildCheckReport(
 		effects: reportEffects(checked.effects),
 		factors: { ...model.factors },
 		sections: model.sections.map((s, e) =>
-			reportSection(s, model.grades[e], design.sectionClasses[e])
+			reportSection(s, model.grades[e], design.sectionClasses[e], checked.wording?.sectionRank)
 		),
 		grades: model.grades.map(reportGrade),
 		selfWeight: model.beam.spans.map((_, e) => selfWeightOf(model, e)),
@@ -107,7 +109,7 @@ export function buildCheckReport(
 		case: structuredClone(model.file)
 	};
 	restateReportWords(report, units);
-	report.summary = summarise(model, report, restraint, options);
+	report.summary = summarise(model, report, restraint, options, checked.wording?.notation ?? {});
 	return assertAllFinite(report, 'report');
 }
 
@@ -151,7 +153,8 @@ function summarise(
 	model: CaseModel,
 	r: CheckReport,
 	restraint: string,
-	options: ReportOptions
+	options: ReportOptions,
+	notation: Record<string, string>
 ): { short: string; long: string } {
 	const a = r.answer;
 	const units = options.units ?? 'si';
@@ -191,7 +194,7 @@ function summarise(
 			utilisation: c.utilisation,
 			pass: c.pass,
 			level: c.level,
-			details: describeKeys(c, units)
+			details: describeKeys(c, units, notation)
 		})),
 		governingArrangement: r.design.governingArrangement ?? undefined,
 		notice: r.notices[0] ?? '',
@@ -202,7 +205,10 @@ function summarise(
 	return { short: writeShortSummary(input), long: writeLongSummary(input) };
 }
 
-/** Key numbers of a check row: the name shown and the kind of quantity (null: no unit). */
+/**
+ * Key numbers of a check row: the name shown and the kind of quantity (null: no unit). The name
+ * is the basis's own where it gives one (`notation`: φbMn, Vu …); these are the Eurocode names.
+ */
 const KEY_LABELS: Record<string, [string, SummaryQuantity | null]> = {
 	vEd: ['VEd', 'force'],
 	vRd: ['Vpl,Rd', 'force'],
@@ -217,10 +223,15 @@ const KEY_LABELS: Record<string, [string, SummaryQuantity | null]> = {
 	allowed: ['allowed', 'small']
 };
 
-function describeKeys(c: Record<string, unknown>, units: SummaryUnits): string[] {
+function describeKeys(
+	c: Record<string, unknown>,
+	units: SummaryUnits,
+	notation: Record<string, string>
+): string[] {
 	return Object.entries(KEY_LABELS).flatMap(([k, [name, q]]) => {
 		const v = c[k];
 		if (typeof v !== 'number') return [];
-		return [`${name} ${q ? formatIn(v, q, units) : Number(v.toPrecision(3))}`];
+		const shown = notation[k] ?? name;
+		return [`${shown} ${q ? formatIn(v, q, units) : Number(v.toPrecision(3))}`];
 	});
 }

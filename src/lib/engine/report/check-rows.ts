@@ -12,6 +12,8 @@ import { mmToM, nmmToKNm, nToKN } from '../units';
 export const FACTOR_SET_WORDS: Record<string, string> = {
 	'en1990-6.10': 'EN 1990 expression 6.10',
 	'en1990-6.10ab': 'EN 1990 expressions 6.10a and 6.10b (the worse)',
+	'asce7-lrfd': 'ASCE 7-22 2.3.1 strength design (LRFD)',
+	'asce7-asd': 'ASCE 7-22 2.4.1 allowable stress design (ASD)',
 	custom: 'own factors'
 };
 
@@ -35,6 +37,13 @@ export const ROW_KEY_UNITS: Record<string, { unit: string; convert: (v: number) 
 	to: { unit: 'm', convert: mmToM },
 	span: { unit: 'm', convert: mmToM },
 	deflection: { unit: 'mm', convert: same },
+	// AISC flexure: nominal strength, unbraced and limiting lengths, Cb (F1-1 and the one used).
+	mn: { unit: 'kNm', convert: nmmToKNm },
+	lb: { unit: 'm', convert: mmToM },
+	lp: { unit: 'm', convert: mmToM },
+	lr: { unit: 'm', convert: mmToM },
+	cb: { unit: '', convert: same },
+	cbF11: { unit: '', convert: same },
 	allowed: { unit: 'mm', convert: same },
 	ss: { unit: 'mm', convert: same },
 	c: { unit: 'mm', convert: same },

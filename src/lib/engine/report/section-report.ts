@@ -10,8 +10,10 @@ import type { GradeReport, SectionReport } from './types';
 export function reportSection(
 	section: ResolvedSection,
 	grade: SteelGrade | null,
-	cls: SectionClassReading
+	cls: SectionClassReading,
+	rankWords: Record<string, string> = {}
 ): SectionReport {
+	const rank = grade || section.shape === 'known-mp' ? cls.class : null;
 	return {
 		designation: section.designation,
 		shape: section.shape,
@@ -20,7 +22,8 @@ export function reportSection(
 		dims: section.dims ? { ...section.dims } : null,
 		props: section.props ? { ...section.props } : null,
 		loss: section.loss,
-		class: grade || section.shape === 'known-mp' ? cls.class : null,
+		class: rank,
+		classWords: rank === null ? null : (rankWords[rank] ?? `Class ${rank}`),
 		classNote: cls.note ?? (grade ? null : 'No grade given: the class was not found.')
 	};
 }

@@ -3,6 +3,7 @@
  * result rests on). Wording is ours.
  */
 import type { CaseModel } from '../case/types';
+import type { ReportWording } from '../checks/basis-types';
 import { ENGINEER_NOTICE_SHORT } from '../notice';
 import { formatIn, type SummaryUnits } from './summary-units';
 import type { CollapseReport } from './types';
@@ -23,8 +24,15 @@ const KNOWN_MP =
 	'The plastic moment was entered directly: confirm the section is Class 1 and the value ' +
 	'includes any section loss.';
 
-/** Notices, the engineer-of-record notice first. */
-export function writeNotices(model: CaseModel, collapse: CollapseReport | null): string[] {
+/**
+ * Notices, the engineer-of-record notice first; `wording` gives the basis's own sentences
+ * (Eurocode ones without it).
+ */
+export function writeNotices(
+	model: CaseModel,
+	collapse: CollapseReport | null,
+	wording?: ReportWording
+): string[] {
 	const out = [ENGINEER_NOTICE_SHORT];
 	if (collapse?.decides) {
 		if (collapse.status === 'fails-under-fixed') out.push(FAILS_UNDER_FIXED);
@@ -39,7 +47,9 @@ export function writeNotices(model: CaseModel, collapse: CollapseReport | null):
 	}
 	if (model.restraintAssumed) out.push(RESTRAINT_ASSUMED);
 	if (model.grades.some((g) => g?.needsConfirmation)) out.push(GRADE_DEFAULT);
-	if (model.sections.some((s) => s.shape === 'known-mp')) out.push(KNOWN_MP);
+	if (model.sections.some((s) => s.shape === 'known-mp')) {
+		out.push(wording?.knownMpNotice ?? KNOWN_MP);
+	}
 	return out;
 }
 
@@ -49,19 +59,30 @@ const E_WORDS: Record<SummaryUnits, string> = {
 	us: formatIn(210_000, 'stress', 'us')
 };
 
-/** Assumptions the numbers rest on, figures in `units`. */
-export function writeAssumptions(model: CaseModel, units: SummaryUnits = 'si'): string[] {
+/**
+ * Assumptions the numbers rest on, figures in `units`; `wording` gives the basis's factor,
+ * modulus and hinge sentences (the Eurocode ones without it, or on that basis).
+ */
+export function writeAssumptions(
+	model: CaseModel,
+	units: SummaryUnits = 'si',
+	wording?: ReportWording
+): string[] {
 	const f = model.factors;
+	const own = wording && wording.basisId !== 'en1993' ? wording : null;
+	const hinges =
+		own?.plasticAssumption ??
+		'hinges need Class 1 sections with lateral and torsional restraint at and near them.';
 	const out = [
 		'Plastic collapse (where it is the route) by simple plastic theory: ductile steel, hinges ' +
-			'that rotate at constant moment, small deflections; hinges need Class 1 sections with ' +
-			'lateral and torsional restraint at and near them.',
-		`Design loads: permanent × ${f.permanent}, imposed × ${f.imposed}, temporary × ` +
-			`${f.temporary}; resistance factors γM0 = ${f.gammaM0}, γM1 = ${f.gammaM1}.`,
+			`that rotate at constant moment, small deflections; ${hinges}`,
+		own?.factors ??
+			`Design loads: permanent × ${f.permanent}, imposed × ${f.imposed}, temporary × ` +
+				`${f.temporary}; resistance factors γM0 = ${f.gammaM0}, γM1 = ${f.gammaM1}.`,
 		'The proposed temporary loads are the ones increased by the multiplier; the other loads ' +
 			'stay at their design values.',
 		'All loads act in the plane of the web, with no axial force and no torsion.',
-		`Elastic results use E = ${E_WORDS[units]} and the major-axis second moment of area; deflections ` +
+		`Elastic results use ${own?.modulus ?? `E = ${E_WORDS[units]}`} and the major-axis second moment of area; deflections ` +
 			'are under unfactored loads.'
 	];
 	if (model.selfWeight) out.push('Self-weight of the section is included as a permanent load.');

@@ -144,8 +144,13 @@ export interface SectionReport {
 	props: SectionProps | null;
 	/** Section loss per face, mm. */
 	loss: number;
-	/** EN 1993-1-1 Table 5.2 class; null when it cannot be found (known Mp). */
+	/**
+	 * Section rank for bending (EN 1993-1-1 Table 5.2 class on the Eurocode basis; on AISC 1 compact
+	 * to λpd, 2 compact, 3 noncompact, 4 slender); null when it cannot be found (known Mp).
+	 */
 	class: 1 | 2 | 3 | 4 | null;
+	/** The rank in the basis's words (`Class 2`, `compact` …); null with the class. */
+	classWords: string | null;
 	classNote: string | null;
 }
 

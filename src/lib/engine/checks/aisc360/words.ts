@@ -82,6 +82,9 @@ export function writeAiscWords(method: AiscMethod): BasisWords {
 		plasticAssumption:
 			'hinges need sections compact to λpd, Fy ≤ 65 ksi and the compression flange braced ' +
 			'within Lpd next to each hinge (AISC 360-22 Appendix 1); LRFD only.',
+		knownMpNotice:
+			'The plastic moment was entered directly: confirm the section is compact to λpd ' +
+			'(AISC 360-22 Appendix 1) and the value includes any section loss.',
 		// Common practice for floors (span/360 live, span/240 total, as in IBC Table 1604.3).
 		deflectionLimits: { temporary: 360, total: 240 },
 		deflectionSource: 'common practice, not a code value'

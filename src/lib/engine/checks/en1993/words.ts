@@ -46,6 +46,9 @@ export const EUROCODE_WORDS: BasisWords = {
 	modulus: 'E = 210 000 MPa',
 	plasticAssumption:
 		'hinges need Class 1 sections with lateral and torsional restraint at and near them.',
+	knownMpNotice:
+		'The plastic moment was entered directly: confirm the section is Class 1 and the value ' +
+		'includes any section loss.',
 	deflectionLimits: { temporary: 200, total: 200 },
 	deflectionSource: 'common practice, not a code value'
 };
