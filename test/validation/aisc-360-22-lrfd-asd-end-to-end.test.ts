@@ -18,7 +18,6 @@ import { expectRel } from '../support/expect-rel';
 
 const KIP = 4.4482216152605; // kN
 const FT = 0.3048; // m
-const KSI = 6.894757293168361; // MPa
 const E = 29_000; // ksi, AISC 360-22 (from memory)
 const FY = 50; // ksi, A992
 
