@@ -28,20 +28,32 @@ const NOTATION: Record<AiscMethod, Record<string, string>> = {
 
 const fmt = (v: number | undefined) => String(Number((v ?? 0).toPrecision(4)));
 
+/** A load factor as written before a load symbol: `1.2`, nothing for 1 (`D + L`). */
+const coef = (v: number | undefined) => (v === 1 ? '' : fmt(v));
+
+/** How the proposed load is factored: as live load, or by its own factor. */
+const temporaryWords = (t: Record<string, number>) =>
+	t.temporary === t.live
+		? `the proposed temporary load as live load × ${fmt(t.temporary)}`
+		: `the proposed temporary load × ${fmt(t.temporary)} (own factor)`;
+
 /** The factor sentence of the report's assumptions. */
 function describeFactors(method: AiscMethod, t: Record<string, number>): string {
 	if (method === 'lrfd') {
 		return (
-			`Load combinations (ASCE 7-22 2.3.1): ${fmt(t.deadAlone)}D, and ${fmt(t.dead)}D + ` +
-			`${fmt(t.live)}L with the proposed temporary load as live load × ${fmt(t.temporary)}; ` +
+			`Load combinations (ASCE 7-22 2.3.1): ${coef(t.deadAlone)}D (dead load alone: no live ` +
+			`and no temporary load), and ${coef(t.dead)}D + ${coef(t.live)}L with ` +
+			`${temporaryWords(t)}, existing live load patterned span ` +
+			'by span; ' +
 			'0.9D is not used (it belongs to the wind and seismic combinations, not to a ' +
 			'gravity-only beam). Resistance factors φb = 0.90, φv = 1.00 for rolled I-shapes within ' +
 			'G2.1(a) (0.90 otherwise), and the φ of each limit state of J10.'
 		);
 	}
 	return (
-		`Load combinations (ASCE 7-22 2.4.1): ${fmt(t.deadAlone)}D, and ${fmt(t.dead)}D + ` +
-		`${fmt(t.live)}L with the proposed temporary load as live load × ${fmt(t.temporary)}. ` +
+		`Load combinations (ASCE 7-22 2.4.1): ${coef(t.deadAlone)}D (dead load alone), and ` +
+		`${coef(t.dead)}D + ${coef(t.live)}L with ${temporaryWords(t)}, existing live load ` +
+		'patterned span by span. ' +
 		'Safety factors Ωb = 1.67, Ωv = 1.50 for rolled I-shapes within G2.1(a) (1.67 otherwise), ' +
 		'and the Ω of each limit state of J10.'
 	);
