@@ -8,6 +8,7 @@ import { isBlank } from './blank-value';
 import { collectGeneral, listProblems, mergeMessages } from './form-messages';
 import { formatFieldValue, parseFieldText, readBlankText } from './field-text';
 import type { CheckOutcome } from './check-outcome';
+import { toSiCase } from './si-case';
 
 /** What is kept as the draft: the case plus anything typed that is not (yet) a valid value. */
 export interface FormDraft {
@@ -160,7 +161,7 @@ export class CheckForm {
 		c: CaseFile,
 		options: { savedId?: string | null; texts?: Record<string, string>; units?: UnitSystem } = {}
 	): void {
-		this.case = c;
+		this.case = toSiCase(c);
 		this.#heldLength = undefined;
 		this.texts = {};
 		this.local = {};
