@@ -138,6 +138,19 @@ describe('the grade picker follows the basis and the section', () => {
 		expect(ids).not.toContain('A992');
 	});
 
+	it("a W shape on the Eurocode basis also offers its family's grade (A992)", () => {
+		const ids = pickGrades({
+			list: listGrades,
+			basis: 'eurocode',
+			shape: 'I',
+			chosen: 'S275',
+			familyGrade: 'A992'
+		}).map((g) => g.id);
+		expect(ids[0]).toBe('A992');
+		expect(ids).toContain('S275');
+		expect(ids.filter((id) => id === 'A992')).toHaveLength(1);
+	});
+
 	it('the chosen grade stays listed when it belongs to the other basis', () => {
 		const list = pickGrades({ list: listGrades, basis: 'aisc-lrfd', shape: 'I', chosen: 'S275' });
 		expect(list[0].id).toBe('S275');

@@ -74,8 +74,9 @@ export interface GradeEntry {
 }
 
 /**
- * The picker's grades for a basis and section shape; the chosen grade stays listed even when
- * it belongs to the other basis or product (it is the case's, and must show as chosen).
+ * The picker's grades for a basis and section shape. Listed first when the basis's own list
+ * lacks them: the chosen grade (it is the case's, and must show as chosen) and the usual grade
+ * of the section's family (A992 for a W shape checked on the Eurocode basis).
  * @example pickGrades({ list: listGrades, basis: 'aisc-lrfd', shape: 'CHS', chosen: 'A500-C' })
  */
 export function pickGrades(o: {
@@ -83,9 +84,16 @@ export function pickGrades(o: {
 	basis: CaseBasis;
 	shape: SectionShape | undefined;
 	chosen: string | null;
+	/** Usual grade of the section's family, where the section is a table one. */
+	familyGrade?: string;
 }): GradeEntry[] {
 	const offered = o.list({ region: gradeRegionOf(o.basis), product: productOfShape(o.shape) });
-	if (o.chosen === null || offered.some((g) => g.id === o.chosen)) return offered;
-	const chosen = o.list().find((g) => g.id === o.chosen);
-	return chosen ? [chosen, ...offered] : offered;
+	const wanted = [o.chosen, o.familyGrade].filter(
+		(id, i, all): id is string =>
+			typeof id === 'string' && all.indexOf(id) === i && !offered.some((g) => g.id === id)
+	);
+	if (wanted.length === 0) return offered;
+	const all = o.list();
+	const extra = wanted.flatMap((id) => all.filter((g) => g.id === id));
+	return [...extra, ...offered];
 }
