@@ -17,6 +17,7 @@ import {
 import { drawDiagrams } from './sheet-diagrams';
 import { drawFooter, footerTop } from './sheet-footer';
 import { SheetPen } from './sheet-pen';
+import { addPhotoPages, type SheetPhoto } from './sheet-photos';
 import type { SheetReport } from './sheet-report';
 import { toPdfText } from './pdf-text';
 
@@ -25,12 +26,18 @@ const MARGIN = 34;
 const SCALES = [1, 0.92, 0.84, 0.76, 0.68];
 
 /**
- * The calc sheet as PDF bytes.
+ * The calc sheet as PDF bytes: one page, then the check's photos on pages of their own when
+ * any are given.
  * @example
  * const bytes = await buildCalcSheet(report, { ...context, paper: 'a4' });
  * new TextDecoder().decode(bytes.slice(0, 4)) // '%PDF'
  */
-export async function buildCalcSheet(r: SheetReport, c: SheetContext): Promise<Uint8Array> {
+export async function buildCalcSheet(
+	r: SheetReport,
+	context: SheetContext,
+	photos: SheetPhoto[] = []
+): Promise<Uint8Array> {
+	const c = { ...context, photoCount: photos.length };
 	for (const [i, scale] of SCALES.entries()) {
 		const last = i === SCALES.length - 1;
 		const doc = await PDFDocument.create();
@@ -42,6 +49,7 @@ export async function buildCalcSheet(r: SheetReport, c: SheetContext): Promise<U
 		const pen = new SheetPen(page, fonts, MARGIN, scale);
 		const leftOut = drawSheet(pen, r, c, last);
 		if (leftOut === 0 || last) {
+			if (photos.length > 0) await addPhotoPages(doc, photos, c, fonts);
 			doc.setTitle(toPdfText(`Calc sheet: ${c.title || 'beam check'}`));
 			doc.setCreator('Hingepoint');
 			doc.setProducer('Hingepoint');

@@ -16,7 +16,12 @@ export interface SheetContext {
 	appVersion: string;
 	units: UnitSystem;
 	paper: Paper;
+	/** Photos printed on the pages after the sheet (set by the builder; none when left out). */
+	photoCount?: number;
 }
+
+/** Photos per page after the sheet: two columns of three rows. */
+export const PHOTOS_PER_PAGE = 6;
 
 /** Page size in PDF points (1/72 in). */
 export const PAPER_SIZE: Record<Paper, [width: number, height: number]> = {

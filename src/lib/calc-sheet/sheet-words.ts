@@ -4,7 +4,7 @@
  */
 import { FACTOR_SET_WORDS } from '$lib/engine/report/check-rows';
 import { formatQuantity, type UnitSystem } from '$lib/ui/format';
-import type { SheetContext } from './sheet-context';
+import { PHOTOS_PER_PAGE, type SheetContext } from './sheet-context';
 import type { SheetReport } from './sheet-report';
 
 const VERDICT_WORDS = {
@@ -58,6 +58,11 @@ export function answerLines(r: SheetReport, units: UnitSystem): { head: string; 
 
 /** Record details: place, date, who, which saved check, versions, units and paper. */
 export function recordLines(r: SheetReport, c: SheetContext): [string, string][] {
+	const photos = c.photoCount ?? 0;
+	const pages = Math.ceil(photos / PHOTOS_PER_PAGE);
+	const photoLine: [string, string][] = photos
+		? [['Photos', `${photos} on page${pages > 1 ? `s 2-${pages + 1}` : ' 2'}`]]
+		: [];
 	return [
 		['Place', c.place || '-'],
 		['Date', c.date],
@@ -67,7 +72,8 @@ export function recordLines(r: SheetReport, c: SheetContext): [string, string][]
 		[
 			'Units',
 			c.units === 'US' ? 'US customary (ft, kip, kip/ft, kip-ft, in)' : 'SI (m, kN, kN/m, kNm, mm)'
-		]
+		],
+		...photoLine
 	];
 }
 

@@ -5,7 +5,8 @@
  */
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
+import { getDocument, OPS } from 'pdfjs-dist/legacy/build/pdf.mjs';
+import { makePng } from '../../support/make-png';
 import { checkCase, type CaseFile, type CheckReport } from '../../../src/lib/engine';
 import { ENGINEER_NOTICE_FULL } from '../../../src/lib/engine/notice';
 import { buildCalcSheet } from '../../../src/lib/calc-sheet/build-calc-sheet';
@@ -160,5 +161,77 @@ describe('buildCalcSheet', () => {
 		expect(pages).toBe(1);
 		expect(text).toContain('Reviewed by');
 		expect(text).toContain(toPdfText(ENGINEER_NOTICE_FULL[4]));
+	});
+
+	it('writes every figure of a US-units report in US units: no kN, kNm, mm or MPa', async () => {
+		const out = checkCase(demo, { units: 'us' });
+		if (!out.ok) throw new Error('the invented case is valid');
+		const bytes = await buildCalcSheet(out.report, { ...context, units: 'US', paper: 'letter' });
+		const { text } = await readPdf(bytes);
+		// The notices and assumptions are printed (E is among them, 210 000 MPa in SI).
+		expect(text).toContain('ksi');
+		expect(text).not.toMatch(/kN|MPa|N\/mm|\bmm\b|\d m\b/);
+	});
+});
+
+/** Text and the number of images drawn on each page. */
+async function readPages(bytes: Uint8Array): Promise<{ text: string; images: number }[]> {
+	const pdf = await getDocument({
+		data: bytes.slice(),
+		isEvalSupported: false,
+		standardFontDataUrl: FONTS
+	}).promise;
+	const pages = [];
+	for (let n = 1; n <= pdf.numPages; n++) {
+		const page = await pdf.getPage(n);
+		const content = await page.getTextContent();
+		const text = content.items.map((item) => ('str' in item ? item.str : '')).join(' ');
+		const ops = await page.getOperatorList();
+		const images = ops.fnArray.filter((f) => f === OPS.paintImageXObject).length;
+		pages.push({ text: text.replace(/\s+/g, ' '), images });
+	}
+	await pdf.destroy();
+	return pages;
+}
+
+describe("buildCalcSheet with the check's photos", () => {
+	const report = reportOf(demo);
+	const photo = (caption: string, w = 40, h = 30) => ({
+		bytes: new Uint8Array(makePng(w, h)),
+		type: 'image/png',
+		caption
+	});
+
+	it('keeps the sheet on page 1 and puts the photos on page 2, each with its caption', async () => {
+		const photos = [photo('Section label on the web'), photo('Tape across the flange', 30, 60)];
+		const pages = await readPages(await buildCalcSheet(report, context, photos));
+		expect(pages).toHaveLength(2);
+		expect(pages[0].images).toBe(0);
+		expect(pages[0].text).toContain('Photos 2 on page 2');
+		expect(pages[0].text).toContain('Reviewed by');
+		expect(pages[1].images).toBe(2);
+		expect(pages[1].text).toContain('Photo 1: Section label on the web');
+		expect(pages[1].text).toContain('Photo 2: Tape across the flange');
+		expect(pages[1].text).toContain('chk-demo, revision 2');
+	});
+
+	it('takes six photos a page, and names a photo it cannot print', async () => {
+		const photos = Array.from({ length: 7 }, (_, i) => photo(`view ${i + 1}`));
+		photos.push({
+			bytes: new Uint8Array([0xff, 0xd8, 0xff, 0xe0, 1, 2, 3]),
+			type: 'image/jpeg',
+			caption: 'broken'
+		});
+		const pages = await readPages(await buildCalcSheet(report, context, photos));
+		expect(pages).toHaveLength(3);
+		expect(pages[0].text).toContain('Photos 8 on pages 2-3');
+		expect(pages.map((p) => p.images)).toEqual([0, 6, 1]);
+		expect(pages[2].text).toContain('Photo 8: broken (this image type cannot be printed)');
+	});
+
+	it('is one page with no photos, as before', async () => {
+		const pages = await readPages(await buildCalcSheet(report, context, []));
+		expect(pages).toHaveLength(1);
+		expect(pages[0].text).not.toContain('Photos');
 	});
 });

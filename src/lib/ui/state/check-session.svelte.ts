@@ -50,8 +50,18 @@ export class CheckSession {
 	message = $state('');
 	/** The answer to the last save, shown and read out beside the save button. */
 	saveStatus = $state('');
-	/** Said while the form holds edits of the saved check that are not saved yet. */
+	/** How the unsaved edits came (a kept draft, a restored version); said while they last. */
 	unsavedNote = $state('');
+	/**
+	 * True as soon as the form differs from the saved check on screen (a field typed, a choice
+	 * made, a version restored), and again false once saved or taken back.
+	 */
+	edited = $derived.by(() => {
+		const record = this.record;
+		if (!record) return false;
+		if (Object.keys(this.form.local).length > 0) return true;
+		return JSON.stringify(this.form.case) !== JSON.stringify(record.input);
+	});
 	/** No check saved on this phone yet: the worked demo is offered. */
 	firstRun = $state(false);
 	readonly shelf = new DraftShelf();
@@ -129,6 +139,7 @@ export class CheckSession {
 	}
 
 	// Unsaved edits of this check are shown, never hidden, and the screen says they are not saved.
+	// The form gets a copy of the saved input: edits must never reach the record it is compared to.
 	async #openSaved(store: CheckStore, record: CheckRecord): Promise<void> {
 		const stored = await loadDraft(store, draftSlot(record.id));
 		const draft = stored.ok && stored.value ? readDraft(stored.value.form) : null;
@@ -137,7 +148,7 @@ export class CheckSession {
 			this.#show('saved', record, draft.case, draft);
 			const at = stored.ok && stored.value ? describeTime(stored.value.savedAt) : '';
 			this.unsavedNote = `Unsaved changes from ${at} are shown. Save them, or go back to the saved version.`;
-		} else this.#show('saved', record, asCaseFile(record.input));
+		} else this.#show('saved', record, asCaseFile(structuredClone(record.input)));
 	}
 
 	#show(source: CheckSource, record: CheckRecord | null, c: CaseFile, draft?: FormDraft): void {
@@ -174,7 +185,7 @@ export class CheckSession {
 		const record = this.record;
 		const revision = record?.revisions[index];
 		if (!record || !revision) return;
-		this.form.load(asCaseFile(revision.input), { savedId: record.id });
+		this.form.load(asCaseFile(structuredClone(revision.input)), { savedId: record.id });
 		this.drafts.queue(this.form.snapshot());
 		this.unsavedNote = `Version ${index + 1} is in the form, not saved yet. Saving keeps the version saved now in the list.`;
 	}
@@ -184,7 +195,7 @@ export class CheckSession {
 		const record = this.record;
 		if (!record) return;
 		await this.drafts.discard(record.id);
-		this.#show('saved', record, asCaseFile(record.input));
+		this.#show('saved', record, asCaseFile(structuredClone(record.input)));
 		this.unsavedNote = '';
 	}
 
