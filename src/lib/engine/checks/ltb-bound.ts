@@ -35,13 +35,23 @@ export interface BucklingBound {
 	endMoments(weights: number[]): { A: number; B: number };
 	/** Σ|wᵢ|·‖Gᵢ‖ of a weighting. */
 	norm(weights: number[]): number;
-	/** Upper bound on μ of `weights` from a solved weighting. */
-	fromSolved(weights: number[], A: number, B: number, norm: number, ref: SolvedWeighting): number;
+	/**
+	 * Upper bound on μ of `weights` from a solved weighting; `sameInside` when the two weight
+	 * every group with loads inside the segment alike (only the end moments differ).
+	 */
+	fromSolved(
+		weights: number[],
+		A: number,
+		B: number,
+		norm: number,
+		ref: SolvedWeighting,
+		sameInside: boolean
+	): number;
 }
 
 /**
- * Prepares the bound for one segment: FAN/2 + 1, and 2 per group with loads inside, eigenvalue
- * solves.
+ * Prepares the bound for one segment: at most FAN/2 eigenvalue solves for the end moments and 2
+ * per group with loads inside, each made when first needed.
  * @param parts the load groups' parts of the segment, as given to the prepared Mcr
  */
 export function prepareBucklingBound(
@@ -49,47 +59,61 @@ export function prepareBucklingBound(
 	parts: LtbSegment[]
 ): BucklingBound {
 	const L = parts[0].length;
-	const unitStart = prepared.matrixOf({ length: L, momentStart: 1, momentEnd: 0, loads: [] });
-	const unitEnd = prepared.matrixOf({ length: L, momentStart: 0, momentEnd: 1, loads: [] });
+	// Matrices and eigenvalues are made on first use: most bounds need only a few of them.
+	let units: [Float64Array, Float64Array] | null = null;
 	const combine = (base: Float64Array | null, a: number, b: number) => {
-		const g = new Float64Array(unitStart.length);
-		for (let e = 0; e < g.length; e++)
-			g[e] = (base ? base[e] : 0) + a * unitStart[e] + b * unitEnd[e];
+		units ??= [
+			prepared.matrixOf({ length: L, momentStart: 1, momentEnd: 0, loads: [] }),
+			prepared.matrixOf({ length: L, momentStart: 0, momentEnd: 1, loads: [] })
+		];
+		const [start, end] = units;
+		const g = new Float64Array(start.length);
+		for (let e = 0; e < g.length; e++) g[e] = (base ? base[e] : 0) + a * start[e] + b * end[e];
 		return g;
 	};
-	// With no loads the matrix is [[0, C], [Cᵀ, 0]]: its spectrum is ±σ, so μ(−p) = μ(p).
-	const half = Array.from({ length: FAN / 2 + 1 }, (_, k) => {
-		const theta = (2 * Math.PI * k) / FAN;
-		const c = Math.cos(theta);
-		const s = Math.sin(theta);
-		const mu = prepared.largestOfMatrix(combine(null, c, s));
-		return { c, s, mu: Number.isNaN(mu) ? Infinity : mu };
-	});
-	const fan = [...half, ...half.slice(1).map((p) => ({ c: -p.c, s: -p.s, mu: p.mu }))];
 	const step = (2 * Math.PI) / FAN;
+	// With no loads the matrix is [[0, C], [Cᵀ, 0]]: its spectrum is ±σ, so μ(−p) = μ(p) and
+	// half the fan gives the rest.
+	const fanMu: number[] = [];
+	const muOf = (k: number) => {
+		const j = k % (FAN / 2);
+		if (fanMu[j] === undefined) {
+			const mu = prepared.largestOfMatrix(combine(null, Math.cos(j * step), Math.sin(j * step)));
+			fanMu[j] = Number.isNaN(mu) ? Infinity : mu;
+		}
+		return fanMu[j];
+	};
 	const det = Math.sin(step);
+	const cos = Array.from({ length: FAN + 1 }, (_, k) => Math.cos(k * step));
+	const sin = Array.from({ length: FAN + 1 }, (_, k) => Math.sin(k * step));
 	const endTerm = (a: number, b: number) => {
 		if (a === 0 && b === 0) return 0;
 		let theta = Math.atan2(b, a);
 		if (theta < 0) theta += 2 * Math.PI;
 		const k = Math.min(FAN - 1, Math.floor(theta / step));
-		const p = fan[k];
-		const q = fan[k + 1];
+		const [pc, ps, qc, qs] = [cos[k], sin[k], cos[k + 1], sin[k + 1]];
 		// (a, b) = α·p + β·q with α, β ≥ 0: μ(aG_A + bG_B) ≤ α·μ(p) + β·μ(q).
-		const alpha = (a * q.s - b * q.c) / det;
-		const beta = (b * p.c - a * p.s) / det;
-		return Math.max(0, alpha) * p.mu + Math.max(0, beta) * q.mu;
+		const alpha = Math.max(0, (a * qs - b * qc) / det);
+		const beta = Math.max(0, (b * pc - a * ps) / det);
+		return (alpha > 0 ? alpha * muOf(k) : 0) + (beta > 0 ? beta * muOf(k + 1) : 0);
 	};
-	// Each group's own loads inside: its matrix less the straight line between its end moments.
-	const inside = parts.map((part, i) => {
-		if (part.loads.length === 0) return null;
+	// Each group's own loads inside: its matrix less the straight line between its end moments;
+	// μ of it (up) and of its negative (down).
+	const inside: ({ up: number; down: number } | null | undefined)[] = [];
+	const insideOf = (i: number) => {
+		if (inside[i] !== undefined) return inside[i];
+		const part = parts[i];
+		if (part.loads.length === 0) return (inside[i] = null);
 		const free = combine(prepared.partMatrices[i], -part.momentStart, -part.momentEnd);
 		const up = prepared.largestOfMatrix(free);
 		for (let e = 0; e < free.length; e++) free[e] = -free[e];
 		const down = prepared.largestOfMatrix(free);
 		// A solve that failed (round-off sized entries) bounds nothing.
-		return { up: Number.isNaN(up) ? Infinity : up, down: Number.isNaN(down) ? Infinity : down };
-	});
+		return (inside[i] = {
+			up: Number.isNaN(up) ? Infinity : up,
+			down: Number.isNaN(down) ? Infinity : down
+		});
+	};
 	const norms = prepared.partNorms;
 	return {
 		endMoments(weights) {
@@ -106,12 +130,13 @@ export function prepareBucklingBound(
 			for (let i = 0; i < parts.length; i++) n += Math.abs(weights[i]) * norms[i];
 			return n;
 		},
-		fromSolved(weights, A, B, norm, ref) {
+		fromSolved(weights, A, B, norm, ref, sameInside) {
 			let bound = ref.mu + endTerm(A - ref.A, B - ref.B);
-			for (let i = 0; i < parts.length; i++) {
-				const f = inside[i];
+			for (let i = 0; !sameInside && i < parts.length; i++) {
 				const dw = weights[i] - ref.weights[i];
-				if (f && dw !== 0) bound += dw > 0 ? dw * f.up : -dw * f.down;
+				if (dw === 0) continue;
+				const f = insideOf(i);
+				if (f) bound += dw > 0 ? dw * f.up : -dw * f.down;
 			}
 			bound += SLACK * (norm + ref.norm);
 			return Number.isNaN(bound) ? Infinity : bound;

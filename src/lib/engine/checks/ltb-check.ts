@@ -18,6 +18,9 @@ import { prepareBucklingBound, type BucklingBound, type SolvedWeighting } from '
 import type { PreparedCriticalMoment } from './mcr';
 import { findWorstArrangement, findWorstArrangementBounded } from './worst-arrangement';
 
+/** Solved weightings of other classes a bound tries when its own class has none. */
+const OTHER_CLASS_REFS = 4;
+
 /** Below this many arrangements every one is evaluated (the bound costs about 20 solves). */
 const BOUND_FROM = 24;
 
@@ -100,7 +103,9 @@ export function checkBeamLtb(
 		};
 		const bounded = !arrangementSelection.exhaustive && ctx.arrangements.length >= BOUND_FROM;
 		const solved = bounded ? new SolvedWeightings(parts, prepared) : null;
-		const peaks = new Map<number, Map<number, number>>();
+		// Per weighting and multiplier: its largest |M|, and the last bound with the μ it came from
+		// (a bound made again often finds the same μ: no new resistance is then needed).
+		const known = new Map<number, Map<number, { mMax: number; mu: number; u: number }>>();
 		const bound = (arr: LoadArrangement, t: number) => {
 			// A bound on μ gives one on the utilisation: the buckling resistance does not fall as
 			// Mcr rises (all else equal), so a lower bound on Mcr bounds MEd/Mb,Rd from above.
@@ -108,15 +113,20 @@ export function checkBeamLtb(
 			const weights = weightsAt(w, t);
 			const mu = solved!.bound(weights);
 			if (!(mu < Infinity)) return Infinity;
-			let byT = peaks.get(w.id);
-			if (!byT) peaks.set(w.id, (byT = new Map()));
-			let mMax = byT.get(t);
-			if (mMax === undefined) byT.set(t, (mMax = prepared.peak(weights)));
-			if (!(mMax > 0) || !(mu > 0)) return 0;
-			const mcr = mMax / mu;
-			if (!Number.isFinite(mcr)) return 0;
-			const u = mMax / resist(weights, mcr, mMax).mbRd;
-			return Number.isNaN(u) ? Infinity : u * (1 + 1e-9);
+			let byT = known.get(w.id);
+			if (!byT) known.set(w.id, (byT = new Map()));
+			let k = byT.get(t);
+			if (!k) byT.set(t, (k = { mMax: prepared.peak(weights), mu: NaN, u: Infinity }));
+			if (k.mu === mu) return k.u;
+			const { mMax } = k;
+			let u = 0;
+			if (mMax > 0 && mu > 0 && Number.isFinite(mMax / mu)) {
+				const v = mMax / resist(weights, mMax / mu, mMax).mbRd;
+				u = Number.isNaN(v) ? Infinity : v * (1 + 1e-9);
+			}
+			k.mu = mu;
+			k.u = u;
+			return u;
 		};
 		const worst = bounded
 			? findWorstArrangementBounded(ctx.arrangements, cached, bound)
@@ -241,9 +251,11 @@ class SolvedWeightings {
 		if (!this.bb) return Infinity;
 		const { A, B } = this.bb.endMoments(weights);
 		const norm = this.bb.norm(weights);
-		const refs = this.byClass.get(this.classOf(weights)) ?? this.all;
+		const same = this.byClass.get(this.classOf(weights));
+		// Otherwise the latest few solved (each bound from another class costs a loop).
+		const refs = same ?? this.all.slice(-OTHER_CLASS_REFS);
 		let best = Infinity;
-		for (const r of refs) best = Math.min(best, this.bb.fromSolved(weights, A, B, norm, r));
+		for (const r of refs) best = Math.min(best, this.bb.fromSolved(weights, A, B, norm, r, !!same));
 		return best;
 	}
 }

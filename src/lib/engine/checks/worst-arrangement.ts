@@ -102,26 +102,33 @@ export function findWorstArrangementBounded<T>(
 	const index = arrangements.map((_, i) => i);
 	/**
 	 * The arrangement with the largest utilisation at t, the earliest on a tie: best first by
-	 * bound, a bound refreshed before each evaluation (evaluations tighten the others).
+	 * bound, each bound made when the arrangement comes up and made again only when evaluations
+	 * since may have tightened it.
 	 */
 	const largest = (t: number, read: (i: number) => number) => {
-		const first = index.map((i) => bound(arrangements[i], t));
-		const queue = new BoundQueue(first);
+		const queue = new BoundQueue(index.map(() => Infinity));
+		const madeAt = index.map(() => -1);
+		let evaluations = 0;
 		let best = -1;
 		let top = -Infinity;
 		for (let i = queue.pop(); i >= 0; i = queue.pop()) {
 			if (queue.keyOf(i) < top) break;
-			const b = best >= 0 ? Math.min(queue.keyOf(i), bound(arrangements[i], t)) : Infinity;
+			let b = queue.keyOf(i);
+			if (best >= 0 && madeAt[i] < evaluations) {
+				b = Math.min(b, bound(arrangements[i], t));
+				madeAt[i] = evaluations;
+			}
 			if (b < top) continue;
-			// Put back behind a higher stale bound: that one may be the worse.
+			// Put back behind a higher bound: that one may be the worse.
 			if (b < queue.peekKey()) {
 				queue.push(i, b);
 				continue;
 			}
 			const u = read(i);
+			evaluations++;
 			if (best < 0 || u > top || (u === top && i < best)) [best, top] = [i, u];
 		}
-		return { best, top, first };
+		return { best, top, keys: index.map((i) => queue.keyOf(i)) };
 	};
 	const worst = largest(1, (i) => one(i).utilisation);
 	const existing = largest(0, zero);
@@ -135,7 +142,7 @@ export function findWorstArrangementBounded<T>(
 	const estimates = new Map(known.map((i) => [i, estimate(i)]));
 	const rest = index.filter((i) => !estimates.has(i));
 	known.sort((a, b) => estimates.get(a)! - estimates.get(b)!);
-	rest.sort((a, b) => byBound(worst.first, a, b));
+	rest.sort((a, b) => byBound(worst.keys, a, b));
 	let multiplier: number | null = null;
 	for (const i of [...known, ...rest]) {
 		const arrangement = arrangements[i];
