@@ -190,6 +190,21 @@ describe('the US walk: W12x26 A992, 20 ft, 2 kip at midspan, unbraced between su
 		expect(ltb.note).toContain('F1-1');
 	});
 
+	it('web sidesway buckling under the load (J10.4, J10-7, Cr = 960 000 ksi while Mu < My)', () => {
+		const r = run(walk('aisc-lrfd'));
+		const web = r.checks.find((c) => c.id === 'web' && c.label.includes('point load'))!;
+		expect(web.clause).toBe('AISC 360-22 J10.4 (J10-7)');
+		// W12x26 (Shapes Database): d 12.2, tf 0.380, kdes 0.680, tw 0.230, bf 6.49 in; h = d − 2k.
+		// Top flange unbraced over Lb = 240 in: ρ = (h/tw)/(Lb/bf) = 1.27 ≤ 1.7 (and ≤ 2.3: J10-6
+		// gives more, the lower J10-7 is taken with the rotation restraint unknown).
+		const h = 12.2 - 2 * 0.68;
+		const rho = h / 0.23 / (240 / 6.49);
+		const rn = ((960_000 * 0.23 ** 3 * 0.38) / h ** 2) * 0.4 * rho ** 3; // kips
+		expectRel(web.fRd as number, 0.85 * rn * KIP, 0.01);
+		// Mu = 17.6 kip·ft at the load is far below My = Fy·Sx = 139 kip·ft.
+		expect(web.note).toContain('960 000 ksi');
+	});
+
 	it('on ASD the same beam is checked with D + L and Mn/Ωb', () => {
 		const r = run(walk('aisc-asd'));
 		expect(r.answer.governing?.id).toBe('ltb');

@@ -174,6 +174,8 @@ export interface WebForceInput {
 	bf: number;
 	tf: number;
 	r: number;
+	/** Elastic section modulus about the bending axis, mm³ (My = fy·Wel). */
+	Wel: number;
 	/** Yield strength of web and flange, N/mm². */
 	fyw: number;
 	fyf: number;
@@ -210,6 +212,11 @@ export interface WebReading {
 	 * compressed (EN 1993-1-5 7.2(1)); with its clause and sentence when it governs.
 	 */
 	bendingInteraction: { clause: string; note: string } | null;
+	/**
+	 * A second reading that holds instead where the design moment at the force is at least
+	 * `fromMoment`, N·mm (AISC J10.4: Cr = 480 000 ksi once Mu ≥ My, 1.5Ma ≥ My on ASD).
+	 */
+	highMoment?: { fromMoment: number; reading: WebReading };
 }
 
 /** Clause strings and words of a basis for the rows and the report (data, so the report can read them). */

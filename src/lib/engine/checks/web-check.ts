@@ -62,6 +62,7 @@ function checkWebForce(
 		bf: m.b,
 		tf: m.tf,
 		r: m.r,
+		Wel: m.Wel,
 		fyw: m.fy,
 		fyf: m.fy,
 		E: ctx.basis.E,
@@ -77,35 +78,42 @@ function checkWebForce(
 	const mRd = interaction
 		? ctx.basis.computeBendingResistance({ ...m, resistance: ctx.resistance, elastic })
 		: 0;
-	const picked = selectArrangements(ctx, { p, fRd: web.fRd, mRd, pointSums });
+	// A strength that depends on the moment at the force is not linear in the weights: every
+	// arrangement is evaluated then.
+	const picked = web.highMoment
+		? ctx.arrangements
+		: selectArrangements(ctx, { p, fRd: web.fRd, mRd, pointSums });
+	const readingAt = (mEd: number) =>
+		web.highMoment && Math.abs(mEd) >= web.highMoment.fromMoment ? web.highMoment.reading : web;
 	const worst = findWorstArrangement(picked, (arr, t) => {
 		const fEd = p.force(arr, t);
 		const mEd = readMoment(ctx, arr, p.x, t);
-		const eta2 = fEd / web.fRd;
+		const eta2 = fEd / readingAt(mEd).fRd;
 		const eta1 = mRd > 0 ? compressedFlangeMoment(mEd, p.flange) / mRd : 0;
 		const combined = (eta2 + 0.8 * eta1) / 1.4;
-		const detail = { fEd, mEd, eta1, eta2, combined };
+		const detail = { fEd, mEd, eta1, eta2, combined, reading: readingAt(mEd) };
 		return { utilisation: Math.max(eta2, combined), detail };
 	});
 	const d = worst.detail;
-	const where = describePlace(web.place, p);
+	const reading = d.reading;
+	const where = describePlace(reading.place, p);
 	const withBending = interaction !== null && d.combined > d.eta2;
 	const bendingValues: Record<string, number> = interaction
 		? { mEd: d.mEd, mRd, eta1: d.eta1, eta2: d.eta2 }
 		: {};
 	return {
 		id: 'web',
-		label: `Web ${p.flange === 'top' ? 'under' : 'at'} ${p.name} (${web.kind}${where})`,
-		clause: withBending ? interaction.clause : web.clause,
+		label: `Web ${p.flange === 'top' ? 'under' : 'at'} ${p.name} (${reading.kind}${where})`,
+		clause: withBending ? interaction.clause : reading.clause,
 		level: 'governing',
 		utilisation: worst.utilisation,
 		utilisationExisting: worst.utilisationExisting,
 		pass: worst.utilisation <= 1,
 		multiplierAtCapacity: worst.multiplier,
-		values: { fEd: d.fEd, fRd: web.fRd, ...web.values, ...bendingValues },
+		values: { fEd: d.fEd, fRd: reading.fRd, ...reading.values, ...bendingValues },
 		x: p.x,
 		arrangement: worst.arrangement.name,
-		note: web.note + (withBending ? interaction.note : '')
+		note: reading.note + (withBending ? interaction.note : '')
 	};
 }
 

@@ -120,7 +120,7 @@ export function makeAiscBasis(method: AiscMethod): DesignBasis<FactorSettings> {
 				values: { ...r.values, cbF11 }
 			};
 		},
-		computeWebResistance: (o) => computeAiscWebReading(o, method),
+		computeWebResistance: (o) => computeAiscWebReading(o, method, o.fyf * o.Wel),
 		computeStableLength(o) {
 			// Lpd of Appendix 1, 1.3.2c from ψ (single curvature > 0; loaded segments come as 1).
 			const psi = Math.max(-1, Math.min(1, o.psi));

@@ -8,8 +8,8 @@
  * Our cautious choices, said in the row's note: forces are taken as compressive (a load hung
  * from the bottom flange is read like one bearing on it); the distance from the member end is
  * to the centre of the bearing; for J10.4 the rotational restraint of the loaded flange is taken
- * as unknown (the lower of the two cases that apply) and Cr = 480 000 ksi (the value for
- * Mu ≥ My), the lower strengths.
+ * as unknown (the lower of the two cases that apply), and Cr follows the design moment at the
+ * force (960 000 ksi below My, 480 000 ksi from My on).
  */
 import type { WebForceInput, WebReading } from '../basis-types';
 import {
@@ -30,8 +30,24 @@ const NAMES = {
 
 type Key = keyof typeof NAMES;
 
-/** The web reading of an AISC basis at one force. */
-export function computeAiscWebReading(o: WebForceInput, method: AiscMethod): WebReading {
+/**
+ * The web reading of an AISC basis at one force: with Cr = 960 000 ksi for J10.4, and, where
+ * J10.4 applies, the reading with Cr = 480 000 ksi that holds from Mu = My (1.5Ma = My on ASD),
+ * My = Fy·Sx of the member.
+ */
+export function computeAiscWebReading(
+	o: WebForceInput,
+	method: AiscMethod,
+	yieldMoment: number
+): WebReading {
+	const below = readWeb(o, method, true);
+	if (!below.sway) return below.reading;
+	const above = readWeb(o, method, false).reading;
+	const fromMoment = method === 'lrfd' ? yieldMoment : yieldMoment / 1.5;
+	return { ...below.reading, highMoment: { fromMoment, reading: above } };
+}
+
+function readWeb(o: WebForceInput, method: AiscMethod, momentBelowYield: boolean) {
 	const k = o.tf + o.r;
 	const h = o.hw - 2 * o.r;
 	const d = o.h;
@@ -50,7 +66,7 @@ export function computeAiscWebReading(o: WebForceInput, method: AiscMethod): Web
 			bf: o.bf,
 			Lb: o.unbracedLength,
 			compressionFlangeRestrained: 'unknown',
-			momentBelowYield: false
+			momentBelowYield
 		});
 		found.push(['J10.4', sway]);
 	}
@@ -61,19 +77,23 @@ export function computeAiscWebReading(o: WebForceInput, method: AiscMethod): Web
 	);
 	const least = strengths.reduce((a, b) => (b.fRd < a.fRd ? b : a));
 	const listed = strengths.map((s) => `${NAMES[s.key]} ${(s.fRd / 1000).toFixed(1)} kN`).join(', ');
-	const sway = found.some(([key]) => key === 'J10.4')
-		? ' J10.4 with the flange rotation restraint unknown (the lower case that applies) and ' +
-			'Cr = 480 000 ksi (cautious).'
+	const sway = strengths.some((s) => s.key === 'J10.4');
+	const cr = momentBelowYield
+		? '960 000 ksi (moment at the force below My)'
+		: '480 000 ksi (moment at the force at or above My)';
+	const swayWords = sway
+		? ` J10.4 with the flange rotation restraint unknown (the lower case that applies) and Cr = ${cr}.`
 		: '';
-	return {
+	const reading: WebReading = {
 		fRd: least.fRd,
 		kind: NAMES[least.key],
 		place: o.throughWeb ? 'through' : distanceFromEnd <= d ? 'end' : 'span',
 		clause: least.clause,
 		note:
 			`Available strengths: ${listed}; bearing length lb ${Math.round(o.ss)} mm, ` +
-			`${Math.round(distanceFromEnd)} mm from the member end.${sway}`,
+			`${Math.round(distanceFromEnd)} mm from the member end.${swayWords}`,
 		values: { ss: o.ss },
 		bendingInteraction: null
 	};
+	return { reading, sway };
 }
