@@ -4,6 +4,7 @@
  * check); a damaged or foreign file is refused and nothing changes.
  */
 import { readFile } from 'node:fs/promises';
+import AxeBuilder from '@axe-core/playwright';
 import type { Page } from '@playwright/test';
 import { saveDemo } from './check-helpers';
 import { NOTICE_KEY, test, expect } from './fixtures';
@@ -121,6 +122,13 @@ test('a backup cannot replace, hide or vouch for a check: it is added beside and
 		has: page.getByTestId('saved-title').getByText('Kept here', { exact: true })
 	});
 	await expect(original.getByTestId('saved-verdict')).toHaveText('✔ Pass');
+	// The list with what the import added, and its message: clean for axe (WCAG 2.x A and AA).
+	const axe = await new AxeBuilder({ page })
+		.withTags(['wcag2a', 'wcag2aa', 'wcag21aa', 'wcag22aa'])
+		.analyze();
+	expect(axe.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target).join(' ')}`)).toEqual(
+		[]
+	);
 	// The original opens as it was.
 	const now = JSON.parse(await exportFile(page)).records.find(
 		(r: { id: string }) => r.id === mine.id
