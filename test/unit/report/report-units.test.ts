@@ -87,6 +87,22 @@ describe('restateUnits: figures in engine sentences, converted (NIST SP 811)', (
 		);
 	});
 
+	it('reads figures grouped in thousands whole', () => {
+		expect(restateUnits('E = 210 000 MPa', 'us')).toBe(`E = ${sig3(210_000 / KSI_MPA)} ksi`);
+	});
+
+	it('writes the US figures of a US basis in SI for an SI reader; inches stay as written', () => {
+		expect(restateUnits('Fy above 65 ksi', 'si')).toBe(`Fy above ${sig3(65 * KSI_MPA)} MPa`);
+		expect(restateUnits('E = 29 000 ksi', 'si')).toBe(`E = ${sig3(29_000 * KSI_MPA)} MPa`);
+		expect(restateUnits('Mp 40 kip-ft, 3 kips and 0.5 kip/ft over 12 ft', 'si')).toBe(
+			`Mp ${sig3(40 * KIP_KN * FT_M)} kNm, ${sig3(3 * KIP_KN)} kN and ` +
+				`${sig3((0.5 * KIP_KN) / FT_M)} kN/m over ${sig3(12 * FT_M)} m`
+		);
+		expect(restateUnits('a bearing of 4 in', 'si')).toBe('a bearing of 4 in');
+		// US text read in US units is left exactly as written.
+		expect(restateUnits('E = 29 000 ksi', 'us')).toBe('E = 29 000 ksi');
+	});
+
 	it('leaves SI text exactly as written', () => {
 		const text = 'stiff bearing 100 mm; fy = 235 N/mm²; hinge at 2.40 m; Mp 300 kNm';
 		expect(restateUnits(text, 'si')).toBe(text);
@@ -138,6 +154,30 @@ describe('a report read in US customary units', () => {
 			expect(us.report.textUnits).toBe('us');
 		});
 	}
+
+	it('an AISC-basis report read in SI carries its US figures in SI (inches aside)', () => {
+		const aisc = {
+			format: 'hingepoint.case',
+			version: 1,
+			title: 'AISC basis',
+			basis: 'aisc-lrfd',
+			beam: {
+				spans: [6],
+				supports: ['pin', 'pin'],
+				section: { designation: 'W12x26' },
+				grade: 'A992',
+				restraint: { lateral: 'continuous' }
+			},
+			loads: [{ kind: 'point', x: 3, value: 20, action: 'temporary' }]
+		};
+		const si = run(aisc, 'si');
+		const words = [...collectWords(si.report), ...collectWords(si.warnings, 'warnings')];
+		// The Specification's own limit, Fy ≤ 65 ksi (AISC 360-22 Appendix 1), reads in MPa.
+		expect(si.report.design.route.reasons.join(' ')).toContain(`Fy ≤ ${sig3(65 * KSI_MPA)} MPa`);
+		for (const [path, w] of words) {
+			expect(w, path).not.toMatch(/ksi|kips?\b|kip[·/-]ft|\d ?ft\b/);
+		}
+	});
 
 	it('keeps every number in SI and the same as the SI report', () => {
 		for (const { si, us } of cases) {

@@ -8,12 +8,12 @@ import type { SummaryUnits } from './summary-units';
 import type { CheckReport } from './types';
 
 /**
- * The report with its words in `units` (the same object, changed in place; unchanged for SI).
+ * The report with its words in `units` (the same object, changed in place): figures written in
+ * the other system are restated, figures already in `units` are left exactly as written.
  * The answer's message is written in its units from the start (see answer-report.ts), and grade
  * source tags stay as cited.
  */
 export function restateReportWords(r: CheckReport, units: SummaryUnits): CheckReport {
-	if (units === 'si') return r;
 	const say = (t: string) => restateUnits(t, units);
 	const sayOrNull = (t: string | null) => (t === null ? null : say(t));
 	r.answer.reasons = restateAll(r.answer.reasons, units);

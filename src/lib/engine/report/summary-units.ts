@@ -52,6 +52,11 @@ export function unitSymbol(q: SummaryQuantity, units: SummaryUnits): string {
 	return SHOWN[units][q][1];
 }
 
+/** A value shown in `units` converted back to the SI output unit of its quantity. */
+export function convertFrom(value: number, q: SummaryQuantity, units: SummaryUnits): number {
+	return value * SHOWN[units][q][0];
+}
+
 /** An SI output value converted to the chosen units. */
 export function convertTo(valueSI: number, q: SummaryQuantity, units: SummaryUnits): number {
 	return valueSI / SHOWN[units][q][0];
