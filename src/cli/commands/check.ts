@@ -57,7 +57,7 @@ function formatCheckText(
 		lines.push(`  governing arrangement: ${r.design.governingArrangement}`);
 	r.sections.forEach((s, i) => {
 		const g = r.grades[i];
-		const cls = s.class === null ? 'class not known' : `Class ${s.class}`;
+		const cls = s.classWords ?? 'class not known';
 		const fy = g ? `, ${g.name}, fy ${q(g.fy, 'stress')}` : '';
 		lines.push(`Span ${i + 1}: ${s.designation}${fy}, ${cls}`);
 	});

@@ -7,7 +7,7 @@
  *
  * Our cautious choices, said in the row's note: forces are taken as compressive (a load hung
  * from the bottom flange is read like one bearing on it); the distance from the member end is
- * to the centre of the bearing; for J10.4 the rotational restraint of the loaded flange is taken
+ * to the near edge of the bearing (the end rules of J10.2 and J10.3 then apply soonest); for J10.4 the rotational restraint of the loaded flange is taken
  * as unknown (the lower of the two cases that apply), and Cr follows the design moment at the
  * force (960 000 ksi below My, 480 000 ksi from My on).
  */
@@ -51,7 +51,7 @@ function readWeb(o: WebForceInput, method: AiscMethod, momentBelowYield: boolean
 	const k = o.tf + o.r;
 	const h = o.hw - 2 * o.r;
 	const d = o.h;
-	const distanceFromEnd = o.endDistance + o.ss / 2;
+	const distanceFromEnd = o.endDistance;
 	const base = { tw: o.tw, tf: o.tf, d, E: o.E, Fyw: o.fyw, lb: o.ss, distanceFromEnd };
 	const found: [Key, WebForceStrength][] = [
 		['J10.2', computeWebLocalYielding({ ...base, k })],
