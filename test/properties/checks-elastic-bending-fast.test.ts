@@ -104,7 +104,14 @@ function makeContext(c: {
 	});
 	const effects = analyseLoadGroups({ beam: c.beam, EI: c.EI, loads: c.loads });
 	// Only what the elastic bending row reads.
-	return { beam: c.beam, nodes: c.nodes, loads: c.loads, arrangements, effects } as CheckContext;
+	return {
+		beam: c.beam,
+		nodes: c.nodes,
+		loads: c.loads,
+		arrangements,
+		effects,
+		basis: en1993
+	} as CheckContext;
 }
 
 describe('elastic bending by superposed pieces', () => {

@@ -49,6 +49,12 @@ describe('section loss', () => {
 		);
 	});
 
+	it('a loss leaving a round-off sliver of wall is refused, not NaN (found by this property)', () => {
+		expect(propsAt('CF SHS 60x60x3.0', 2.9999999999999982)).toBeNull();
+		expect(propsAt('CF SHS 60x60x3.0', 2.6)).toBeNull(); // 0.4 mm left: below what a gauge reads
+		expect(propsAt('CF SHS 60x60x3.0', 2.4)).not.toBeNull();
+	});
+
 	it('a zero loss gives the library properties exactly', () => {
 		for (const s of listSections()) expect(propsAt(s.designation, 0)).toEqual(s.props);
 	});
