@@ -77,23 +77,34 @@ export class CheckSession {
 	 * the new check in progress or a blank one.
 	 */
 	async open(url: URL, defaults: { settings: Settings; set: FactorSet }): Promise<void> {
+		// The latest open wins: an earlier one still reading the store must not show its check
+		// over the one asked for since ("New check" tapped while a saved check was opening).
+		const ticket = ++this.#openTicket;
 		this.ready = false;
 		this.message = '';
 		this.saveStatus = '';
 		this.unsavedNote = '';
 		try {
 			await this.drafts.flush();
-			await this.#open(url, defaults);
+			if (ticket !== this.#openTicket) return;
+			await this.#open(url, defaults, () => ticket === this.#openTicket);
 		} catch (error) {
+			if (ticket !== this.#openTicket) return;
 			// Never leave the screen without a case: say what failed and start a blank one.
 			this.message = `The check could not be opened: ${error instanceof Error ? error.message : String(error)}`;
 			this.#blank(defaults);
 		} finally {
-			this.ready = true;
+			if (ticket === this.#openTicket) this.ready = true;
 		}
 	}
 
-	async #open(url: URL, defaults: { settings: Settings; set: FactorSet }): Promise<void> {
+	#openTicket = 0;
+
+	async #open(
+		url: URL,
+		defaults: { settings: Settings; set: FactorSet },
+		stillAsked: () => boolean
+	): Promise<void> {
 		const [store, tools] = await Promise.all([connectStore(), loadEngineTools()]);
 		this.tools = tools;
 		if (!store)
@@ -102,22 +113,26 @@ export class CheckSession {
 		const listed = store ? await listChecks(store) : null;
 		this.firstRun = !(listed?.ok && listed.value.length > 0);
 		await this.shelf.refresh();
+		if (!stillAsked()) return;
 		const id = url.searchParams.get('id');
 		if (url.searchParams.has('new')) {
 			if (current) await this.shelf.setAside();
+			if (!stillAsked()) return;
 			return this.#blank(defaults);
 		}
 		if (id && store) {
 			const found = await getCheck(store, id);
+			if (!stillAsked()) return;
 			const problem = found.ok ? findShapeProblem(found.value.input) : null;
 			if (found.ok && problem) this.message = describeIncomplete(problem, 'record');
-			else if (found.ok) return this.#openSaved(store, found.value);
+			else if (found.ok) return this.#openSaved(store, found.value, stillAsked);
 			else this.message = found.message;
 		}
 		if (url.hash.includes('c=')) {
 			const decoded = openSharedCase(url.hash);
 			if (decoded.ok) {
 				if (current) await this.shelf.setAside();
+				if (!stillAsked()) return;
 				this.#show('link', null, asCaseFile(decoded.value));
 				return;
 			}
@@ -140,8 +155,13 @@ export class CheckSession {
 
 	// Unsaved edits of this check are shown, never hidden, and the screen says they are not saved.
 	// The form gets a copy of the saved input: edits must never reach the record it is compared to.
-	async #openSaved(store: CheckStore, record: CheckRecord): Promise<void> {
+	async #openSaved(
+		store: CheckStore,
+		record: CheckRecord,
+		stillAsked: () => boolean
+	): Promise<void> {
 		const stored = await loadDraft(store, draftSlot(record.id));
+		if (!stillAsked()) return;
 		const draft = stored.ok && stored.value ? readDraft(stored.value.form) : null;
 		const differs = draft && JSON.stringify(draft.case) !== JSON.stringify(record.input);
 		if (draft && differs) {
