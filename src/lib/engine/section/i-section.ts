@@ -1,6 +1,6 @@
 import type { IDims, SectionProps } from './types';
 import { computeSpandrelArea, computeSpandrelOffset, computeSpandrelOwnI } from './fillet';
-import { STEEL_DENSITY } from '../units';
+import { buildIProps } from './i-props-record';
 import { computeTaperedIProperties } from './tapered-i';
 
 /** Options for computeISectionProperties. */
@@ -45,22 +45,7 @@ export function computeISectionProperties(
 	const Wplz = (tf * b * b) / 2 + (hw * tw * tw) / 4 + 4 * af * (tw / 2 + yf);
 	const It = welded ? (2 * b * tf ** 3 + hw * tw ** 3) / 3 : computeRolledTorsionConstant(dims);
 	const Avz = welded ? hw * tw : Math.max(A - 2 * b * tf + (tw + 2 * r) * tf, hw * tw);
-	return {
-		A,
-		mass: (A * STEEL_DENSITY) / 1e6,
-		Iy,
-		Iz,
-		Wely: (2 * Iy) / h,
-		Wply,
-		Welz: (2 * Iz) / b,
-		Wplz,
-		It,
-		Iw: (Iz * (h - tf) ** 2) / 4,
-		iy: Math.sqrt(Iy / A),
-		iz: Math.sqrt(Iz / A),
-		Avz,
-		d: h - 2 * tf - 2 * r
-	};
+	return buildIProps({ A, Iy, Iz, Wply, Wplz, It, Avz, h, b, tf, d: h - 2 * tf - 2 * r });
 }
 
 /**

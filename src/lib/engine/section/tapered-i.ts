@@ -1,5 +1,5 @@
 import type { IDims, SectionProps } from './types';
-import { STEEL_DENSITY } from '../units';
+import { buildIProps } from './i-props-record';
 import { computeSpandrelArea, computeSpandrelOffset, computeSpandrelOwnI } from './fillet';
 
 /** ∫ f over [a, b] by one Simpson panel: exact for the cubics integrated here. */
@@ -46,20 +46,5 @@ export function computeTaperedIProperties(dims: IDims): SectionProps {
 	const flangesIt = 4 * integrate((y) => t(y) ** 3 / 3, 0, edge);
 	const It = flangesIt + ((h - 2 * t(0)) * tw ** 3) / 3;
 	const Avz = Math.max(A - 2 * b * tf + (tw + 2 * dims.r) * tf, (h - 2 * tf) * tw);
-	return {
-		A,
-		mass: (A * STEEL_DENSITY) / 1e6,
-		Iy,
-		Iz,
-		Wely: (2 * Iy) / h,
-		Wply,
-		Welz: (2 * Iz) / b,
-		Wplz,
-		It,
-		Iw: (Iz * (h - tf) ** 2) / 4,
-		iy: Math.sqrt(Iy / A),
-		iz: Math.sqrt(Iz / A),
-		Avz,
-		d: h - 2 * t(web) - 2 * dims.r
-	};
+	return buildIProps({ A, Iy, Iz, Wply, Wplz, It, Avz, h, b, tf, d: h - 2 * t(web) - 2 * dims.r });
 }
