@@ -1,5 +1,5 @@
 import type { CliCommand } from './index';
-import { listSections } from '../../lib/engine/section/index';
+import { listSectionFamilies, listSections } from '../../lib/engine/section/index';
 import { formatSig, toSectionJson } from './section-json';
 
 /** Column headings and widths of the readable table. */
@@ -11,15 +11,48 @@ const COLUMNS: [string, number][] = [
 	['Wpl,y cm³', 11]
 ];
 
+/** Words for the shapes of a family: a US HSS holds rectangular, square and round tubes. */
+const SHAPE_WORDS: Record<string, string> = {
+	I: 'I/H',
+	RHS: 'rectangular/square hollow',
+	CHS: 'round hollow',
+	flat: 'flat'
+};
+
+/** The families of the tables, one line each: id, shapes, rows, standard. */
+function describeFamilies(): string {
+	return listSectionFamilies()
+		.map((f) => {
+			const shapes = f.shapes.map((s) => SHAPE_WORDS[s] ?? s).join(', ');
+			return `  ${f.family.padEnd(6)} ${String(f.count).padStart(4)}  ${shapes}; ${f.standards.join('; ')}`;
+		})
+		.join('\n');
+}
+
+/** `CF SHS` or `cf-shs` as typed, read as the family id `CFSHS`. */
+function readFamily(text: string | undefined): string | undefined {
+	return text?.toUpperCase().replace(/[\s_-]+/g, '');
+}
+
 /** `sections [--family UB] [--json]`: every library section, as JSON or a table. */
 export const sectionsCommand: CliCommand = {
-	summary: 'list the section library (--family UB|UC|IPE|HEA|HEB|W|SHS|RHS|CHS, --json)',
+	// Read from the tables when asked, so every family they hold is listed and none twice.
+	get summary() {
+		const families = listSectionFamilies().map((f) => f.family);
+		return `list the section library (--family ${families.join('|')}, --json)`;
+	},
 	async run(args) {
 		const familyAt = args.indexOf('--family');
-		const family = familyAt >= 0 ? args[familyAt + 1]?.toUpperCase() : undefined;
+		const family = familyAt >= 0 ? readFamily(args[familyAt + 1]) : undefined;
+		if (familyAt >= 0 && !family) {
+			process.stderr.write(`--family takes one of these families:\n${describeFamilies()}\n`);
+			return 2;
+		}
 		const sections = listSections().filter((s) => !family || s.family === family);
 		if (family && sections.length === 0) {
-			process.stderr.write(`no sections in family "${family}"\n`);
+			process.stderr.write(
+				`no sections in family "${family}"; the families are:\n${describeFamilies()}\n`
+			);
 			return 2;
 		}
 		if (args.includes('--json')) {

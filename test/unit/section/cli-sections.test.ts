@@ -4,6 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { spawnSync } from 'node:child_process';
+import { listSections } from '../../../src/lib/engine/section/index';
 
 function runCli(...args: string[]) {
 	const r = spawnSync('npx', ['tsx', 'src/cli/main.ts', ...args], {
@@ -88,5 +89,58 @@ describe('hingepoint section "<designation>"', () => {
 		expect(code).toBe(0);
 		expect(stdout).toMatch(/HEB 300/);
 		expect(stdout).toMatch(/Wply .* cm³/);
+	});
+});
+
+/**
+ * The families the tables must hold: issue 11 §5 names W, HP, S, HSS (rectangular, square,
+ * round) and pipe (ASTM A6 / A500 / A53), HE A/B/M, UB, UC, IPE (EN 10365, BS 4-1) and the
+ * EN 10210-2 / EN 10219-2 hollow sections.
+ */
+const NAMED_FAMILIES = [
+	'W',
+	'HP',
+	'S',
+	'HSS',
+	'PIPE',
+	'HEA',
+	'HEB',
+	'HEM',
+	'UB',
+	'UC',
+	'IPE',
+	'SHS',
+	'RHS',
+	'CHS',
+	'CFSHS',
+	'CFRHS',
+	'CFCHS'
+];
+
+describe('hingepoint sections --family', () => {
+	it('the usage lists exactly the families the tables hold, each named in issue 11', () => {
+		const { code, stderr } = runCli();
+		expect(code).toBe(0);
+		const line = stderr.split('\n').find((l) => l.trim().startsWith('sections'));
+		const listed = /--family ([A-Z|]+)/.exec(line ?? '')?.[1].split('|') ?? [];
+		const inTables = [...new Set(listSections().map((s) => s.family))];
+		expect([...listed].sort()).toEqual([...inTables].sort());
+		expect([...listed].sort()).toEqual([...NAMED_FAMILIES].sort());
+	});
+
+	it('an unknown family exits 2 and lists every family with its shapes and standard', () => {
+		const { code, stderr } = runCli('sections', '--family', 'HEX');
+		expect(code).toBe(2);
+		for (const family of NAMED_FAMILIES) expect(stderr).toMatch(new RegExp(`^  ${family} `, 'm'));
+		// AISC Shapes Database v15.0: HSS holds rectangular, square and round tubes.
+		expect(stderr).toMatch(/HSS .*rectangular\/square hollow, round hollow/);
+	});
+
+	it('reads a cold-formed family as typed with its space', () => {
+		const { code, stdout } = runCli('sections', '--family', 'cf shs');
+		expect(code).toBe(0);
+		const rows = stdout.split('\n').filter((l) => l.startsWith('CF SHS '));
+		expect(rows.length).toBe(listSections().filter((s) => s.family === 'CFSHS').length);
+		expect(rows.length).toBeGreaterThan(0);
 	});
 });

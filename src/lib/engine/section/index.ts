@@ -2,6 +2,7 @@
 export type * from './types';
 export { resolveSection, type ResolveSectionOptions } from './resolve';
 export { findSection, suggestSections, listSections } from './search';
+export { listSectionFamilies, type SectionFamilyEntry } from './families';
 export { parseDesignation } from './designation';
 export {
 	identifySection,
