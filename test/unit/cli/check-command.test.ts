@@ -175,4 +175,49 @@ describe('check command', () => {
 			expect(JSON.parse(r.out).errors[0].message).toMatch(/--units takes si or us/);
 		});
 	});
+
+	describe('on an AISC basis', () => {
+		/** The US walk of issue 11: W12x26 A992, 20 ft, 2 kip at midspan, held only at the ends. */
+		const usWalk = (basis: string) => {
+			const dir = mkdtempSync(join(tmpdir(), 'hp-aisc-'));
+			const file = join(dir, 'case.json');
+			writeFileSync(
+				file,
+				JSON.stringify({
+					format: 'hingepoint.case',
+					version: 1,
+					title: 'DEMO — invented US walk',
+					basis,
+					units: 'us',
+					beam: {
+						spans: [20],
+						supports: ['pin', 'pin'],
+						section: { designation: 'W12x26' },
+						grade: 'A992',
+						restraint: { lateral: 'ends-only' }
+					},
+					loads: [{ kind: 'point', x: 10, value: 2, action: 'temporary' }]
+				})
+			);
+			return file;
+		};
+		// W12x26: bf = 6.49 in, tf = 0.380 in, h/tw = 47.2 (AISC Shapes Database v15.0);
+		// AISC 360-22 Table B4.1b cases 10 and 15: λp = 0.38√(E/Fy) flange, 3.76√(E/Fy) web.
+		const flangeCompact = 6.49 / (2 * 0.38) <= 0.38 * Math.sqrt(29000 / 50);
+		const webCompact = 47.2 <= 3.76 * Math.sqrt(29000 / 50);
+
+		it("names the span's section rank in AISC words, never as an EN 1993-1-1 class", () => {
+			expect(flangeCompact && webCompact).toBe(true);
+			for (const basis of ['aisc-lrfd', 'aisc-asd']) {
+				for (const units of ['us', 'si']) {
+					const r = runCheck(usWalk(basis), '--units', units);
+					expect(r.code).toBe(0);
+					const span = r.out.split('\n').find((l) => l.startsWith('Span 1:')) ?? '';
+					expect(span).toMatch(/W12x26, ASTM A992, fy .*, compact/);
+					// EN 1993-1-1 Table 5.2 class words and partial factors have no place here.
+					expect(r.out).not.toMatch(/Class [1-4]|γM|EN 1993/);
+				}
+			}
+		});
+	});
 });
