@@ -5,6 +5,7 @@
 import { resolveGrade } from '../material/grades';
 import type { GradeProduct, SteelGrade } from '../material/types';
 import type { InputIssue } from '../model/issue';
+import { designWallFactor } from '../section/hss-wall';
 import { resolveSection } from '../section/resolve';
 import type { ResolvedSection, SectionSpec } from '../section/types';
 import { RANGES, SIZE_LIMITS } from './limits';
@@ -127,7 +128,49 @@ export function parseSections(
 	if (resolved.length !== entries.length || spanCount === undefined) return undefined;
 	const sections = perSpan ? resolved : new Array<ResolvedSection>(spanCount).fill(resolved[0]);
 	const grades = resolveGrades(beam.grade, sections, issues, warnings);
-	return grades ? { sections, grades } : undefined;
+	if (!grades) return undefined;
+	const walled = applyGradeWalls(entries as SectionSpec[], perSpan, sections, grades, {
+		loss,
+		issues
+	});
+	return walled ? { sections: walled, grades } : undefined;
+}
+
+/**
+ * US tubes on the design wall of their grade (AISC 360-22 B4.2): the tables carry 0.93 × nominal
+ * (ASTM A500 and A53, ERW); an A1085 tube is read again on its nominal wall. One section entry
+ * for the whole beam stays one object.
+ */
+function applyGradeWalls(
+	entries: SectionSpec[],
+	perSpan: boolean,
+	sections: ResolvedSection[],
+	grades: (SteelGrade | null)[],
+	{ loss, issues }: { loss: number; issues: InputIssue[] }
+): ResolvedSection[] | undefined {
+	const again = new Map<number, ResolvedSection>();
+	const out: ResolvedSection[] = [];
+	for (const [i, section] of sections.entries()) {
+		const gradeId = grades[i]?.id;
+		const { nominalWall, designWall } = section;
+		const wanted =
+			nominalWall === undefined || gradeId === undefined
+				? designWall
+				: nominalWall * designWallFactor(gradeId);
+		if (wanted === undefined || Math.abs(wanted - (designWall ?? 0)) < 1e-9) {
+			out.push(section);
+			continue;
+		}
+		const k = perSpan ? i : 0;
+		if (!again.has(k)) {
+			const r = resolveSection(entries[k], { loss, gradeId });
+			const path = perSpan ? `beam.section[${k}]` : 'beam.section';
+			if (!r.ok) return void issues.push(...relocate(r.issues, path));
+			again.set(k, r.value);
+		}
+		out.push(again.get(k)!);
+	}
+	return out;
 }
 
 /** Length of a grade name; range of own fy and fu (MPa), before the grade library reads them. */

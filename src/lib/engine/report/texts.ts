@@ -7,6 +7,7 @@ import type { ReportWording } from '../checks/basis-types';
 import { ENGINEER_NOTICE_SHORT } from '../notice';
 import { formatIn, type SummaryUnits } from './summary-units';
 import type { CollapseReport } from './types';
+import { describeDesignWalls } from './wall-words';
 
 const FAILS_UNDER_FIXED =
 	'The beam fails under the existing loads alone: no temporary load can be added. ' +
@@ -92,5 +93,6 @@ export function writeAssumptions(
 			units === 'si' ? `${model.sectionLoss} mm` : formatIn(model.sectionLoss, 'small', units);
 		out.push(`A section loss of ${loss} per exposed face is deducted.`);
 	}
+	out.push(...describeDesignWalls(model, units));
 	return out;
 }

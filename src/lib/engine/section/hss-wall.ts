@@ -1,4 +1,4 @@
-import type { LibrarySection, RhsDims, SectionShape } from './types';
+import type { ChsDims, LibrarySection, RhsDims, SectionDims, SectionShape } from './types';
 import { computeSectionProperties } from './properties';
 
 /**
@@ -17,17 +17,30 @@ export function computeHssCornerRadii(t: number): { ro: number; ri: number } {
 }
 
 /**
+ * The dims of a US HSS or pipe (table dims, A500 design wall) on the design wall of a grade: the
+ * wall and, for a rectangular tube, its corner radii follow it.
+ * @example withDesignWall('CHS', { d: 168.3, t: 6.6 }, 7.11, 'A1085') // { d: 168.3, t: 7.11 }
+ */
+export function withDesignWall(
+	shape: SectionShape,
+	dims: SectionDims,
+	nominalWall: number,
+	gradeId: string
+): SectionDims {
+	const t = nominalWall * designWallFactor(gradeId);
+	return shape === 'RHS'
+		? { ...(dims as RhsDims), t, ...computeHssCornerRadii(t) }
+		: { ...(dims as ChsDims), t };
+}
+
+/**
  * The same US HSS or pipe with the design wall of another grade (properties recomputed); any
  * other section is returned unchanged. Library sections carry the A500 design wall.
  * @example applyDesignWall(findSection('HSS8x6x1/2')!, 'A1085').dims // t = 12.7 mm
  */
 export function applyDesignWall(section: LibrarySection, gradeId: string): LibrarySection {
 	if (section.nominalWall === undefined) return section;
-	const t = section.nominalWall * designWallFactor(gradeId);
-	const dims =
-		section.shape === 'RHS'
-			? { ...(section.dims as RhsDims), t, ...computeHssCornerRadii(t) }
-			: { ...section.dims, t };
+	const dims = withDesignWall(section.shape, section.dims, section.nominalWall, gradeId);
 	return {
 		...section,
 		dims,

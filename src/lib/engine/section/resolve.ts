@@ -5,11 +5,17 @@ import { validateSectionDims } from './validate-dims';
 import { applySectionLoss } from './loss';
 import { resolveKnownMp } from './known-mp';
 import { readSectionSpec } from './read-spec';
+import { withDesignWall } from './hss-wall';
 
 /** Options for resolveSection. */
 export interface ResolveSectionOptions {
 	/** Uniform thickness loss per exposed face, mm (default 0). */
 	loss?: number;
+	/**
+	 * Material id of the steel: a US HSS or pipe takes its design wall from it (AISC 360-22 B4.2:
+	 * nominal for A1085, 0.93 × nominal otherwise, the table's wall when not given).
+	 */
+	gradeId?: string;
 }
 
 type Dimensioned = Exclude<SectionShape, 'known-mp'>;
@@ -45,9 +51,14 @@ export function resolveSection(
 	const read = readSectionSpec(spec);
 	if (!read.ok) return read;
 	const { shape, designation, family, standard, defaultGrade, nominalWall } = read.value;
-	const dimIssues = validateSectionDims(shape, read.value.dims);
+	const table = read.value.dims;
+	const given =
+		nominalWall !== undefined && options.gradeId !== undefined
+			? withDesignWall(shape, table, nominalWall, options.gradeId)
+			: table;
+	const dimIssues = validateSectionDims(shape, given);
 	if (dimIssues.length > 0) return { ok: false, issues: dimIssues };
-	const reduced = applySectionLoss(shape, read.value.dims, loss);
+	const reduced = applySectionLoss(shape, given, loss);
 	if (!reduced.ok) return reduced;
 	// A loss can leave plates but break the fit (e.g. no straight web left): report it as the loss.
 	const afterIssues = validateSectionDims(shape, reduced.dims);
@@ -68,6 +79,9 @@ export function resolveSection(
 	};
 	// Library identity only: measured sections have no family grade or table wall.
 	if (defaultGrade !== undefined) value.defaultGrade = defaultGrade;
-	if (nominalWall !== undefined) value.nominalWall = nominalWall;
+	if (nominalWall !== undefined) {
+		value.nominalWall = nominalWall;
+		value.designWall = (given as { t: number }).t;
+	}
 	return { ok: true, value, warnings: read.warnings };
 }

@@ -148,6 +148,11 @@ export interface ResolvedSection {
 	defaultGrade?: string;
 	/** Nominal wall of a US HSS or pipe from the table, mm (dims carry the design wall). */
 	nominalWall?: number;
+	/**
+	 * Design wall of a US HSS or pipe before any loss, mm (AISC 360-22 B4.2): 0.93 × nominal for
+	 * ERW tubes (A500, A53), the nominal wall for A1085.
+	 */
+	designWall?: number;
 	/** Uniform thickness loss applied per exposed face, mm. */
 	loss: number;
 	/** Thickness that sets the grade's strength step (flange for rolled I), mm; 0 for known-mp. */
