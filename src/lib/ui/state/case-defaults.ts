@@ -1,6 +1,7 @@
 import type { FactorSet, Settings } from '$lib/storage';
 import type { CaseFile } from './case-file';
 import { factorsForBasis } from './design-basis';
+import { basisGrade } from './usual-grade';
 
 /**
  * The factors a case takes from a factor set: the combination rule by the engine's set name, and
@@ -23,8 +24,8 @@ export function factorsFromSet(set: FactorSet): NonNullable<CaseFile['factors']>
 }
 
 /**
- * A new case with the user's defaults from settings: design basis, factor set, lateral restraint,
- * deflection limit. Does not mutate its argument.
+ * A new case with the user's defaults from settings: design basis with its usual grade, factor
+ * set, lateral restraint, deflection limit. Does not mutate its argument.
  * @example
  * applySettingsDefaults(createBlankCase(), settings, set).deflectionLimit // 200
  */
@@ -32,8 +33,10 @@ export function applySettingsDefaults(c: CaseFile, settings: Settings, set: Fact
 	return {
 		...c,
 		// Top-flange loading is the cautious assumption for lateral-torsional buckling.
+		// The basis's usual grade until a section says otherwise (A992 on AISC, S275 on Eurocode).
 		beam: {
 			...c.beam,
+			grade: basisGrade(settings.defaultBasis, undefined),
 			restraint: { lateral: settings.defaultRestraint, loadHeight: 'top-flange' }
 		},
 		basis: settings.defaultBasis,

@@ -9,6 +9,7 @@ import { collectGeneral, listProblems, mergeMessages } from './form-messages';
 import { formatFieldValue, parseFieldText, readBlankText } from './field-text';
 import type { CheckOutcome } from './check-outcome';
 import { toSiCase } from './si-case';
+import { describeGradeMove, followGrade, type UsualGrade } from './usual-grade';
 
 /** What is kept as the draft: the case plus anything typed that is not (yet) a valid value. */
 export interface FormDraft {
@@ -48,6 +49,10 @@ export class CheckForm {
 	units = $state<UnitSystem>('SI');
 	pending = $state(false);
 	savedId = $state<string | null>(null);
+	/** The grade was picked in the picker since the case was opened: no change replaces it. */
+	gradeByHand = $state(false);
+	/** Said under the grade picker after the form moved the grade to the section's usual one. */
+	gradeNote = $state<string | null>(null);
 	/** Messages by field path: typing problems first, then the engine's input issues. */
 	messages = $derived(mergeMessages(this.local, this.outcome, this.case));
 	/** Engine issues that belong to no single field. */
@@ -112,6 +117,41 @@ export class CheckForm {
 		this.schedule();
 	}
 
+	/** The grade picked by the user (an id or own strengths): kept whatever section follows. */
+	pickGrade(grade: CaseFile['beam']['grade']): void {
+		this.gradeByHand = true;
+		this.gradeNote = null;
+		this.forget('beam.grade');
+		this.update((c) => (c.beam.grade = grade));
+	}
+
+	/**
+	 * A change of section or basis that may move the grade: a grade not picked by hand that is
+	 * still the usual one of the section before the change (or none) becomes the usual one after
+	 * it, and `gradeNote` says so. `usualOf` reads the usual grade (null: none needed or known).
+	 */
+	updateFollowingGrade(
+		mutate: (c: CaseFile) => void,
+		usualOf: (c: CaseFile) => UsualGrade | null
+	): void {
+		const before = usualOf(this.case)?.id;
+		mutate(this.case);
+		const after = usualOf(this.case);
+		const grade = this.case.beam.grade;
+		const moved = followGrade({ grade, byHand: this.gradeByHand, before, after });
+		if (moved) {
+			this.case.beam.grade = moved.id;
+			this.forget('beam.grade');
+			this.gradeNote = describeGradeMove(moved);
+		} else if (!after || grade !== after.id) {
+			this.gradeNote = null;
+		} else if (this.gradeNote !== null) {
+			// Still the usual grade, of the new section now.
+			this.gradeNote = describeGradeMove(after);
+		}
+		this.schedule();
+	}
+
 	/** Forgets typed texts under a path prefix (after the fields there were rebuilt). */
 	forget(prefix: string): void {
 		for (const key of Object.keys(this.texts)) if (key.startsWith(prefix)) delete this.texts[key];
@@ -166,6 +206,9 @@ export class CheckForm {
 		this.texts = {};
 		this.local = {};
 		this.savedId = options.savedId ?? null;
+		// An opened case's grade counts as chosen only where it is not its section's usual one.
+		this.gradeByHand = false;
+		this.gradeNote = null;
 		const typedIn = options.units ?? this.units;
 		const current = this.units;
 		this.units = typedIn;

@@ -21,6 +21,9 @@ const FIXED: Record<string, FieldInfo> = {
 	'beam.section.b': { kind: 'dimension', rule: 'positive' },
 	'beam.section.tw': { kind: 'dimension', rule: 'positive' },
 	'beam.section.tf': { kind: 'dimension', rule: 'positive' },
+	// Measured tubes: outside diameter and wall.
+	'beam.section.d': { kind: 'dimension', rule: 'positive' },
+	'beam.section.t': { kind: 'dimension', rule: 'positive' },
 	// Left blank: r = 0, the smallest section properties (the engine says so in a warning).
 	'beam.section.r': { kind: 'dimension', rule: 'non-negative', optional: true },
 	'beam.section.mp': { kind: 'moment', rule: 'positive' },
