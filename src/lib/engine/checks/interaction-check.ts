@@ -5,41 +5,38 @@
  * simplification of the elastic interaction.
  */
 import { listShearPoints, type CheckContext } from './context';
+import { preparePointEffects } from './point-effects';
 import type { CheckResult } from './types';
 import { findWorstArrangement } from './worst-arrangement';
 
+interface InteractionOptions {
+	vRd: (number | null)[];
+	elastic: boolean;
+}
+
 /** The interaction row, or null when no span has a known shear resistance. */
-export function checkBeamInteraction(
-	ctx: CheckContext,
-	o: { vRd: (number | null)[]; elastic: boolean }
-): CheckResult | null {
+export function checkBeamInteraction(ctx: CheckContext, o: InteractionOptions): CheckResult | null {
 	const clause = ctx.basis.words.clauses.interaction;
 	if (clause === null || o.vRd.every((v) => v === null)) return null;
 	const points = listShearPoints(ctx);
+	const read = preparePointEffects(ctx.effects, points);
+	// The unreduced resistance at each point (most points see no reduction at most loads).
+	const mRd = points.map((p) =>
+		o.vRd[p.span] === null ? 0 : reducedResistance(ctx, o, p.span, 0)
+	);
 	const worst = findWorstArrangement(ctx.arrangements, (arr, t) => {
+		const e = read(arr);
 		let best = { utilisation: 0, mEd: 0, vEd: 0, rho: 0, mvRd: 0, x: 0 };
-		for (const p of points) {
+		points.forEach((p, i) => {
 			const vplRd = o.vRd[p.span];
-			const m = ctx.members[p.span];
-			if (vplRd === null) continue;
-			const f = ctx.effects.fixedAt(arr, p.x, p.side);
-			const v = ctx.effects.variableAt(arr, p.x, p.side);
-			const mEd = Math.abs(f.M + t * v.M);
-			const vEd = Math.abs(f.V + t * v.V);
+			if (vplRd === null) return;
+			const mEd = Math.abs(e.fixedM[i] + t * e.variableM[i]);
+			const vEd = Math.abs(e.fixedV[i] + t * e.variableV[i]);
 			const rho = ctx.basis.computeShearReduction({ vEd, vplRd });
-			const mvRd = o.elastic
-				? (1 - rho) * m.Wel * m.fy * ctx.resistance.section
-				: ctx.basis.computeReducedMomentResistance({
-						Wpl: m.Wpl,
-						Aw: m.hw * m.tw,
-						tw: m.tw,
-						fy: m.fy,
-						resistance: ctx.resistance,
-						rho
-					});
+			const mvRd = rho === 0 ? mRd[i] : reducedResistance(ctx, o, p.span, rho);
 			const u = mvRd > 0 ? mEd / mvRd : mEd > 0 ? Number.MAX_VALUE : 0;
 			if (u > best.utilisation) best = { utilisation: u, mEd, vEd, rho, mvRd, x: p.x };
-		}
+		});
 		return { utilisation: best.utilisation, detail: best };
 	});
 	const d = worst.detail;
@@ -56,4 +53,24 @@ export function checkBeamInteraction(
 		x: d.x,
 		arrangement: worst.arrangement.name
 	};
+}
+
+/** The bending resistance of a span reduced for shear by ρ. */
+function reducedResistance(
+	ctx: CheckContext,
+	o: InteractionOptions,
+	span: number,
+	rho: number
+): number {
+	const m = ctx.members[span];
+	return o.elastic
+		? (1 - rho) * m.Wel * m.fy * ctx.resistance.section
+		: ctx.basis.computeReducedMomentResistance({
+				Wpl: m.Wpl,
+				Aw: m.hw * m.tw,
+				tw: m.tw,
+				fy: m.fy,
+				resistance: ctx.resistance,
+				rho
+			});
 }

@@ -72,15 +72,21 @@ export function checkBeamLtb(
 		const quarters = [0.25, 0.5, 0.75].map((f) =>
 			groups.map((g) => g.at(seg.from + f * (seg.to - seg.from), 'right').M)
 		);
-		const resist = (weights: number[], mcr: number, mMax: number) =>
-			ctx.basis.computeLtbResistance({
-				...m,
-				Wy,
-				mcr,
-				length: seg.to - seg.from,
-				moments: readQuarterMoments(quarters, weights, mMax),
-				resistance: ctx.resistance
-			});
+		// One input per segment, updated in place: the resistance is asked for thousands of times
+		// (every bound) and the basis only reads its input.
+		const probe = {
+			...m,
+			Wy,
+			mcr: 0,
+			length: seg.to - seg.from,
+			moments: readQuarterMoments(quarters, [], 0),
+			resistance: ctx.resistance
+		};
+		const resist = (weights: number[], mcr: number, mMax: number) => {
+			probe.mcr = mcr;
+			probe.moments = readQuarterMoments(quarters, weights, mMax);
+			return ctx.basis.computeLtbResistance(probe);
+		};
 		const evaluate = (weights: number[]) => {
 			const { mMax, mu } = prepared.solve(weights);
 			if (solved && mMax > 0 && !Number.isNaN(mu)) solved.add(weights, mu);
@@ -89,7 +95,15 @@ export function checkBeamLtb(
 			const mcr = (1 / mu) * mMax;
 			if (!Number.isFinite(mcr)) return { utilisation: 0, detail: null };
 			const r = resist(weights, mcr, mMax);
-			return { utilisation: mMax / r.mbRd, detail: { ...r, mcr, mEd: mMax } };
+			const detail = {
+				mbRd: r.mbRd,
+				clause: r.clause,
+				note: r.note,
+				values: r.values,
+				mcr,
+				mEd: mMax
+			};
+			return { utilisation: mMax / r.mbRd, detail };
 		};
 		// The row depends only on the weights: arrangements and trial multipliers repeat them.
 		const seen = new Map<number, Map<number, ReturnType<typeof evaluate>>>();
@@ -161,7 +175,11 @@ export function checkBeamLtb(
 
 /** |M| at a segment's quarter points for the group weights, with its largest |M|, N·mm. */
 function readQuarterMoments(quarters: number[][], weights: number[], max: number) {
-	const at = (k: number) => Math.abs(quarters[k].reduce((s, m, i) => s + m * weights[i], 0));
+	const at = (k: number) => {
+		let s = 0;
+		for (let i = 0; i < weights.length; i++) s += quarters[k][i] * weights[i];
+		return Math.abs(s);
+	};
 	return { max, quarter: at(0), centre: at(1), threeQuarter: at(2) };
 }
 

@@ -44,15 +44,26 @@ export function analyseElastic(input: ElasticInput): Checked<ElasticResult> {
 		return { x: nodes[e] + s, V: st.V, M: st.M, w: st.w, slope: st.slope };
 	};
 	const reactions = collectReactions(beam, nodes, solution, elements);
+	// Drawn and summarised on first read: the checks analyse many load groups and read most of
+	// them only through `at` and the reactions.
+	let diagram: ElasticResult['diagram'] | undefined;
+	let maxMoment: ElasticResult['maxMoment'] | undefined;
+	let maxDeflection: ElasticResult['maxDeflection'] | undefined;
 	return {
 		ok: true,
 		warnings: [],
 		value: {
 			reactions,
 			at,
-			diagram: sampleDiagram(nodes, elements),
-			maxMoment: findMaxMoments(nodes, elements),
-			maxDeflection: findMaxDeflections(nodes, elements)
+			get diagram() {
+				return (diagram ??= sampleDiagram(nodes, elements));
+			},
+			get maxMoment() {
+				return (maxMoment ??= findMaxMoments(nodes, elements));
+			},
+			get maxDeflection() {
+				return (maxDeflection ??= findMaxDeflections(nodes, elements));
+			}
 		}
 	};
 }

@@ -9,7 +9,13 @@ import { E_STEEL, G_STEEL } from '../../units';
 import { decideRoute } from './scope';
 import { checkWebSlenderness, computePlasticShearResistance, computeShearArea } from './shear';
 import { computeReducedMomentResistance, computeShearReduction } from './interaction';
-import { computeLtbResistance, selectBucklingCurve, selectLtbMethod } from './ltb-curves';
+import {
+	computeLtbResistance,
+	selectBucklingCurve,
+	selectLtbMethod,
+	type BucklingCurve,
+	type LtbMethod
+} from './ltb-curves';
 import { computeWebForceResistance } from './web';
 import { computeStableLength } from './stable-length';
 import { EUROCODE_WORDS, TYPE_WORDS } from './words';
@@ -48,16 +54,26 @@ export const en1993: DesignBasis<FactorSettings> = {
 		computePlasticShearResistance({ Av: o.Av, fy: o.fy, gammaM0: 1 }) * o.resistance.section,
 	checkWebSlenderness,
 	computeShearReduction,
+	// These two run for every load arrangement and trial load: their inputs are written out
+	// field by field, as a spread with added keys costs microseconds each in V8 (measured on Node 20).
 	computeReducedMomentResistance: (o) =>
-		computeReducedMomentResistance({ ...o, gammaM0: 1 }) * o.resistance.section,
+		computeReducedMomentResistance({
+			Wpl: o.Wpl,
+			Aw: o.Aw,
+			tw: o.tw,
+			fy: o.fy,
+			rho: o.rho,
+			gammaM0: 1
+		}) * o.resistance.section,
 	computeLtbResistance(o) {
 		const method = selectLtbMethod(o.shape);
 		const curve = selectBucklingCurve({ shape: o.shape, h: o.h, b: o.b, method });
-		const at = { Wy: o.Wy, fy: o.fy, mcr: o.mcr, gammaM1: 1 };
-		const r = computeLtbResistance({ ...at, curve, method });
+		const at = (c: BucklingCurve, m: LtbMethod) =>
+			computeLtbResistance({ Wy: o.Wy, fy: o.fy, mcr: o.mcr, gammaM1: 1, curve: c, method: m });
+		const r = at(curve, method);
 		const clause = method === 'rolled' ? 'EN 1993-1-1 6.3.2.3' : 'EN 1993-1-1 6.3.2.2';
 		const generalCurve = selectBucklingCurve({ shape: o.shape, h: o.h, b: o.b, method: 'general' });
-		const general = computeLtbResistance({ ...at, curve: generalCurve, method: 'general' });
+		const general = at(generalCurve, 'general');
 		return {
 			mbRd: r.mbRd * o.resistance.member,
 			clause,
