@@ -32,6 +32,8 @@ export interface CheckContext {
 	plastic: Map<LoadArrangement, PlasticArrangement>;
 	/** The load groups analysed on the released, statically determinate beam. */
 	released: LoadEffects;
+	/** Buckling energy matrices kept between runs on the same beam (the governing curve). */
+	bucklingMemo?: Map<string, Float64Array>;
 }
 
 /**

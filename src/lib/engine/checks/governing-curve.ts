@@ -45,7 +45,11 @@ export function computeGoverningCurve(
 	run: (input: DesignCheckInput, options: DesignRunOptions) => DesignCheckOutcome
 ): GoverningCurve {
 	// Every run is on the same beam with the same existing loads: their analyses are shared.
-	const shared: DesignRunOptions = { memo: new Map(), skipInformationCollapse: true };
+	const shared: DesignRunOptions = {
+		memo: new Map(),
+		bucklingMemo: new Map(),
+		skipInformationCollapse: true
+	};
 	// A proposed point load is moved in place (same size, same order), so that at its own position
 	// the run is the answer's own run; without one, a unit trial load is added.
 	const proposed = input.loads.find(

@@ -66,7 +66,8 @@ export function checkBeamLtb(
 			EIz: ctx.basis.E * m.Iz,
 			GIt: ctx.basis.G * m.It,
 			EIw: ctx.basis.E * m.Iw,
-			zg
+			zg,
+			memo: ctx.bucklingMemo
 		});
 		// Each group's moment at the quarter points, for bases that read them (AISC Cb, F1-1).
 		const quarters = [0.25, 0.5, 0.75].map((f) =>

@@ -64,6 +64,11 @@ export interface CriticalMomentParts extends Omit<CriticalMomentInput, 'segment'
 	parts: LtbSegment[];
 	/** Largest eigenvalue of a symmetric matrix (tests pass the full Jacobi solve to compare). */
 	largestEigenvalue?: (a: Float64Array, n: number) => number;
+	/**
+	 * Matrices already assembled, by stiffness, quadrature grid and loading (runs on the same beam
+	 * that differ only in the proposed load share most of them: the governing curve).
+	 */
+	memo?: Map<string, Float64Array>;
 }
 
 /** Mcr of any weighted sum of the prepared parts. */
@@ -78,7 +83,7 @@ export interface PreparedCriticalMoment {
 	peak(weights: number[]): number;
 	/** Largest eigenvalue of the scaled energy matrix of another loading of the same segment. */
 	largestOf(segment: LtbSegment): number;
-	/** Scaled energy matrix of another loading of the segment (row-major, 2N × 2N). */
+	/** Scaled energy matrix of another loading of the segment (row-major, 2N × 2N; not to be changed). */
 	matrixOf(segment: LtbSegment): Float64Array;
 	/** Largest eigenvalue of a matrix of that size. */
 	largestOfMatrix(g: Float64Array): number;
@@ -146,9 +151,18 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 		}
 		return g;
 	};
+	// The same inputs give the same matrix to the last bit, so a kept one is as good as new.
+	const grid = input.memo ? JSON.stringify([EIz, GIt, EIw, zg, N, edges]) : '';
+	const matrixOf = (seg: LtbSegment) => {
+		if (!input.memo) return assemble(seg);
+		const key = `${grid}|${JSON.stringify(seg)}`;
+		let g = input.memo.get(key);
+		if (!g) input.memo.set(key, (g = assemble(seg)));
+		return g;
+	};
 	const sampleAt = [...points.map((p) => p.x), ...edges];
 	const assembled = parts.map((seg) => ({
-		g: assemble(seg),
+		g: matrixOf(seg),
 		samples: Float64Array.from(sampleAt, (x) => computeSegmentMoment(seg, x))
 	}));
 	const count = sampleAt.length;
@@ -187,11 +201,11 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 			const factor = 1 / mu;
 			return { mcr: factor * mMax, factor, mMax };
 		},
-		largestOf: (segment) => largest(assemble(segment), n2),
-		matrixOf: assemble,
+		largestOf: (segment) => largest(matrixOf(segment), n2),
+		matrixOf,
 		largestOfMatrix: (g) => largest(g, n2),
 		partMatrices: assembled.map(({ g }) => g),
-		partNorms: assembled.map(({ g }) => Math.hypot(...g))
+		partNorms: assembled.map(({ g }) => frobeniusNorm(g))
 	};
 }
 
@@ -242,4 +256,11 @@ function loadAt(seg: LtbSegment, x: number): number {
 		if (l.kind === 'line' && x >= l.from && x <= l.to) q += lineLoadAt(l, x);
 	}
 	return q;
+}
+
+/** √Σ g², without spreading hundreds of entries into Math.hypot (the scaled entries are small). */
+function frobeniusNorm(g: Float64Array): number {
+	let sum = 0;
+	for (let e = 0; e < g.length; e++) sum += g[e] * g[e];
+	return Math.sqrt(sum);
 }

@@ -45,6 +45,8 @@ type Basis = DesignBasis<FactorSettings>;
 export interface DesignRunOptions {
 	/** Elastic analyses shared between runs on the same beam (only the proposed load changes). */
 	memo?: Map<string, ElasticResult>;
+	/** Buckling energy matrices shared the same way (see `prepareCriticalMoment`). */
+	bucklingMemo?: Map<string, Float64Array>;
 	/** Skip the information-only collapse of the elastic route (nothing reads it). */
 	skipInformationCollapse?: boolean;
 }
@@ -117,7 +119,8 @@ export function runDesignChecks(
 		eta: input.eta ?? 1,
 		route: early.route,
 		plastic: new Map(),
-		released
+		released,
+		bucklingMemo: options.bucklingMemo
 	};
 	const run = runChecks(ctx, input, {
 		scopeBase,
