@@ -115,24 +115,32 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 	];
 	const n2 = 2 * N;
 	const sines = points.map((p) => k.map((kn) => Math.sin(kn * p.x)));
+	// kᵢ²·sin(kᵢx) at each quadrature point (u'' of each a-term, up to sign), shared by every loading.
+	const curvatures = sines.map((s) => Float64Array.from(s, (v, i) => k[i] ** 2 * v));
+	// Inverse square roots of the diagonal, for the symmetric scaling D^-½ G D^-½.
+	const scale = Float64Array.from(d, (v) => 1 / Math.sqrt(v));
 	const assemble = (seg: LtbSegment) => {
-		const g = new Float64Array(n2 * n2);
-		const addLoadHeight = (s: number[], weight: number) => {
-			for (let i = 0; i < N; i++)
-				for (let j = 0; j < N; j++) g[(N + i) * n2 + N + j] += weight * s[i] * s[j];
+		// The two blocks that carry terms, N × N each, filled as one triangle or row by row and
+		// written into the full matrix once at the end (half the writes, in memory order).
+		const c = new Float64Array(N * N);
+		const h = new Float64Array(N * N);
+		const addLoadHeight = (s: ArrayLike<number>, weight: number) => {
+			for (let i = 0; i < N; i++) {
+				const a = weight * s[i];
+				for (let j = i; j < N; j++) h[i * N + j] += a * s[j];
+			}
 		};
 		points.forEach((p, q) => {
 			const m = computeSegmentMoment(seg, p.x);
 			const s = sines[q];
 			if (m !== 0) {
+				// vᵀGv = −2∫M u''φ: u'' brings −kᵢ² on the a-terms.
+				const ks = curvatures[q];
+				const wm = p.w * m;
 				for (let i = 0; i < N; i++) {
-					// vᵀGv = −2∫M u''φ: u'' brings −kᵢ² on the a-terms.
-					const a = p.w * m * k[i] ** 2 * s[i];
-					for (let j = 0; j < N; j++) {
-						const v = a * s[j];
-						g[i * n2 + N + j] += v;
-						g[(N + j) * n2 + i] += v;
-					}
+					const a = wm * ks[i];
+					const row = i * N;
+					for (let j = 0; j < N; j++) c[row + j] += a * s[j];
 				}
 			}
 			const q0 = loadAt(seg, p.x);
@@ -146,8 +154,18 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 			);
 		}
 		// Symmetric form D^-½ G D^-½; its largest eigenvalue μ is 1/λcr.
-		for (let i = 0; i < n2; i++) {
-			for (let j = 0; j < n2; j++) g[i * n2 + j] /= Math.sqrt(d[i] * d[j]);
+		const g = new Float64Array(n2 * n2);
+		for (let i = 0; i < N; i++) {
+			for (let j = 0; j < N; j++) {
+				const v = c[i * N + j] * scale[i] * scale[N + j];
+				g[i * n2 + N + j] = v;
+				g[(N + j) * n2 + i] = v;
+				if (j >= i) {
+					const w = h[i * N + j] * scale[N + i] * scale[N + j];
+					g[(N + i) * n2 + N + j] = w;
+					g[(N + j) * n2 + N + i] = w;
+				}
+			}
 		}
 		return g;
 	};
