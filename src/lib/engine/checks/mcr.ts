@@ -171,11 +171,25 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 	};
 	// The same inputs give the same matrix to the last bit, so a kept one is as good as new.
 	const grid = input.memo ? JSON.stringify([EIz, GIt, EIw, zg, N, edges]) : '';
-	const matrixOf = (seg: LtbSegment) => {
+	const kept = (seg: LtbSegment) => {
 		if (!input.memo) return assemble(seg);
 		const key = `${grid}|${JSON.stringify(seg)}`;
 		let g = input.memo.get(key);
 		if (!g) input.memo.set(key, (g = assemble(seg)));
+		return g;
+	};
+	let units: [Float64Array, Float64Array] | null = null;
+	const matrixOf = (seg: LtbSegment) => {
+		if (seg.loads.length > 0) return kept(seg);
+		// No load inside: the moment is straight between the ends, so the matrix is that of a unit
+		// moment at each end, weighted (most load groups act on a segment only through its ends).
+		units ??= [
+			kept({ length: L, momentStart: 1, momentEnd: 0, loads: [] }),
+			kept({ length: L, momentStart: 0, momentEnd: 1, loads: [] })
+		];
+		const [start, end] = units;
+		const g = new Float64Array(start.length);
+		for (let e = 0; e < g.length; e++) g[e] = seg.momentStart * start[e] + seg.momentEnd * end[e];
 		return g;
 	};
 	const sampleAt = [...points.map((p) => p.x), ...edges];
