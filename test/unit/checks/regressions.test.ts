@@ -4,6 +4,10 @@
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { parseCase } from '../../../src/lib/engine/case/parse-case';
+import { buildDesignCheckInput } from '../../../src/lib/engine/checks/from-case';
+import { arrangementSelection } from '../../../src/lib/engine/checks/linear-arrangements';
+import { runDesignChecks } from '../../../src/lib/engine/checks/run-checks';
 import { checkCase } from '../../../src/lib/engine/index';
 
 const load = (name: string): unknown =>
@@ -44,5 +48,50 @@ describe('a load a hair from a support', () => {
 		const bending = out.report.checks.find((c) => c.id === 'bending');
 		expect(bending?.multiplier).not.toBe(0);
 		expect(out.report.answer.multiplier).not.toBe(0);
+	});
+});
+
+describe('buckling of a segment the existing loads already overload', () => {
+	it('allows no temporary load, even one that relieves the segment (shipped: multiplier 1.82)', () => {
+		// Invented: a 1.5 m overhang beside a 6.3 m span, UC 203x203x46, flange held at the
+		// supports only. The existing load alone takes one arrangement's buckling utilisation past
+		// 1; the proposed load at the overhang tip lifts the span and lowers it again. A multiplier
+		// is "the largest that keeps every arrangement within capacity" (EN 1990 6.4.3.2: every
+		// arrangement must be verified), so it is 0 here, bounded search or not.
+		const json = {
+			format: 'hingepoint.case',
+			version: 1,
+			beam: {
+				spans: [1.5, 6.3],
+				supports: ['free', 'pin', 'pin'],
+				section: { designation: 'UC 203x203x46' },
+				grade: 'S275',
+				restraint: { lateral: 'ends-only', loadHeight: 'top-flange' }
+			},
+			loads: [
+				{ kind: 'uniform', from: 0, to: 7.8, value: 6, action: 'permanent' },
+				{ kind: 'uniform', from: 1.5, to: 7.8, value: 8, action: 'imposed' },
+				{ kind: 'point', x: 0, value: 1, action: 'imposed' },
+				{ kind: 'point', x: 0, value: 26, action: 'temporary' }
+			],
+			factors: { set: 'en1990-6.10ab' }
+		};
+		const parsed = parseCase(json);
+		expect(parsed.ok).toBe(true);
+		if (!parsed.ok) return;
+		for (const exhaustive of [false, true]) {
+			arrangementSelection.exhaustive = exhaustive;
+			try {
+				const ltb = runDesignChecks(buildDesignCheckInput(parsed.value)).checks.filter(
+					(c) => c.id === 'ltb'
+				);
+				expect(ltb.some((row) => (row.utilisationExisting ?? 0) >= 1)).toBe(true);
+				for (const row of ltb) {
+					if ((row.utilisationExisting ?? 0) >= 1) expect(row.multiplierAtCapacity).toBe(0);
+				}
+			} finally {
+				arrangementSelection.exhaustive = false;
+			}
+		}
 	});
 });

@@ -8,7 +8,12 @@
  * shear at load level λ. G does not increase with λ, so λ/G(λ) rises through 1 exactly once and
  * the fixed point is found by the bracketed root search.
  */
-import { shearAt, solveCollapse, type CollapseResult } from '../collapse/index';
+import {
+	shearAt,
+	solveCollapse,
+	solveCollapseLoadFactor,
+	type CollapseResult
+} from '../collapse/index';
 import type { BeamLine, CapacitySegment, Load } from '../model/types';
 import { reduceCapacity } from './capacity';
 import type { ResistanceMultipliers } from './basis-types';
@@ -86,24 +91,34 @@ export function solvePlasticArrangement(o: PlasticArrangementInput): PlasticArra
 		if (alone.status === 'fails-under-fixed') return pack(alone, o.capacity, []);
 	}
 	if (plain.status !== 'mechanism') return pack(plain, o.capacity, []);
-	const at = (lambda: number) => {
+	const reduceAt = (lambda: number) => {
 		const reductions = findReductions(o, plain, lambda);
 		const capacity = reductions.reduce((cap, r) => {
 			const half = o.members[spanOf(o.nodes, r.x)].h / 2;
 			return reduceCapacity(cap, { from: r.x - half, to: r.x + half, value: r.myVRd });
 		}, o.capacity);
+		return { reductions, capacity };
+	};
+	const at = (lambda: number) => {
+		const { reductions, capacity } = reduceAt(lambda);
 		return { reductions, capacity, result: reductions.length ? solve(o, capacity) : plain };
 	};
-	const first = at(plain.loadFactor);
-	if (first.reductions.length === 0) return pack(plain, o.capacity, []);
+	// The search needs only λ of each trial (G below); the answer is solved and certified in full.
+	const factorAt = (lambda: number) => {
+		const { reductions, capacity } = reduceAt(lambda);
+		if (reductions.length === 0) return plain.loadFactor;
+		const { beam, fixedLoads, variableLoads } = o;
+		return solveCollapseLoadFactor({ beam, capacity, fixedLoads, variableLoads });
+	};
+	if (reduceAt(plain.loadFactor).reductions.length === 0) return pack(plain, o.capacity, []);
 	// G does not increase, so λ* = G(λ*) lies in [G(λ0), λ0]: search from G(λ0) upward.
-	const g0 = factorOf(first.result) ?? plain.loadFactor;
+	const g0 = factorAt(plain.loadFactor) ?? plain.loadFactor;
 	const span = plain.loadFactor - g0;
 	const step =
 		span > 0
 			? findMultiplierAtCapacity({
 					utilisation: (d) => {
-						const g = factorOf(at(g0 + d).result) ?? Number.MAX_VALUE;
+						const g = factorAt(g0 + d) ?? Number.MAX_VALUE;
 						return g > 0 ? (g0 + d) / g : Number.MAX_VALUE;
 					},
 					upperLimit: span,

@@ -143,8 +143,11 @@ export function findWorstArrangementBounded<T>(
 	const rest = index.filter((i) => !estimates.has(i));
 	known.sort((a, b) => estimates.get(a)! - estimates.get(b)!);
 	rest.sort((a, b) => byBound(worst.keys, a, b));
-	let multiplier: number | null = null;
-	for (const i of [...known, ...rest]) {
+	// Where the fixed loads alone fail an arrangement, its search returns 0 (the least there is),
+	// whatever the temporary load does after: no other arrangement needs a search.
+	const failsUnderFixed = existing.top >= 1;
+	let multiplier: number | null = failsUnderFixed ? 0 : null;
+	for (const i of failsUnderFixed ? [] : [...known, ...rest]) {
 		const arrangement = arrangements[i];
 		if (multiplier !== null) {
 			if (bound(arrangement, multiplier) < 1) continue;

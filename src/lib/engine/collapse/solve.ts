@@ -82,6 +82,26 @@ export function solveLoadFactorOnly(p: CollapseProblem, scale: ProblemScale): nu
 	return Math.max(0, sol.z[model.lambdaIndex]) * scale.lambda;
 }
 
+/**
+ * The collapse load factor alone, without mechanism or certificate, for searches that try many
+ * capacities and certify only the last one: 0 when the fixed loads alone fail, null when the
+ * variable loads can never cause collapse. Where the programs break down it is the full solve's
+ * not-certified factor (0).
+ */
+export function solveCollapseLoadFactor(problem: CollapseProblem): number | null {
+	assertValidProblem(problem);
+	if (measureLoadSize(problem.variableLoads) === 0) return null;
+	const { problem: p, scale } = normaliseProblem(problem);
+	try {
+		const fixedField = findFixedLoadField(p);
+		if (fixedField.slack < -1e-12) return 0;
+		return solveLoadFactorOnly(p, scale);
+	} catch (e) {
+		if (isNumericalBreakdown(e)) return 0;
+		throw e;
+	}
+}
+
 /** Solves a normalised problem whose fixed-load field is already known and admissible. */
 export function solveNormalised(
 	p: CollapseProblem,
