@@ -72,17 +72,6 @@ function solveLambdaProgram(p: CollapseProblem, fieldTolerance?: number) {
 }
 
 /**
- * λ alone (no mechanism, diagram or certificate) of a normalised problem whose fixed loads are
- * admissible: the converged static program's optimum, exact to rounding; null when unbounded.
- */
-export function solveLoadFactorOnly(p: CollapseProblem, scale: ProblemScale): number | null {
-	// Only λ is wanted here, and λ settles long before the last rounding-level excess is gone.
-	const { model, sol } = solveLambdaProgram(p, 1e-9);
-	if (sol.status !== 'optimal') return null;
-	return Math.max(0, sol.z[model.lambdaIndex]) * scale.lambda;
-}
-
-/**
  * The collapse load factor alone, without mechanism or certificate, for searches that try many
  * capacities and certify only the last one: 0 when the fixed loads alone fail, null when the
  * variable loads can never cause collapse. Where the programs break down it is the full solve's
@@ -93,9 +82,14 @@ export function solveCollapseLoadFactor(problem: CollapseProblem): number | null
 	if (measureLoadSize(problem.variableLoads) === 0) return null;
 	const { problem: p, scale } = normaliseProblem(problem);
 	try {
-		const fixedField = findFixedLoadField(p);
-		if (fixedField.slack < -1e-12) return 0;
-		return solveLoadFactorOnly(p, scale);
+		// The margin program first: a temporary load may relieve what the fixed loads alone
+		// overload, and then the λ program alone would find a λ > 0 for a beam that fails first.
+		if (findFixedLoadField(p).slack < -1e-12) return 0;
+		// Only λ is wanted, and λ settles long before the last rounding-level excess is gone.
+		const { model, sol } = solveLambdaProgram(p, 1e-9);
+		if (sol.status === 'unbounded') return null;
+		if (sol.status !== 'optimal') return 0;
+		return Math.max(0, sol.z[model.lambdaIndex]) * scale.lambda;
 	} catch (e) {
 		if (isNumericalBreakdown(e)) return 0;
 		throw e;
