@@ -114,9 +114,24 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 		...k.map((kn) => ((GIt * kn ** 2 + EIw * kn ** 4) * L) / 2)
 	];
 	const n2 = 2 * N;
-	const sines = points.map((p) => k.map((kn) => Math.sin(kn * p.x)));
-	// kᵢ²·sin(kᵢx) at each quadrature point (u'' of each a-term, up to sign), shared by every loading.
-	const curvatures = sines.map((s) => Float64Array.from(s, (v, i) => k[i] ** 2 * v));
+	// sin(kᵢx) and kᵢ²·sin(kᵢx) (u'' of each a-term, up to sign) at each quadrature point, shared
+	// by every loading; made on the first assembly (kept matrices need none).
+	let shapes: { sines: Float64Array[]; curvatures: Float64Array[] } | null = null;
+	const tabulateShapes = () => {
+		const sines: Float64Array[] = [];
+		const curvatures: Float64Array[] = [];
+		for (const p of points) {
+			const s = new Float64Array(N);
+			const ks = new Float64Array(N);
+			for (let i = 0; i < N; i++) {
+				s[i] = Math.sin(k[i] * p.x);
+				ks[i] = k[i] ** 2 * s[i];
+			}
+			sines.push(s);
+			curvatures.push(ks);
+		}
+		return { sines, curvatures };
+	};
 	// Inverse square roots of the diagonal, for the symmetric scaling D^-½ G D^-½.
 	const scale = Float64Array.from(d, (v) => 1 / Math.sqrt(v));
 	const assemble = (seg: LtbSegment) => {
@@ -130,6 +145,7 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 				for (let j = i; j < N; j++) h[i * N + j] += a * s[j];
 			}
 		};
+		const { sines, curvatures } = (shapes ??= tabulateShapes());
 		points.forEach((p, q) => {
 			const m = computeSegmentMoment(seg, p.x);
 			const s = sines[q];
