@@ -78,7 +78,12 @@ export function prepareBucklingBound(
 	const muOf = (k: number) => {
 		const j = k % (FAN / 2);
 		if (fanMu[j] === undefined) {
-			const mu = prepared.largestOfMatrix(combine(null, Math.cos(j * step), Math.sin(j * step)));
+			// The same for every loading of the segment: kept between runs on the same beam.
+			const [mu] = prepared.remember(`fan ${FAN} ${j}`, () =>
+				Float64Array.of(
+					prepared.largestOfMatrix(combine(null, Math.cos(j * step), Math.sin(j * step)))
+				)
+			);
 			fanMu[j] = Number.isNaN(mu) ? Infinity : mu;
 		}
 		return fanMu[j];
@@ -104,10 +109,13 @@ export function prepareBucklingBound(
 		if (inside[i] !== undefined) return inside[i];
 		const part = parts[i];
 		if (part.loads.length === 0) return (inside[i] = null);
-		const free = combine(prepared.partMatrices[i], -part.momentStart, -part.momentEnd);
-		const up = prepared.largestOfMatrix(free);
-		for (let e = 0; e < free.length; e++) free[e] = -free[e];
-		const down = prepared.largestOfMatrix(free);
+		// Depends on the group's loads inside only: kept between runs on the same beam.
+		const [up, down] = prepared.remember(`inside ${JSON.stringify(part)}`, () => {
+			const free = combine(prepared.partMatrices[i], -part.momentStart, -part.momentEnd);
+			const u = prepared.largestOfMatrix(free);
+			for (let e = 0; e < free.length; e++) free[e] = -free[e];
+			return Float64Array.of(u, prepared.largestOfMatrix(free));
+		});
 		// A solve that failed (round-off sized entries) bounds nothing.
 		return (inside[i] = {
 			up: Number.isNaN(up) ? Infinity : up,

@@ -81,6 +81,11 @@ export interface PreparedCriticalMoment {
 	solve(weights: number[]): { mMax: number; mu: number };
 	/** Largest |M| of a weighted sum (as `solve` finds it, without the eigenvalue). */
 	peak(weights: number[]): number;
+	/**
+	 * A value derived from this segment's matrices alone, made once per memo (or made here when
+	 * there is none): `name` must say everything it depends on besides stiffness and grid.
+	 */
+	remember(name: string, make: () => Float64Array): Float64Array;
 	/** Largest eigenvalue of the scaled energy matrix of another loading of the same segment. */
 	largestOf(segment: LtbSegment): number;
 	/** Scaled energy matrix of another loading of the segment (row-major, 2N × 2N; not to be changed). */
@@ -209,10 +214,24 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 		return g;
 	};
 	const sampleAt = [...points.map((p) => p.x), ...edges];
-	const assembled = parts.map((seg) => ({
-		g: matrixOf(seg),
-		samples: Float64Array.from(sampleAt, (x) => computeSegmentMoment(seg, x))
-	}));
+	const sample = (seg: LtbSegment) =>
+		Float64Array.from(sampleAt, (x) => computeSegmentMoment(seg, x));
+	const keptSamples = (seg: LtbSegment) => {
+		if (!input.memo) return sample(seg);
+		// The points depend only on the grid: kept beside the matrix.
+		const key = `${grid}|samples|${JSON.stringify(seg)}`;
+		let v = input.memo.get(key);
+		if (!v) input.memo.set(key, (v = sample(seg)));
+		return v;
+	};
+	const assembled = parts.map((seg) => ({ g: matrixOf(seg), samples: keptSamples(seg) }));
+	const remember = (name: string, make: () => Float64Array) => {
+		if (!input.memo) return make();
+		const key = `${grid}|${name}`;
+		let v = input.memo.get(key);
+		if (!v) input.memo.set(key, (v = make()));
+		return v;
+	};
 	const count = sampleAt.length;
 	// One buffer for the weighted sum: the solver copies what it changes.
 	const sum = new Float64Array(n2 * n2);
@@ -242,6 +261,7 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 	};
 	return {
 		peak,
+		remember,
 		solve,
 		at(weights) {
 			const { mMax, mu } = solve(weights);
