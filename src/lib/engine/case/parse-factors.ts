@@ -3,6 +3,7 @@
  * Eurocode basis, ASCE 7-22 on the AISC bases. Which combinations they form is the basis's job
  * (checks/); here each factor is validated as data and the set named is one the basis knows.
  */
+import { ASCE7_FACTORS as BY_METHOD } from '../checks/aisc360/combinations';
 import type { InputIssue } from '../model/issue';
 import { RANGES, type Range } from './limits';
 import { addError, addWarning, isRecord, readChoice, readNumber } from './read-value';
@@ -26,9 +27,14 @@ export const DEFAULT_FACTORS: Readonly<ResolvedFactors> = {
  * the case says otherwise (engineering reference C.7).
  */
 export const ASCE7_FACTORS = {
-	'asce7-lrfd': { permanent: 1.2, permanentAlone: 1.4, imposed: 1.6 },
-	'asce7-asd': { permanent: 1.0, permanentAlone: 1.0, imposed: 1.0 }
+	'asce7-lrfd': fromMethod(BY_METHOD.lrfd),
+	'asce7-asd': fromMethod(BY_METHOD.asd)
 } as const;
+
+/** The case file's names for the factors of one method (the values live with the combinations). */
+function fromMethod(f: (typeof BY_METHOD)[keyof typeof BY_METHOD]) {
+	return { permanent: f.dead, permanentAlone: f.alone, imposed: f.live };
+}
 
 /**
  * Factor sets each basis knows; the first is its default. LRFD load factors belong with φ and

@@ -3,7 +3,10 @@
  * a basis starts from, and which grades its picker offers. Separate from units: a US engineer
  * may work in SI and a European one in US units.
  */
-import { ASCE7_FACTORS, CASE_BASES, type CaseBasis } from '$lib/engine/case';
+// From the files themselves, not the case index: the index brings the parser and with it the
+// section tables into the first screen's bundle (they load later, in their own chunk).
+import { ASCE7_FACTORS } from '$lib/engine/case/parse-factors';
+import { CASE_BASES, type CaseBasis } from '$lib/engine/case/types';
 import type { GradeProduct } from '$lib/engine/material';
 import type { SectionShape } from '$lib/engine/section/types';
 import type { FactorSet } from '$lib/storage';

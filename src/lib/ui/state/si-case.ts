@@ -3,7 +3,8 @@
  * file made for the command line and opened through a link) is turned into its SI twin on the
  * way in, so a value in ft is never shown or saved as if it were m.
  */
-import { convertUsFile } from '$lib/engine/case';
+// From its file, not the case index (which brings the section tables into this bundle).
+import { convertUsFile } from '$lib/engine/case/us-units';
 import type { CaseFile } from './case-file';
 
 /**
