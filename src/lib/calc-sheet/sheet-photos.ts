@@ -39,7 +39,7 @@ export async function readSheetPhotos(
 }
 
 /** How many pages the photos take after the sheet's own page. */
-export function countPhotoPages(photos: number): number {
+function countPhotoPages(photos: number): number {
 	return Math.ceil(photos / PHOTOS_PER_PAGE);
 }
 

@@ -1,4 +1,4 @@
-import { CASE_BASES, type CaseBasis } from '$lib/engine/case/types';
+import { isCaseBasis, type CaseBasis } from '$lib/engine/case/types';
 import type { UnitSystem } from '$lib/ui/format/types';
 import { isPlainObject } from './case-file';
 
@@ -105,9 +105,7 @@ export function sanitizeSettings(raw: unknown): Settings {
 	const ids = new Set([...BUILT_IN_FACTOR_SETS, ...factorSets].map((f) => f.id));
 	return {
 		units: s.units === 'SI' || s.units === 'US' ? s.units : d.units,
-		defaultBasis: (CASE_BASES as readonly unknown[]).includes(s.defaultBasis)
-			? (s.defaultBasis as CaseBasis)
-			: d.defaultBasis,
+		defaultBasis: isCaseBasis(s.defaultBasis) ? s.defaultBasis : d.defaultBasis,
 		factorSets: factorSets.map((f) => ({ ...f })),
 		activeFactorSetId:
 			typeof s.activeFactorSetId === 'string' && ids.has(s.activeFactorSetId)

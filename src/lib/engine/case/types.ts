@@ -18,6 +18,11 @@ export const CASE_VERSION = 1;
 export const CASE_BASES = ['eurocode', 'aisc-lrfd', 'aisc-asd'] as const;
 export type CaseBasis = (typeof CASE_BASES)[number];
 
+/** True for a basis id a case file may hold (a stored setting, a linked or saved case). */
+export function isCaseBasis(value: unknown): value is CaseBasis {
+	return typeof value === 'string' && (CASE_BASES as readonly string[]).includes(value);
+}
+
 /**
  * Units a case file is written in (top-level `units`): `si` (default) m, kN, kN/m, kNm, mm, MPa,
  * kg/m; `us` ft, kip, kip/ft, kip·ft, in, ksi, lb/ft. Converted to internal units on reading.

@@ -6,7 +6,7 @@
 // From the files themselves, not the case index: the index brings the parser and with it the
 // section tables into the first screen's bundle (they load later, in their own chunk).
 import { ASCE7_FACTORS } from '$lib/engine/case/parse-factors';
-import { CASE_BASES, type CaseBasis } from '$lib/engine/case/types';
+import { isCaseBasis, type CaseBasis } from '$lib/engine/case/types';
 import type { GradeProduct } from '$lib/engine/material';
 import type { SectionShape } from '$lib/engine/section/types';
 import type { FactorSet } from '$lib/storage';
@@ -19,11 +19,6 @@ export const BASIS_CHOICES: readonly { id: CaseBasis; name: string }[] = [
 	{ id: 'aisc-lrfd', name: 'AISC 360-22 LRFD (ASCE 7-22)' },
 	{ id: 'aisc-asd', name: 'AISC 360-22 ASD (ASCE 7-22)' }
 ];
-
-/** True for a basis id a case file may hold (a stored setting or a linked case). */
-export function isCaseBasis(value: unknown): value is CaseBasis {
-	return typeof value === 'string' && (CASE_BASES as readonly string[]).includes(value);
-}
 
 /**
  * The basis a case is checked on: the one it names, Eurocode when it names none.
@@ -57,12 +52,12 @@ export function switchBasis(c: CaseFile, basis: CaseBasis, set: FactorSet): Case
 }
 
 /** Which region's grades a basis's picker offers. */
-export function gradeRegionOf(basis: CaseBasis): 'eurocode' | 'us' {
+function gradeRegionOf(basis: CaseBasis): 'eurocode' | 'us' {
 	return basis === 'eurocode' ? 'eurocode' : 'us';
 }
 
 /** The product form of a section shape, for the grade picker (undefined when not known). */
-export function productOfShape(shape: SectionShape | undefined): GradeProduct | undefined {
+function productOfShape(shape: SectionShape | undefined): GradeProduct | undefined {
 	if (shape === 'CHS') return 'round-hollow';
 	if (shape === 'RHS') return 'rectangular-hollow';
 	return shape === undefined || shape === 'known-mp' ? undefined : 'open';
