@@ -57,7 +57,7 @@ describe('buckling of a segment the existing loads already overload', () => {
 		// supports only. The existing load alone takes one arrangement's buckling utilisation past
 		// 1; the proposed load at the overhang tip lifts the span and lowers it again. A multiplier
 		// is "the largest that keeps every arrangement within capacity" (EN 1990 6.4.3.2: every
-		// arrangement must be verified), so it is 0 here, bounded search or not.
+		// arrangement must be verified; clause from memory), so it is 0 here, bounded search or not.
 		const json = {
 			format: 'hingepoint.case',
 			version: 1,
