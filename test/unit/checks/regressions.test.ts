@@ -9,6 +9,11 @@ import { buildDesignCheckInput } from '../../../src/lib/engine/checks/from-case'
 import { arrangementSelection } from '../../../src/lib/engine/checks/linear-arrangements';
 import { runDesignChecks } from '../../../src/lib/engine/checks/run-checks';
 import { checkCase } from '../../../src/lib/engine/index';
+import { DEFAULT_BASIS } from '../../../src/lib/engine/checks/bases';
+import { applyArrangement } from '../../../src/lib/engine/checks/factor-loads';
+import { listLoadArrangements } from '../../../src/lib/engine/checks/load-arrangements';
+import { describeMember } from '../../../src/lib/engine/checks/member';
+import { computeElasticLimitFactor } from '../../../src/lib/engine/elastic/index';
 
 const load = (name: string): unknown =>
 	JSON.parse(readFileSync(`test/fixtures/cases/${name}.json`, 'utf8'));
@@ -93,5 +98,65 @@ describe('buckling of a segment the existing loads already overload', () => {
 				arrangementSelection.exhaustive = false;
 			}
 		}
+	});
+});
+
+describe('elastic bending row over every arrangement', () => {
+	it('reports the largest utilisation of any arrangement (shipped: 0.242 where one reached 0.254)', () => {
+		// Invented: two 6 m spans, flange held at the supports only (elastic route). The row kept
+		// the utilisation of the arrangement with the least multiplier and dropped a larger one
+		// met earlier in the list. Every arrangement must be verified (EN 1990 6.4.3.2, clause
+		// from memory), so the row's utilisation is the largest, here compared with each
+		// arrangement analysed on its own.
+		const json = {
+			format: 'hingepoint.case',
+			version: 1,
+			beam: {
+				spans: [6, 6],
+				supports: ['pin', 'pin', 'pin'],
+				section: { designation: 'UB 305x165x40' },
+				grade: 'S275',
+				selfWeight: false,
+				restraint: { lateral: 'ends-only', loadHeight: 'top-flange' }
+			},
+			loads: [
+				{ kind: 'uniform', from: 0, to: 12, value: 3, action: 'permanent' },
+				{ kind: 'uniform', from: 6, to: 12, value: 5, action: 'imposed' },
+				{ kind: 'point', x: 6.8, value: 23, action: 'temporary' }
+			],
+			factors: { set: 'en1990-6.10ab' }
+		};
+		const parsed = parseCase(json);
+		expect(parsed.ok).toBe(true);
+		if (!parsed.ok) return;
+		const input = buildDesignCheckInput(parsed.value);
+		const out = runDesignChecks(input);
+		const row = out.checks.find((c) => c.id === 'bending')!;
+		expect(out.verdict.route).not.toBe('plastic');
+		const member = describeMember(input.sections[0], input.grades[0]!.fy);
+		const factors = DEFAULT_BASIS.resolveFactors(input.factors, { hasImposed: true });
+		const limit = DEFAULT_BASIS.computeBendingResistance({
+			...member,
+			resistance: factors.resistance,
+			elastic: false
+		});
+		const arrangements = listLoadArrangements({
+			combinations: factors.combinations,
+			spanCount: 2,
+			imposedSpans: [1]
+		});
+		const each = arrangements.map((arrangement) => {
+			const d = applyArrangement({ loads: input.loads, spans: input.beam.spans, arrangement });
+			const r = computeElasticLimitFactor({
+				beam: input.beam,
+				EI: [1, 1],
+				fixedLoads: [],
+				variableLoads: [...d.fixed, ...d.variable],
+				limit: [limit, limit]
+			});
+			return r.status === 'reached' ? 1 / r.factor : 0;
+		});
+		expect(row.utilisation).toBeCloseTo(Math.max(...each), 9);
+		expect(row.utilisation).toBeGreaterThan(0.25);
 	});
 });

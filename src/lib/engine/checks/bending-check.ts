@@ -11,7 +11,7 @@ import {
 	combineMomentPieces,
 	findPieceLimitFactor,
 	fitMomentPieces,
-	type MomentPieces
+	measureMomentRatio
 } from '../elastic/moment-pieces';
 import { splitLoadsBySpan } from '../elastic/element-loads';
 import type { Load } from '../model/types';
@@ -70,7 +70,7 @@ export function describePlasticBending(ctx: CheckContext, g: PlasticArrangement)
 }
 
 type ElasticBendingOptions = { EI: number[]; resistance: number[]; elastic: boolean };
-type Worst = { arr: LoadArrangement; u: number; factor: number | null; x?: number };
+type Worst = { arr: LoadArrangement; factor: number | null; x?: number };
 
 /**
  * Bending row of an elastic route; `resistance` per span, N·mm. Each load group's moment is
@@ -82,45 +82,45 @@ export function checkElasticBending(ctx: CheckContext, o: ElasticBendingOptions)
 	const loadsBySpan = splitLoadsBySpan(ctx.beam, ctx.loads);
 	const grid = buildPieceGrid(ctx.nodes, loadsBySpan);
 	const pieces = groups.map((g) => fitMomentPieces(g.result, grid));
-	const zero = grid.breakpoints.map((bp) => bp.slice(1).map(() => [0, 0, 0, 0]));
-	const factorOf = (fixed: MomentPieces, variable: MomentPieces) => {
-		const f = findPieceLimitFactor(fixed, variable, grid, o.resistance);
-		return f.status === 'reached' ? f : f.status === 'fails-under-fixed' ? f : null;
-	};
-	const inverse = (loads: MomentPieces) => {
-		const f = factorOf(zero, loads);
-		return f && f.status === 'reached' ? 1 / f.factor : 0;
-	};
 	let worst: Worst | null = null;
+	let utilisation = 0;
 	let existing = 0;
 	for (const arr of ctx.arrangements) {
 		const fixedW = groups.map((g) => (g.kind === 'temporary' ? 0 : g.weight(arr)));
-		const allW = groups.map((g) => g.weight(arr));
 		const fixed = combineMomentPieces(pieces, fixedW);
 		const variable = combineMomentPieces(
 			pieces,
-			allW.map((w, i) => w - fixedW[i])
+			groups.map((g, i) => g.weight(arr) - fixedW[i])
 		);
-		const f = factorOf(fixed, variable);
-		const factor = f === null ? null : f.status === 'reached' ? f.factor : 0;
-		const u = inverse(combineMomentPieces(pieces, allW));
-		existing = Math.max(existing, inverse(fixed));
-		const lower = factor !== null && (worst?.factor == null || factor < worst.factor);
-		if (!worst || lower) worst = { arr, u, factor, x: f?.x };
-		worst.u = Math.max(worst.u, u);
+		// |M|/limit is linear in the loads: the utilisations are ratios, with no search.
+		const ratioAt = (t: number) => measureMomentRatio(fixed, variable, t, grid, o.resistance);
+		const underFixed = ratioAt(0).ratio;
+		utilisation = Math.max(utilisation, ratioAt(1).ratio);
+		existing = Math.max(existing, underFixed);
+		// The ratio is convex in the multiplier: below 1 at 0 and at the least factor so far, it
+		// stays below 1 up to there, and this arrangement cannot lower that factor.
+		const least = worst?.factor;
+		if (least != null && underFixed <= 1 && ratioAt(least).ratio < 1) continue;
+		const f = findPieceLimitFactor(fixed, variable, grid, o.resistance);
+		const factor = f.status === 'reached' ? f.factor : f.status === 'fails-under-fixed' ? 0 : null;
+		const x = f.status === 'never' ? undefined : f.x;
+		if (!worst || (factor !== null && (least == null || factor < least))) {
+			worst = { arr, factor, x };
+		}
 	}
-	return describeElasticBending(worst, existing, o.elastic, ctx.basis.words);
+	return describeElasticBending(worst, utilisation, existing, o.elastic, ctx.basis.words);
 }
 
 /**
- * The same row by analysing every arrangement afresh (the former way, kept to check the fast
- * one against in tests).
+ * The same row by analysing every arrangement afresh and searching each one (the former way,
+ * kept to check the fast one against in tests).
  */
 export function checkElasticBendingByReanalysis(
 	ctx: CheckContext,
 	o: ElasticBendingOptions
 ): CheckResult {
 	let worst: Worst | null = null;
+	let utilisation = 0;
 	let existing = 0;
 	for (const arr of ctx.arrangements) {
 		const d = applyArrangement({ loads: ctx.loads, spans: ctx.beam.spans, arrangement: arr });
@@ -139,18 +139,18 @@ export function checkElasticBendingByReanalysis(
 		};
 		const f = run(d.fixed, d.variable);
 		const factor = f.status === 'reached' ? f.factor : f.status === 'fails-under-fixed' ? 0 : null;
-		const u = inverse([...d.fixed, ...d.variable]);
+		utilisation = Math.max(utilisation, inverse([...d.fixed, ...d.variable]));
 		existing = Math.max(existing, inverse(d.fixed));
 		const x = f.status === 'reached' || f.status === 'fails-under-fixed' ? f.x : undefined;
 		const lower = factor !== null && (worst?.factor == null || factor < worst.factor);
-		if (!worst || lower) worst = { arr, u, factor, x };
-		worst.u = Math.max(worst.u, u);
+		if (!worst || lower) worst = { arr, factor, x };
 	}
-	return describeElasticBending(worst, existing, o.elastic, ctx.basis.words);
+	return describeElasticBending(worst, utilisation, existing, o.elastic, ctx.basis.words);
 }
 
 function describeElasticBending(
 	worst: Worst | null,
+	utilisation: number,
 	existing: number,
 	elastic: boolean,
 	words: BasisWords
@@ -161,9 +161,9 @@ function describeElasticBending(
 		label: elastic ? words.labels.elasticFirstYield : words.labels.elasticPlasticSection,
 		clause: elastic ? words.clauses.elasticFirstYield : words.clauses.elasticPlasticSection,
 		level: 'governing',
-		utilisation: worst.u,
+		utilisation,
 		utilisationExisting: existing,
-		pass: worst.u <= 1,
+		pass: utilisation <= 1,
 		multiplierAtCapacity: worst.factor,
 		values: worst.factor === null ? {} : { loadFactor: worst.factor },
 		x: worst.x,
