@@ -12,6 +12,7 @@
  */
 import { lineLoadAt, computeSegmentMoment, type LtbSegment } from './segment-moment';
 import { computeLargestEigenvalue } from './largest-eigenvalue';
+import { prepareSegmentPeak } from './segment-peak';
 
 /** Inputs of {@link computeCriticalMoment}; N, mm. */
 export interface CriticalMomentInput {
@@ -108,10 +109,6 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 	const N = input.terms ?? 12;
 	const largest = input.largestEigenvalue ?? computeLargestEigenvalue;
 	const L = parts[0].length;
-	const loads = parts.flatMap((p) => p.loads);
-	const all: LtbSegment = { length: L, momentStart: 0, momentEnd: 0, loads };
-	const edges = listSubintervalEdges(all, N);
-	const points = listQuadraturePoints(edges);
 	const k = Array.from({ length: N }, (_, i) => ((i + 1) * Math.PI) / L);
 	// Diagonal stiffness (orthogonality of sines: ∫ sₘsₙ = L/2 δₘₙ).
 	const d = [
@@ -119,23 +116,16 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 		...k.map((kn) => ((GIt * kn ** 2 + EIw * kn ** 4) * L) / 2)
 	];
 	const n2 = 2 * N;
-	// sin(kᵢx) and kᵢ²·sin(kᵢx) (u'' of each a-term, up to sign) at each quadrature point, shared
-	// by every loading; made on the first assembly (kept matrices need none).
-	let shapes: { sines: Float64Array[]; curvatures: Float64Array[] } | null = null;
-	const tabulateShapes = () => {
-		const sines: Float64Array[] = [];
-		const curvatures: Float64Array[] = [];
-		for (const p of points) {
-			const s = new Float64Array(N);
-			const ks = new Float64Array(N);
-			for (let i = 0; i < N; i++) {
-				s[i] = Math.sin(k[i] * p.x);
-				ks[i] = k[i] ** 2 * s[i];
-			}
-			sines.push(s);
-			curvatures.push(ks);
-		}
-		return { sines, curvatures };
+	// Each loading is integrated on its own grid (its own kinks), so a part's matrix does not
+	// change when another group's loads move. sin(kᵢx) and kᵢ²·sin(kᵢx) (u'' of each a-term, up
+	// to sign) at each point are made once per grid.
+	const grids = new Map<string, Grid>();
+	const gridOf = (seg: LtbSegment): Grid => {
+		const edges = listSubintervalEdges(seg, N);
+		const key = edges.join(' ');
+		let g = grids.get(key);
+		if (!g) grids.set(key, (g = tabulateGrid(edges, k)));
+		return g;
 	};
 	// Inverse square roots of the diagonal, for the symmetric scaling D^-½ G D^-½.
 	const scale = Float64Array.from(d, (v) => 1 / Math.sqrt(v));
@@ -150,7 +140,7 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 				for (let j = i; j < N; j++) h[i * N + j] += a * s[j];
 			}
 		};
-		const { sines, curvatures } = (shapes ??= tabulateShapes());
+		const { points, sines, curvatures } = gridOf(seg);
 		points.forEach((p, q) => {
 			const m = computeSegmentMoment(seg, p.x);
 			const s = sines[q];
@@ -191,74 +181,83 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 		return g;
 	};
 	// The same inputs give the same matrix to the last bit, so a kept one is as good as new.
-	const grid = input.memo ? JSON.stringify([EIz, GIt, EIw, zg, N, edges]) : '';
+	const stiffness = input.memo ? JSON.stringify([EIz, GIt, EIw, zg, N, L]) : '';
 	const kept = (seg: LtbSegment) => {
 		if (!input.memo) return assemble(seg);
-		const key = `${grid}|${JSON.stringify(seg)}`;
+		const key = `${stiffness}|${JSON.stringify(seg.loads)}|${seg.momentStart}|${seg.momentEnd}`;
 		let g = input.memo.get(key);
 		if (!g) input.memo.set(key, (g = assemble(seg)));
 		return g;
 	};
 	let units: [Float64Array, Float64Array] | null = null;
+	const unitMatrices = () =>
+		(units ??= [
+			kept({ length: L, momentStart: 1, momentEnd: 0, loads: [] }),
+			kept({ length: L, momentStart: 0, momentEnd: 1, loads: [] })
+		]);
 	const matrixOf = (seg: LtbSegment) => {
 		if (seg.loads.length > 0) return kept(seg);
 		// No load inside: the moment is straight between the ends, so the matrix is that of a unit
 		// moment at each end, weighted (most load groups act on a segment only through its ends).
-		units ??= [
-			kept({ length: L, momentStart: 1, momentEnd: 0, loads: [] }),
-			kept({ length: L, momentStart: 0, momentEnd: 1, loads: [] })
-		];
-		const [start, end] = units;
+		const [start, end] = unitMatrices();
 		const g = new Float64Array(start.length);
 		for (let e = 0; e < g.length; e++) g[e] = seg.momentStart * start[e] + seg.momentEnd * end[e];
 		return g;
 	};
-	const sampleAt = [...points.map((p) => p.x), ...edges];
-	const sample = (seg: LtbSegment) =>
-		Float64Array.from(sampleAt, (x) => computeSegmentMoment(seg, x));
-	const keptSamples = (seg: LtbSegment) => {
-		if (!input.memo) return sample(seg);
-		// The points depend only on the grid: kept beside the matrix.
-		const key = `${grid}|samples|${JSON.stringify(seg)}`;
-		let v = input.memo.get(key);
-		if (!v) input.memo.set(key, (v = sample(seg)));
-		return v;
-	};
-	const assembled = parts.map((seg) => ({ g: matrixOf(seg), samples: keptSamples(seg) }));
 	const remember = (name: string, make: () => Float64Array) => {
 		if (!input.memo) return make();
-		const key = `${grid}|${name}`;
+		const key = `${stiffness}|${name}`;
 		let v = input.memo.get(key);
 		if (!v) input.memo.set(key, (v = make()));
 		return v;
 	};
-	const count = sampleAt.length;
-	// One buffer for the weighted sum: the solver copies what it changes.
+	const peak = prepareSegmentPeak(parts);
+	// Parts with loads inside keep their own matrix; the others enter only through the unit
+	// end-moment matrices, with their weighted end moments summed first.
+	const loaded = parts.flatMap((p, i) => (p.loads.length > 0 ? [i] : []));
+	const loadedMatrices = loaded.map((i) => kept(parts[i]));
+	const unloaded = parts.flatMap((p, i) => (p.loads.length > 0 ? [] : [i]));
+	// One buffer for the weighted sum: the solver copies what it changes. The a–a block is
+	// always zero and the rest symmetric, so only the a–b block and one triangle of the b–b
+	// block are summed, then mirrored.
 	const sum = new Float64Array(n2 * n2);
-	// Samples point by point, the parts side by side (one pass over memory per weighting).
-	const nParts = assembled.length;
-	const table = new Float64Array(count * nParts);
-	assembled.forEach((a, i) => a.samples.forEach((v, q) => (table[q * nParts + i] = v)));
-	const peak = (weights: number[]) => {
-		let mMax = 0;
-		for (let q = 0, row = 0; q < count; q++, row += nParts) {
-			let m = 0;
-			for (let i = 0; i < nParts; i++) m += weights[i] * table[row + i];
-			mMax = Math.max(mMax, Math.abs(m));
+	const addTerms = (w: number, a: Float64Array) => {
+		for (let i = 0; i < N; i++) {
+			for (let e = i * n2 + N, end = e + N; e < end; e++) sum[e] += w * a[e];
+			for (let e = (N + i) * n2 + N + i, end = (N + i + 1) * n2; e < end; e++) {
+				sum[e] += w * a[e];
+			}
 		}
-		return mMax;
 	};
 	const solve = (weights: number[]) => {
 		const mMax = peak(weights);
 		if (!(mMax > 0)) return { mMax, mu: NaN };
-		sum.fill(0);
-		for (let i = 0; i < assembled.length; i++) {
-			const w = weights[i];
-			const a = assembled[i].g;
-			if (w !== 0) for (let e = 0; e < sum.length; e++) sum[e] += w * a[e];
+		for (let i = 0; i < N; i++) {
+			sum.fill(0, i * n2 + N, (i + 1) * n2);
+			sum.fill(0, (N + i) * n2 + N + i, (N + i + 1) * n2);
+		}
+		loaded.forEach((p, i) => {
+			if (weights[p] !== 0) addTerms(weights[p], loadedMatrices[i]);
+		});
+		let a = 0;
+		let b = 0;
+		for (const p of unloaded) {
+			a += weights[p] * parts[p].momentStart;
+			b += weights[p] * parts[p].momentEnd;
+		}
+		if (a !== 0 || b !== 0) {
+			const [start, end] = unitMatrices();
+			if (a !== 0) addTerms(a, start);
+			if (b !== 0) addTerms(b, end);
+		}
+		for (let i = 0; i < N; i++) {
+			for (let j = 0; j < N; j++) sum[(N + j) * n2 + i] = sum[i * n2 + N + j];
+			for (let j = i + 1; j < N; j++) sum[(N + j) * n2 + N + i] = sum[(N + i) * n2 + N + j];
 		}
 		return { mMax, mu: largest(sum, n2) };
 	};
+	let partMatrices: Float64Array[] | null = null;
+	let partNorms: number[] | null = null;
 	return {
 		peak,
 		remember,
@@ -272,9 +271,38 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 		largestOf: (segment) => largest(matrixOf(segment), n2),
 		matrixOf,
 		largestOfMatrix: (g) => largest(g, n2),
-		partMatrices: assembled.map(({ g }) => g),
-		partNorms: assembled.map(({ g }) => frobeniusNorm(g))
+		get partMatrices() {
+			return (partMatrices ??= parts.map(matrixOf));
+		},
+		get partNorms() {
+			return (partNorms ??= this.partMatrices.map(frobeniusNorm));
+		}
 	};
+}
+
+/** Quadrature points of one grid with the sine shapes at each. */
+interface Grid {
+	points: QuadraturePoint[];
+	sines: Float64Array[];
+	curvatures: Float64Array[];
+}
+
+function tabulateGrid(edges: number[], k: number[]): Grid {
+	const N = k.length;
+	const points = listQuadraturePoints(edges);
+	const sines: Float64Array[] = [];
+	const curvatures: Float64Array[] = [];
+	for (const p of points) {
+		const s = new Float64Array(N);
+		const ks = new Float64Array(N);
+		for (let i = 0; i < N; i++) {
+			s[i] = Math.sin(k[i] * p.x);
+			ks[i] = k[i] ** 2 * s[i];
+		}
+		sines.push(s);
+		curvatures.push(ks);
+	}
+	return { points, sines, curvatures };
 }
 
 interface QuadraturePoint {

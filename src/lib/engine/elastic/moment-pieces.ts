@@ -35,7 +35,7 @@ export function fitMomentPieces(result: ElasticResult, grid: PieceGrid): MomentP
 }
 
 /** Newton form through u = 0, h/3, 2h/3, h, expanded to monomials in u. */
-function fitCubic(read: (s: number) => number, a: number, h: number): number[] {
+export function fitCubic(read: (s: number) => number, a: number, h: number): number[] {
 	const t = [0, h / 3, (2 * h) / 3, h];
 	const f = t.map((u) => read(a + u));
 	if (h <= 0) return [f[0], 0, 0, 0];
@@ -137,7 +137,7 @@ function measureWithSlope(
  * Root `which` (0 or 1) of a·u² + b·u + c, as listed by the former root finder (a linear or
  * constant equation when a is negligible); NaN where there is none.
  */
-function quadraticRoot(a: number, b: number, c: number, which: number): number {
+export function quadraticRoot(a: number, b: number, c: number, which: number): number {
 	const size = Math.abs(a) + Math.abs(b) + Math.abs(c);
 	if (size === 0) return NaN;
 	if (Math.abs(a) <= 1e-14 * size) return which === 0 && Math.abs(b) > 1e-14 * size ? -c / b : NaN;
