@@ -10,7 +10,7 @@
  * - pass exactly when the multiplier is at least 1;
  * - outside scope the report carries no capacity number anywhere, and no check row says "pass";
  * - the governing capacity curve at a single proposed point load's own position equals the
- *   answer for that load, and its least value is not above it.
+ *   answer for that load, and its least value is not above it (deflection deciding or not).
  * These follow from the definitions in the engine's theory note ("The answer"), not from
  * published tables.
  */
@@ -35,7 +35,9 @@ const beamArb = fc
 		grade: fc.constantFrom('S275', 'S355', 'unknown-old'),
 		restraint: fc.constantFrom('continuous', 'ends-only', undefined),
 		loads: fc.array(loadArb, { minLength: 1, maxLength: 3 }),
-		hoist: fc.option(fc.double({ min: 0.05, max: 0.95, noNaN: true }), { nil: undefined })
+		hoist: fc.option(fc.double({ min: 0.05, max: 0.95, noNaN: true }), { nil: undefined }),
+		// Deflection decides only when the settings say so (the curve must then count it too).
+		deflectionGoverns: fc.boolean()
 	})
 	.filter((o) => !(o.spans.length === 1 && o.left === 'free' && o.right !== 'fixed'));
 
@@ -62,7 +64,8 @@ function build(o: Beam) {
 			grade: o.grade,
 			...(o.restraint ? { restraint: { lateral: o.restraint } } : {})
 		},
-		loads
+		loads,
+		...(o.deflectionGoverns ? { deflectionGoverns: true } : {})
 	};
 }
 

@@ -48,7 +48,7 @@ export function computeGoverningCurve(
 	const shared: DesignRunOptions = {
 		memo: new Map(),
 		bucklingMemo: new Map(),
-		skipInformationCollapse: true
+		verdictOnly: true
 	};
 	// A proposed point load is moved in place (same size, same order), so that at its own position
 	// the run is the answer's own run; without one, a unit trial load is added.

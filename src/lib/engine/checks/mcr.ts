@@ -159,10 +159,7 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 		});
 		for (const load of seg.loads) {
 			if (zg === 0 || load.kind !== 'point') continue;
-			addLoadHeight(
-				k.map((kn) => Math.sin(kn * load.x)),
-				load.value * zg
-			);
+			addLoadHeight(tabulateSines(k[0], load.x, N), load.value * zg);
 		}
 		// Symmetric form D^-½ G D^-½; its largest eigenvalue μ is 1/λcr.
 		const g = new Float64Array(n2 * n2);
@@ -293,16 +290,27 @@ function tabulateGrid(edges: number[], k: number[]): Grid {
 	const sines: Float64Array[] = [];
 	const curvatures: Float64Array[] = [];
 	for (const p of points) {
-		const s = new Float64Array(N);
+		const s = tabulateSines(k[0], p.x, N);
 		const ks = new Float64Array(N);
-		for (let i = 0; i < N; i++) {
-			s[i] = Math.sin(k[i] * p.x);
-			ks[i] = k[i] ** 2 * s[i];
-		}
+		for (let i = 0; i < N; i++) ks[i] = k[i] ** 2 * s[i];
 		sines.push(s);
 		curvatures.push(ks);
 	}
 	return { points, sines, curvatures };
+}
+
+/**
+ * sin(n·k₁·x) for n = 1…N by the recurrence sin((n+1)θ) = 2cos θ·sin(nθ) − sin((n−1)θ): one
+ * sine and one cosine per point instead of N sines (round-off grows only about as n).
+ */
+function tabulateSines(k1: number, x: number, N: number): Float64Array {
+	const s = new Float64Array(N);
+	const theta = k1 * x;
+	const twoCos = 2 * Math.cos(theta);
+	s[0] = Math.sin(theta);
+	if (N > 1) s[1] = twoCos * s[0];
+	for (let n = 2; n < N; n++) s[n] = twoCos * s[n - 1] - s[n - 2];
+	return s;
 }
 
 interface QuadraturePoint {

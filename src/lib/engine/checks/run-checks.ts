@@ -47,8 +47,12 @@ export interface DesignRunOptions {
 	memo?: Map<string, ElasticResult>;
 	/** Buckling energy matrices shared the same way (see `prepareCriticalMoment`). */
 	bucklingMemo?: Map<string, Float64Array>;
-	/** Skip the information-only collapse of the elastic route (nothing reads it). */
-	skipInformationCollapse?: boolean;
+	/**
+	 * Only the verdict is read (the governing curve): what cannot change the allowable multiplier
+	 * or what governs is left out — the information-only collapse, rows that are reported but not
+	 * counted (deflection by default), the design-moment diagram and the characteristic summary.
+	 */
+	verdictOnly?: boolean;
 }
 
 export function runDesignChecks(
@@ -127,7 +131,7 @@ export function runDesignChecks(
 		early,
 		EI,
 		allKnown,
-		informationCollapse: !options.skipInformationCollapse
+		verdictOnly: options.verdictOnly ?? false
 	});
 	const loadFactor =
 		run.route.route === 'plastic' ? (run.collapse?.loadFactor ?? null) : bendingFactor(run.checks);
@@ -140,7 +144,9 @@ export function runDesignChecks(
 		bendingArrangement,
 		collapse: run.collapse,
 		designMoments: run.designMoments ?? null,
-		effects: summariseCharacteristicEffects(ctx.effects, members, allKnown),
+		effects: options.verdictOnly
+			? null
+			: summariseCharacteristicEffects(ctx.effects, members, allKnown),
 		checks: run.checks,
 		verdict
 	};
@@ -183,7 +189,7 @@ function runChecks(
 		early: ScopeDecision;
 		EI: number[];
 		allKnown: boolean;
-		informationCollapse: boolean;
+		verdictOnly: boolean;
 	}
 ): {
 	route: ScopeDecision;
@@ -229,7 +235,7 @@ function runChecks(
 		elasticResistance = resistance;
 		const bending = checkElasticBending(ctx, { EI: o.EI, resistance, elastic });
 		checks.push(bending);
-		if (informationOnly && o.informationCollapse) {
+		if (informationOnly && !o.verdictOnly) {
 			// The collapse is shown for information, for the arrangement that governs bending.
 			const arrangement = ctx.arrangements.find((a) => a.name === bending.arrangement);
 			if (arrangement) collapse = solveCollapseForInformation(ctx, { arrangement, vRd });
@@ -246,9 +252,12 @@ function runChecks(
 		route = { route: 'outside-scope', reasons: [...new Set(ltb.outOfScope)] };
 	}
 	checks.push(...checkBeamWebs(ctx, input.bearing ?? { supports: [], loads: 0 }, segments));
-	if (o.allKnown) checks.push(...checkBeamDeflections(deflectionInput(ctx, input)));
+	const deflection = deflectionInput(ctx, input);
+	if (o.allKnown && (deflection.governing || !o.verdictOnly)) {
+		checks.push(...checkBeamDeflections(deflection));
+	}
 	const designMoments =
-		elasticResistance && route.route !== 'outside-scope'
+		elasticResistance && route.route !== 'outside-scope' && !o.verdictOnly
 			? sampleDesignMoments(ctx, {
 					governing: pickBendingGoverning(checks),
 					checks,
