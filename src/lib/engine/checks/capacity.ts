@@ -46,3 +46,28 @@ export function reduceCapacity(
 	}
 	return out;
 }
+
+/** Allowance on the margin for the static program's tolerance on the field. */
+const MARGIN_ALLOWANCE = 1e-9;
+
+/**
+ * True when a field that carries the fixed loads within (1 − δ) of the full capacity fits the
+ * reduced one too: every reduced segment keeps at least (1 − δ) of the full resistance where it
+ * lies. Such a field proves the fixed loads alone do not fail (static theorem).
+ */
+export function keepsFixedLoadField(
+	full: CapacitySegment[],
+	reduced: CapacitySegment[],
+	margin: number
+): boolean {
+	if (!(margin > MARGIN_ALLOWANCE)) return false;
+	const keep = 1 - margin + MARGIN_ALLOWANCE;
+	return reduced.every((r) =>
+		full.every(
+			(f) =>
+				f.to <= r.from ||
+				f.from >= r.to ||
+				(r.sagging >= keep * f.sagging && r.hogging >= keep * f.hogging)
+		)
+	);
+}

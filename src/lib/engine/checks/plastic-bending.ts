@@ -9,13 +9,14 @@
  * the fixed point is found by the bracketed root search.
  */
 import {
+	measureFixedLoadMargin,
 	shearAt,
 	solveCollapse,
 	solveCollapseLoadFactor,
 	type CollapseResult
 } from '../collapse/index';
 import type { BeamLine, CapacitySegment, Load } from '../model/types';
-import { reduceCapacity } from './capacity';
+import { keepsFixedLoadField, reduceCapacity } from './capacity';
 import type { ResistanceMultipliers } from './basis-types';
 import type { DesignBasis } from './design-basis';
 import type { LoadArrangement } from './load-arrangements';
@@ -104,11 +105,17 @@ export function solvePlasticArrangement(o: PlasticArrangementInput): PlasticArra
 		return { reductions, capacity, result: reductions.length ? solve(o, capacity) : plain };
 	};
 	// The search needs only λ of each trial (G below); the answer is solved and certified in full.
+	let margin: number | undefined;
 	const factorAt = (lambda: number) => {
 		const { reductions, capacity } = reduceAt(lambda);
 		if (reductions.length === 0) return plain.loadFactor;
 		const { beam, fixedLoads, variableLoads } = o;
-		return solveCollapseLoadFactor({ beam, capacity, fixedLoads, variableLoads });
+		margin ??= measureFixedLoadMargin({ beam, capacity: o.capacity, fixedLoads, variableLoads });
+		const fixedLoadsFit = keepsFixedLoadField(o.capacity, capacity, margin);
+		return solveCollapseLoadFactor(
+			{ beam, capacity, fixedLoads, variableLoads },
+			{ fixedLoadsFit }
+		);
 	};
 	if (reduceAt(plain.loadFactor).reductions.length === 0) return pack(plain, o.capacity, []);
 	// G does not increase, so λ* = G(λ*) lies in [G(λ0), λ0]: search from G(λ0) upward.

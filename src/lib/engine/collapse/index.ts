@@ -10,7 +10,7 @@ export type {
 	Hinge,
 	MechanismSummary
 } from './types';
-export { solveCollapse, solveCollapseLoadFactor } from './solve';
+export { measureFixedLoadMargin, solveCollapse, solveCollapseLoadFactor } from './solve';
 export { momentAt, shearAt, type DiagramSource } from './diagram';
 export { validateCollapseProblem } from './validate-problem';
 export { CERTIFY_GAP } from './certified-field';

@@ -72,19 +72,40 @@ function solveLambdaProgram(p: CollapseProblem, fieldTolerance?: number) {
 }
 
 /**
+ * Uniform margin δ of the fixed loads alone: the largest δ for which a field in equilibrium
+ * with them keeps |M| ≤ (1 − δ)·Mp everywhere; negative when they alone exceed the collapse
+ * load, NaN where the program breaks down.
+ */
+export function measureFixedLoadMargin(problem: CollapseProblem): number {
+	assertValidProblem(problem);
+	const { problem: p } = normaliseProblem(problem);
+	try {
+		return findFixedLoadField(p).slack;
+	} catch (e) {
+		if (isNumericalBreakdown(e)) return NaN;
+		throw e;
+	}
+}
+
+/**
  * The collapse load factor alone, without mechanism or certificate, for searches that try many
  * capacities and certify only the last one: 0 when the fixed loads alone fail, null when the
  * variable loads can never cause collapse. Where the programs break down it is the full solve's
  * not-certified factor (0).
+ * @param o.fixedLoadsFit the caller knows a field that carries the fixed loads alone within
+ * this capacity (the margin program is then not needed)
  */
-export function solveCollapseLoadFactor(problem: CollapseProblem): number | null {
+export function solveCollapseLoadFactor(
+	problem: CollapseProblem,
+	o: { fixedLoadsFit?: boolean } = {}
+): number | null {
 	assertValidProblem(problem);
 	if (measureLoadSize(problem.variableLoads) === 0) return null;
 	const { problem: p, scale } = normaliseProblem(problem);
 	try {
 		// The margin program first: a temporary load may relieve what the fixed loads alone
 		// overload, and then the λ program alone would find a λ > 0 for a beam that fails first.
-		if (findFixedLoadField(p).slack < -1e-12) return 0;
+		if (!o.fixedLoadsFit && findFixedLoadField(p).slack < -1e-12) return 0;
 		// Only λ is wanted, and λ settles long before the last rounding-level excess is gone.
 		const { model, sol } = solveLambdaProgram(p, 1e-9);
 		if (sol.status === 'unbounded') return null;
