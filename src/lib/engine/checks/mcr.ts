@@ -130,36 +130,44 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 	// Inverse square roots of the diagonal, for the symmetric scaling D^-½ G D^-½.
 	const scale = Float64Array.from(d, (v) => 1 / Math.sqrt(v));
 	const assemble = (seg: LtbSegment) => {
-		// The two blocks that carry terms, N × N each, filled as one triangle or row by row and
-		// written into the full matrix once at the end (half the writes, in memory order).
+		// Both blocks are sums over the points of a weight times sₚ·sₚᵀ (s = the sines there):
+		// the moment term with the a-terms' kᵢ² taken out of the sum, and the load-height term.
+		// Each is symmetric before that factor, so one triangle of each is summed.
 		const c = new Float64Array(N * N);
 		const h = new Float64Array(N * N);
-		const addLoadHeight = (s: ArrayLike<number>, weight: number) => {
+		const { x, w, sines } = gridOf(seg);
+		for (let q = 0, at = 0; q < x.length; q++, at += N) {
+			// vᵀGv = −2∫M u''φ: u'' brings −kᵢ² on the a-terms.
+			const a = w[q] * computeSegmentMoment(seg, x[q]);
+			const q0 = zg === 0 ? 0 : loadAt(seg, x[q]);
+			const b = w[q] * q0 * zg;
+			if (a === 0 && b === 0) continue;
 			for (let i = 0; i < N; i++) {
-				const a = weight * s[i];
-				for (let j = i; j < N; j++) h[i * N + j] += a * s[j];
-			}
-		};
-		const { points, sines, curvatures } = gridOf(seg);
-		points.forEach((p, q) => {
-			const m = computeSegmentMoment(seg, p.x);
-			const s = sines[q];
-			if (m !== 0) {
-				// vᵀGv = −2∫M u''φ: u'' brings −kᵢ² on the a-terms.
-				const ks = curvatures[q];
-				const wm = p.w * m;
-				for (let i = 0; i < N; i++) {
-					const a = wm * ks[i];
-					const row = i * N;
-					for (let j = 0; j < N; j++) c[row + j] += a * s[j];
+				const si = sines[at + i];
+				const ai = a * si;
+				const bi = b * si;
+				for (let j = i, e = i * N + i; j < N; j++, e++) {
+					const sj = sines[at + j];
+					c[e] += ai * sj;
+					h[e] += bi * sj;
 				}
 			}
-			const q0 = loadAt(seg, p.x);
-			if (zg !== 0 && q0 !== 0) addLoadHeight(s, p.w * q0 * zg);
-		});
+		}
 		for (const load of seg.loads) {
 			if (zg === 0 || load.kind !== 'point') continue;
-			addLoadHeight(tabulateSines(k[0], load.x, N), load.value * zg);
+			const s = tabulateSines(k[0], load.x, N);
+			const b = load.value * zg;
+			for (let i = 0; i < N; i++) {
+				for (let j = i; j < N; j++) h[i * N + j] += b * s[i] * s[j];
+			}
+		}
+		// The moment block gets kᵢ² on its rows: mirror its triangle first.
+		for (let i = 0; i < N; i++) {
+			for (let j = 0; j < i; j++) c[i * N + j] = c[j * N + i];
+		}
+		for (let i = 0; i < N; i++) {
+			const k2 = k[i] ** 2;
+			for (let j = 0; j < N; j++) c[i * N + j] *= k2;
 		}
 		// Symmetric form D^-½ G D^-½; its largest eigenvalue μ is 1/λcr.
 		const g = new Float64Array(n2 * n2);
@@ -277,26 +285,22 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 	};
 }
 
-/** Quadrature points of one grid with the sine shapes at each. */
+/** Quadrature points of one grid (positions, weights) with the sines at each, point by point. */
 interface Grid {
-	points: QuadraturePoint[];
-	sines: Float64Array[];
-	curvatures: Float64Array[];
+	x: Float64Array;
+	w: Float64Array;
+	/** sin(kᵢ·xₚ) at index p·N + i. */
+	sines: Float64Array;
 }
 
 function tabulateGrid(edges: number[], k: number[]): Grid {
 	const N = k.length;
 	const points = listQuadraturePoints(edges);
-	const sines: Float64Array[] = [];
-	const curvatures: Float64Array[] = [];
-	for (const p of points) {
-		const s = tabulateSines(k[0], p.x, N);
-		const ks = new Float64Array(N);
-		for (let i = 0; i < N; i++) ks[i] = k[i] ** 2 * s[i];
-		sines.push(s);
-		curvatures.push(ks);
-	}
-	return { points, sines, curvatures };
+	const x = Float64Array.from(points, (p) => p.x);
+	const w = Float64Array.from(points, (p) => p.w);
+	const sines = new Float64Array(points.length * N);
+	points.forEach((p, q) => sines.set(tabulateSines(k[0], p.x, N), q * N));
+	return { x, w, sines };
 }
 
 /**
