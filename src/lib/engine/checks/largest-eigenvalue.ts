@@ -8,7 +8,7 @@
 
 /**
  * Largest eigenvalue of a symmetric n×n matrix.
- * @param a row-major entries (length n·n); not modified
+ * @param a row-major entries (length n·n); only the lower triangle is read, and not modified
  * @example
  * computeLargestEigenvalue(Float64Array.from([2, 1, 1, 2]), 2) // 3
  */
@@ -41,6 +41,7 @@ function reduceToTridiagonal(a: Float64Array, n: number): { d: Float64Array; e: 
 		};
 	}
 	const { m, d, e, v, p } = scratch;
+	// Only the lower triangle is read and kept (the matrix stays symmetric throughout).
 	m.set(a);
 	d.fill(0);
 	e.fill(0);
@@ -65,27 +66,33 @@ function reduceToTridiagonal(a: Float64Array, n: number): { d: Float64Array; e: 
 		for (let i = k + 1; i < n; i++) vv += v[i] * v[i];
 		if (vv === 0) continue;
 		const beta = 2 / vv;
-		// p = β·A v, q = p − (β·vᵀp/2)·v, A ← A − v qᵀ − q vᵀ on the trailing block.
-		let vp = 0;
+		// p = β·A v from the lower triangle, row by row (each entry below the diagonal serves
+		// both its row and its column), then q = p − (β·vᵀp/2)·v.
+		for (let i = k + 1; i < n; i++) p[i] = 0;
 		for (let i = k + 1; i < n; i++) {
 			const row = i * n;
-			let s = 0;
-			for (let j = k + 1; j < n; j++) s += m[row + j] * v[j];
-			p[i] = beta * s;
+			const vi = v[i];
+			let s = m[row + i] * vi;
+			for (let j = k + 1; j < i; j++) {
+				const x = m[row + j];
+				s += x * v[j];
+				p[j] += x * vi;
+			}
+			p[i] += s;
+		}
+		let vp = 0;
+		for (let i = k + 1; i < n; i++) {
+			p[i] *= beta;
 			vp += v[i] * p[i];
 		}
 		const half = (beta * vp) / 2;
 		for (let i = k + 1; i < n; i++) p[i] -= half * v[i];
-		// Lower triangle only (the matrix stays symmetric), mirrored for the next product.
+		// A ← A − v qᵀ − q vᵀ on the lower triangle of the trailing block.
 		for (let i = k + 1; i < n; i++) {
 			const row = i * n;
 			const vi = v[i];
 			const pi = p[i];
-			for (let j = k + 1; j <= i; j++) {
-				const x = m[row + j] - (vi * p[j] + pi * v[j]);
-				m[row + j] = x;
-				m[j * n + i] = x;
-			}
+			for (let j = k + 1; j <= i; j++) m[row + j] -= vi * p[j] + pi * v[j];
 		}
 	}
 	if (n >= 2) {

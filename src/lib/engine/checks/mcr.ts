@@ -226,21 +226,18 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 	// always zero and the rest symmetric, so only the a–b block and one triangle of the b–b
 	// block are summed, then mirrored.
 	const sum = new Float64Array(n2 * n2);
+	// The lower triangle holds both blocks row by row: the b-rows' a–b part, then their b–b part
+	// up to the diagonal. The default solver reads no more; another one gets the mirror too.
 	const addTerms = (w: number, a: Float64Array) => {
-		for (let i = 0; i < N; i++) {
-			for (let e = i * n2 + N, end = e + N; e < end; e++) sum[e] += w * a[e];
-			for (let e = (N + i) * n2 + N + i, end = (N + i + 1) * n2; e < end; e++) {
-				sum[e] += w * a[e];
-			}
+		for (let r = 0; r < N; r++) {
+			for (let e = (N + r) * n2, end = e + N + r + 1; e < end; e++) sum[e] += w * a[e];
 		}
 	};
+	const mirror = input.largestEigenvalue !== undefined;
 	const solve = (weights: number[]) => {
 		const mMax = peak(weights);
 		if (!(mMax > 0)) return { mMax, mu: NaN };
-		for (let i = 0; i < N; i++) {
-			sum.fill(0, i * n2 + N, (i + 1) * n2);
-			sum.fill(0, (N + i) * n2 + N + i, (N + i + 1) * n2);
-		}
+		for (let r = 0; r < N; r++) sum.fill(0, (N + r) * n2, (N + r) * n2 + N + r + 1);
 		loaded.forEach((p, i) => {
 			if (weights[p] !== 0) addTerms(weights[p], loadedMatrices[i]);
 		});
@@ -255,9 +252,8 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 			if (a !== 0) addTerms(a, start);
 			if (b !== 0) addTerms(b, end);
 		}
-		for (let i = 0; i < N; i++) {
-			for (let j = 0; j < N; j++) sum[(N + j) * n2 + i] = sum[i * n2 + N + j];
-			for (let j = i + 1; j < N; j++) sum[(N + j) * n2 + N + i] = sum[(N + i) * n2 + N + j];
+		for (let i = 0; mirror && i < n2; i++) {
+			for (let j = 0; j < i; j++) sum[j * n2 + i] = sum[i * n2 + j];
 		}
 		return { mMax, mu: largest(sum, n2) };
 	};
