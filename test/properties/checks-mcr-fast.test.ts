@@ -10,9 +10,10 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { computeLargestEigenvalue } from '../../src/lib/engine/checks/largest-eigenvalue';
 import { prepareCriticalMoment } from '../../src/lib/engine/checks/mcr';
-import type { LtbSegment, SegmentLoad } from '../../src/lib/engine/checks/segment-moment';
+import type { LtbSegment } from '../../src/lib/engine/checks/segment-moment';
 import { computeSymmetricEigenvalues } from '../../src/lib/engine/checks/symmetric-eigen';
 import { expectRel } from '../support/expect-rel';
+import { arbitrarySegmentLoad } from '../support/segment-loads';
 
 const jacobiLargest = (a: Float64Array, n: number) => computeSymmetricEigenvalues(a, n).at(-1) ?? 0;
 
@@ -39,27 +40,6 @@ const matrix = fc
 		return { a, n };
 	});
 
-const load = (L: number) =>
-	fc.oneof(
-		fc
-			.tuple(fc.double({ min: 0.01, max: 0.99, noNaN: true }), fc.integer({ min: -50, max: 80 }))
-			.map(([t, kN]): SegmentLoad => ({ kind: 'point', x: t * L, value: kN * 1e3 })),
-		fc
-			.tuple(
-				fc.double({ min: 0, max: 0.5, noNaN: true }),
-				fc.double({ min: 0.5, max: 1, noNaN: true }),
-				fc.integer({ min: -5, max: 20 }),
-				fc.integer({ min: -5, max: 20 })
-			)
-			.map(([a, b, s, e]): SegmentLoad => ({
-				kind: 'line',
-				from: a * L,
-				to: b * L,
-				start: s,
-				end: e
-			}))
-	);
-
 const segmentCase = fc.integer({ min: 1500, max: 12000 }).chain((L) =>
 	fc.record({
 		L: fc.constant(L),
@@ -67,7 +47,7 @@ const segmentCase = fc.integer({ min: 1500, max: 12000 }).chain((L) =>
 			fc.record({
 				m0: fc.integer({ min: -200, max: 200 }),
 				m1: fc.integer({ min: -200, max: 200 }),
-				loads: fc.array(load(L), { maxLength: 3 })
+				loads: fc.array(arbitrarySegmentLoad(L), { maxLength: 3 })
 			}),
 			{ minLength: 1, maxLength: 4 }
 		),

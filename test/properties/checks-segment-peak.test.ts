@@ -11,32 +11,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { prepareSegmentPeak } from '../../src/lib/engine/checks/segment-peak';
-import {
-	computeSegmentMoment,
-	type LtbSegment,
-	type SegmentLoad
-} from '../../src/lib/engine/checks/segment-moment';
-
-const load = (L: number) =>
-	fc.oneof(
-		fc
-			.tuple(fc.double({ min: 0, max: 1, noNaN: true }), fc.integer({ min: -50, max: 80 }))
-			.map(([t, kN]): SegmentLoad => ({ kind: 'point', x: t * L, value: kN * 1e3 })),
-		fc
-			.tuple(
-				fc.double({ min: 0, max: 0.6, noNaN: true }),
-				fc.double({ min: 0.4, max: 1, noNaN: true }),
-				fc.integer({ min: -5, max: 20 }),
-				fc.integer({ min: -5, max: 20 })
-			)
-			.map(([a, b, s, e]): SegmentLoad => ({
-				kind: 'line',
-				from: Math.min(a, b) * L,
-				to: Math.max(a, b) * L,
-				start: s,
-				end: e
-			}))
-	);
+import { computeSegmentMoment, type LtbSegment } from '../../src/lib/engine/checks/segment-moment';
+import { arbitrarySegmentLoad } from '../support/segment-loads';
 
 const segmentCase = fc.integer({ min: 500, max: 12000 }).chain((L) =>
 	fc.record({
@@ -45,7 +21,7 @@ const segmentCase = fc.integer({ min: 500, max: 12000 }).chain((L) =>
 			fc.record({
 				m0: fc.integer({ min: -200, max: 200 }),
 				m1: fc.integer({ min: -200, max: 200 }),
-				loads: fc.array(load(L), { maxLength: 4 })
+				loads: fc.array(arbitrarySegmentLoad(L, 0), { maxLength: 4 })
 			}),
 			{ minLength: 1, maxLength: 5 }
 		),

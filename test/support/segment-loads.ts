@@ -1,0 +1,32 @@
+/**
+ * Random loads inside a buckling segment of length L (invented demo data for property tests):
+ * point loads of −50…80 kN and linearly varying line loads of −5…20 N/mm.
+ * @param reach share of L from each end a point load may come (0 lets it sit on an end)
+ */
+import fc from 'fast-check';
+import type { SegmentLoad } from '../../src/lib/engine/checks/segment-moment';
+
+export function arbitrarySegmentLoad(L: number, reach = 0.01): fc.Arbitrary<SegmentLoad> {
+	return fc.oneof(
+		fc
+			.tuple(
+				fc.double({ min: reach, max: 1 - reach, noNaN: true }),
+				fc.integer({ min: -50, max: 80 })
+			)
+			.map(([t, kN]): SegmentLoad => ({ kind: 'point', x: t * L, value: kN * 1e3 })),
+		fc
+			.tuple(
+				fc.double({ min: 0, max: 0.5, noNaN: true }),
+				fc.double({ min: 0.5, max: 1, noNaN: true }),
+				fc.integer({ min: -5, max: 20 }),
+				fc.integer({ min: -5, max: 20 })
+			)
+			.map(([a, b, s, e]): SegmentLoad => ({
+				kind: 'line',
+				from: a * L,
+				to: b * L,
+				start: s,
+				end: e
+			}))
+	);
+}
