@@ -117,8 +117,7 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 	];
 	const n2 = 2 * N;
 	// Each loading is integrated on its own grid (its own kinks), so a part's matrix does not
-	// change when another group's loads move. sin(kᵢx) and kᵢ²·sin(kᵢx) (u'' of each a-term, up
-	// to sign) at each point are made once per grid.
+	// change when another group's loads move. The sines at its points are made once per grid.
 	const grids = new Map<string, Grid>();
 	const gridOf = (seg: LtbSegment): Grid => {
 		const edges = listSubintervalEdges(seg, N);
@@ -223,11 +222,10 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 	const loadedMatrices = loaded.map((i) => kept(parts[i]));
 	const unloaded = parts.flatMap((p, i) => (p.loads.length > 0 ? [] : [i]));
 	// One buffer for the weighted sum: the solver copies what it changes. The a–a block is
-	// always zero and the rest symmetric, so only the a–b block and one triangle of the b–b
-	// block are summed, then mirrored.
+	// always zero and the rest symmetric, so only the lower triangle is summed, row by row: each
+	// b-row's a–b part, then its b–b part up to the diagonal. The default solver reads no more;
+	// another one (the tests' full Jacobi solve) gets the mirror too.
 	const sum = new Float64Array(n2 * n2);
-	// The lower triangle holds both blocks row by row: the b-rows' a–b part, then their b–b part
-	// up to the diagonal. The default solver reads no more; another one gets the mirror too.
 	const addTerms = (w: number, a: Float64Array) => {
 		for (let r = 0; r < N; r++) {
 			for (let e = (N + r) * n2, end = e + N + r + 1; e < end; e++) sum[e] += w * a[e];
