@@ -27,6 +27,14 @@ export interface WorstArrangement<T> {
 const TOLERANCE = 1e-6;
 
 /**
+ * An arrangement is skipped only below 1 at the best multiplier so far times this: its root then
+ * lies so far above that its search, which may stop up to the tolerance below the root, could
+ * not return less. The answer is the least search result over all arrangements, whatever the
+ * order they are met in (a pruned and an exhaustive search agree to the last bit).
+ */
+const SKIP_ABOVE = 1 + 2 * TOLERANCE;
+
+/**
  * Worst case over arrangements (throws on an empty list: there is always one arrangement).
  * @example
  * const u = (a: LoadArrangement, t: number) => ({ utilisation: 0.3 + 0.5 * t, detail: null });
@@ -50,7 +58,8 @@ export function findWorstArrangement<T>(
 	let multiplier: number | null = null;
 	for (const f of [...first].sort((a, b) => a.estimate - b.estimate)) {
 		// u does not fall once past 1, so u(best) < 1 means this root lies beyond the best one.
-		if (multiplier !== null && evaluate(f.arrangement, multiplier).utilisation < 1) continue;
+		const above = multiplier === null ? null : multiplier * SKIP_ABOVE;
+		if (above !== null && evaluate(f.arrangement, above).utilisation < 1) continue;
 		const m = findMultiplierAtCapacity({
 			utilisation: (t) => evaluate(f.arrangement, t).utilisation,
 			tolerance: TOLERANCE,
@@ -78,8 +87,8 @@ export type ArrangementBound = (arrangement: LoadArrangement, t: number) => numb
  * The same answer as {@link findWorstArrangement}, evaluating only the arrangements whose bound
  * leaves them a chance: the worst utilisation at the design loads and under the fixed loads
  * alone are the largest evaluated ones once every other bound is below them (earliest in list
- * order on a tie, as there), and an arrangement whose bound at the best multiplier so far is
- * below 1 is skipped exactly as one whose utilisation there is below 1.
+ * order on a tie, as there), and an arrangement whose bound just above the best multiplier so
+ * far is below 1 is skipped exactly as one whose utilisation there is below 1.
  */
 export function findWorstArrangementBounded<T>(
 	arrangements: LoadArrangement[],
@@ -150,8 +159,9 @@ export function findWorstArrangementBounded<T>(
 	for (const i of failsUnderFixed ? [] : [...known, ...rest]) {
 		const arrangement = arrangements[i];
 		if (multiplier !== null) {
-			if (bound(arrangement, multiplier) < 1) continue;
-			if (evaluate(arrangement, multiplier).utilisation < 1) continue;
+			const above = multiplier * SKIP_ABOVE;
+			if (bound(arrangement, above) < 1) continue;
+			if (evaluate(arrangement, above).utilisation < 1) continue;
 		}
 		const e = estimate(i);
 		const m = findMultiplierAtCapacity({
