@@ -12,25 +12,15 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { prepareSegmentPeak } from '../../src/lib/engine/checks/segment-peak';
 import { computeSegmentMoment, type LtbSegment } from '../../src/lib/engine/checks/segment-moment';
-import { arbitrarySegmentLoad } from '../support/segment-loads';
+import { arbitrarySegmentParts } from '../support/segment-loads';
 
-const segmentCase = fc.integer({ min: 500, max: 12000 }).chain((L) =>
-	fc.record({
-		L: fc.constant(L),
-		parts: fc.array(
-			fc.record({
-				m0: fc.integer({ min: -200, max: 200 }),
-				m1: fc.integer({ min: -200, max: 200 }),
-				loads: fc.array(arbitrarySegmentLoad(L, 0), { maxLength: 4 })
-			}),
-			{ minLength: 1, maxLength: 5 }
-		),
-		weights: fc.array(fc.constantFrom(0, 0.9, 1, 1.35, 1.5, -0.7, 3.3), {
-			minLength: 5,
-			maxLength: 5
-		})
+const segmentCase = fc.record({
+	parts: arbitrarySegmentParts({ minLength: 500, maxParts: 5, maxLoads: 4, reach: 0 }),
+	weights: fc.array(fc.constantFrom(0, 0.9, 1, 1.35, 1.5, -0.7, 3.3), {
+		minLength: 5,
+		maxLength: 5
 	})
-);
+});
 
 /** Largest shear any weighting can give: end-moment slope plus every load, N. */
 function shearBound(parts: LtbSegment[], weights: number[]): number {
@@ -51,17 +41,13 @@ describe('largest |M| of a segment from exact cubic pieces', () => {
 	it('matches dense readings of the moment on random segments and weights', () => {
 		fc.assert(
 			fc.property(segmentCase, (c) => {
-				const parts: LtbSegment[] = c.parts.map((p) => ({
-					length: c.L,
-					momentStart: p.m0 * 1e6,
-					momentEnd: p.m1 * 1e6,
-					loads: p.loads
-				}));
+				const parts = c.parts;
+				const L = parts[0].length;
 				const weights = parts.map((_, i) => c.weights[i]);
 				const peak = prepareSegmentPeak(parts)(weights);
 				const steps = 20000;
 				let dense = 0;
-				const xs = Array.from({ length: steps + 1 }, (_, k) => (c.L * k) / steps);
+				const xs = Array.from({ length: steps + 1 }, (_, k) => (L * k) / steps);
 				for (const p of parts) for (const l of p.loads) xs.push(l.kind === 'point' ? l.x : l.from);
 				for (const x of xs) {
 					let m = 0;
@@ -70,7 +56,7 @@ describe('largest |M| of a segment from exact cubic pieces', () => {
 				}
 				const scale = 1 + dense;
 				expect(peak).toBeGreaterThanOrEqual(dense - 1e-9 * scale);
-				const gap = (shearBound(parts, weights) * c.L) / steps / 2;
+				const gap = (shearBound(parts, weights) * L) / steps / 2;
 				expect(peak).toBeLessThanOrEqual(dense + gap + 1e-9 * scale);
 			}),
 			{ numRuns: 300 }

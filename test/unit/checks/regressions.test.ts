@@ -5,6 +5,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseCase } from '../../../src/lib/engine/case/parse-case';
+import type { CaseModel } from '../../../src/lib/engine/case/types';
 import { buildDesignCheckInput } from '../../../src/lib/engine/checks/from-case';
 import { arrangementSelection } from '../../../src/lib/engine/checks/linear-arrangements';
 import { runDesignChecks } from '../../../src/lib/engine/checks/run-checks';
@@ -14,6 +15,16 @@ import { applyArrangement } from '../../../src/lib/engine/checks/factor-loads';
 import { listLoadArrangements } from '../../../src/lib/engine/checks/load-arrangements';
 import { describeMember } from '../../../src/lib/engine/checks/member';
 import { computeElasticLimitFactor } from '../../../src/lib/engine/elastic/index';
+
+/** The design check with the pruned arrangement search, or with every arrangement evaluated. */
+function runWithSearch(value: CaseModel, exhaustive: boolean) {
+	arrangementSelection.exhaustive = exhaustive;
+	try {
+		return runDesignChecks(buildDesignCheckInput(value));
+	} finally {
+		arrangementSelection.exhaustive = false;
+	}
+}
 
 const load = (name: string): unknown =>
 	JSON.parse(readFileSync(`test/fixtures/cases/${name}.json`, 'utf8'));
@@ -85,17 +96,10 @@ describe('buckling of a segment the existing loads already overload', () => {
 		expect(parsed.ok).toBe(true);
 		if (!parsed.ok) return;
 		for (const exhaustive of [false, true]) {
-			arrangementSelection.exhaustive = exhaustive;
-			try {
-				const ltb = runDesignChecks(buildDesignCheckInput(parsed.value)).checks.filter(
-					(c) => c.id === 'ltb'
-				);
-				expect(ltb.some((row) => (row.utilisationExisting ?? 0) >= 1)).toBe(true);
-				for (const row of ltb) {
-					if ((row.utilisationExisting ?? 0) >= 1) expect(row.multiplierAtCapacity).toBe(0);
-				}
-			} finally {
-				arrangementSelection.exhaustive = false;
+			const ltb = runWithSearch(parsed.value, exhaustive).checks.filter((c) => c.id === 'ltb');
+			expect(ltb.some((row) => (row.utilisationExisting ?? 0) >= 1)).toBe(true);
+			for (const row of ltb) {
+				if ((row.utilisationExisting ?? 0) >= 1) expect(row.multiplierAtCapacity).toBe(0);
 			}
 		}
 	});
@@ -191,16 +195,9 @@ describe('multiplier of a check over every arrangement', () => {
 		const parsed = parseCase(json);
 		expect(parsed.ok).toBe(true);
 		if (!parsed.ok) return;
-		const multipliers = [false, true].map((exhaustive) => {
-			arrangementSelection.exhaustive = exhaustive;
-			try {
-				return runDesignChecks(buildDesignCheckInput(parsed.value)).checks.map(
-					(c) => c.multiplierAtCapacity
-				);
-			} finally {
-				arrangementSelection.exhaustive = false;
-			}
-		});
+		const multipliers = [false, true].map((exhaustive) =>
+			runWithSearch(parsed.value, exhaustive).checks.map((c) => c.multiplierAtCapacity)
+		);
 		expect(multipliers[0]).toEqual(multipliers[1]);
 	});
 });
