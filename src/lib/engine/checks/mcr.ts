@@ -63,7 +63,10 @@ export function computeCriticalMoment(input: CriticalMomentInput): CriticalMomen
 export interface CriticalMomentParts extends Omit<CriticalMomentInput, 'segment'> {
 	/** Loadings of the same segment (same length); the buckling state is Σ wᵢ·partᵢ. */
 	parts: LtbSegment[];
-	/** Largest eigenvalue of a symmetric matrix (tests pass the full Jacobi solve to compare). */
+	/**
+	 * Largest eigenvalue of a symmetric matrix given by its lower triangle, as
+	 * `computeLargestEigenvalue` reads it (tests pass the full Jacobi solve to compare).
+	 */
 	largestEigenvalue?: (a: Float64Array, n: number) => number;
 	/**
 	 * Matrices already assembled, by stiffness, quadrature grid and loading (runs on the same beam
@@ -223,15 +226,13 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 	const unloaded = parts.flatMap((p, i) => (p.loads.length > 0 ? [] : [i]));
 	// One buffer for the weighted sum: the solver copies what it changes. The a–a block is
 	// always zero and the rest symmetric, so only the lower triangle is summed, row by row: each
-	// b-row's a–b part, then its b–b part up to the diagonal. The default solver reads no more;
-	// another one (the tests' full Jacobi solve) gets the mirror too.
+	// b-row's a–b part, then its b–b part up to the diagonal. The solver reads no more.
 	const sum = new Float64Array(n2 * n2);
 	const addTerms = (w: number, a: Float64Array) => {
 		for (let r = 0; r < N; r++) {
 			for (let e = (N + r) * n2, end = e + N + r + 1; e < end; e++) sum[e] += w * a[e];
 		}
 	};
-	const mirror = input.largestEigenvalue !== undefined;
 	const solve = (weights: number[]) => {
 		const mMax = peak(weights);
 		if (!(mMax > 0)) return { mMax, mu: NaN };
@@ -249,9 +250,6 @@ export function prepareCriticalMoment(input: CriticalMomentParts): PreparedCriti
 			const [start, end] = unitMatrices();
 			if (a !== 0) addTerms(a, start);
 			if (b !== 0) addTerms(b, end);
-		}
-		for (let i = 0; mirror && i < n2; i++) {
-			for (let j = 0; j < i; j++) sum[j * n2 + i] = sum[i * n2 + j];
 		}
 		return { mMax, mu: largest(sum, n2) };
 	};

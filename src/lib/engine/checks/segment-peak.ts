@@ -4,7 +4,7 @@
  * is a cubic, since its line loads are linear; so is any weighted sum, and its largest |M| on a
  * piece lies at an end or where the shear is zero (a root of a quadratic).
  */
-import { fitCubic, quadraticRoot } from '../elastic/moment-pieces';
+import { buildPieceGrid, fitCubic, quadraticRoot } from '../elastic/moment-pieces';
 import { computeSegmentMoment, type LtbSegment } from './segment-moment';
 
 /**
@@ -57,22 +57,15 @@ export function prepareSegmentPeak(parts: LtbSegment[]): (weights: ArrayLike<num
 }
 
 /**
- * Ends, point loads and ends of line loads of every part, sorted; a break within round-off of
- * another is merged (the moment is continuous, and a piece that short cannot be fitted).
+ * Ends, point loads and ends of line loads of every part, sorted, breaks within round-off of
+ * another merged: the elastic pieces' own grid, for a single span of the segment's length.
  */
 function listBreaks(parts: LtbSegment[]): number[] {
 	const L = parts[0]?.length ?? 0;
-	const xs = new Set<number>([0, L]);
-	for (const p of parts) {
-		for (const l of p.loads) {
-			if (l.kind === 'point') xs.add(l.x);
-			else {
-				xs.add(l.from);
-				xs.add(l.to);
-			}
-		}
-	}
-	const tol = 1e-9 * L;
-	const sorted = [...xs].filter((x) => x >= 0 && x <= L).sort((a, b) => a - b);
-	return sorted.filter((x, i) => x === L || i === 0 || (x - sorted[i - 1] > tol && L - x > tol));
+	const loads = parts.flatMap((p) =>
+		p.loads.map((l) =>
+			l.kind === 'point' ? { kind: l.kind, a: l.x } : { kind: l.kind, a: l.from, b: l.to }
+		)
+	);
+	return buildPieceGrid([0, L], [loads]).breakpoints[0];
 }
